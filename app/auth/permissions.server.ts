@@ -1,0 +1,90 @@
+import { and, eq } from "drizzle-orm";
+import { redirect } from "react-router";
+import { getDb } from "~/db/client.server";
+import { clubs, layouts, memberships, users, type Role } from "~/db/schema";
+import { canSeeLayout, roleAllows } from "~/lib/roles";
+import { getSession } from "./session.server";
+
+export type SessionUser = { id: string; email: string; name: string };
+
+/** The signed-in user, or null. */
+export async function getUser(request: Request): Promise<SessionUser | null> {
+  const session = await getSession(request);
+  const userId = session.get("userId");
+  if (!userId) return null;
+  const db = await getDb();
+  const [user] = await db
+    .select({ id: users.id, email: users.email, name: users.name })
+    .from(users)
+    .where(eq(users.id, userId));
+  return user ?? null;
+}
+
+/**
+ * The signed-in user; otherwise pages redirect to sign-in and API routes answer 401.
+ */
+export async function requireUser(request: Request, opts: { api?: boolean } = {}): Promise<SessionUser> {
+  const user = await getUser(request);
+  if (user) return user;
+  if (opts.api) throw Response.json({ error: "Sign in first." }, { status: 401 });
+  const url = new URL(request.url);
+  throw redirect(`/sign-in?redirectTo=${encodeURIComponent(url.pathname + url.search)}`);
+}
+
+export type ClubAccess = { user: SessionUser; club: { id: string; name: string }; role: Role };
+
+/**
+ * Requires membership of the club (404 when the club does not exist, 403 when the user is not a
+ * member), and with `need = "director"` the director role (403 otherwise).
+ */
+export async function requireClubRole(
+  request: Request,
+  clubId: string | undefined,
+  need: "member" | "director" = "member",
+  opts: { api?: boolean } = {},
+): Promise<ClubAccess> {
+  const user = await requireUser(request, opts);
+  const db = await getDb();
+  const [club] = clubId
+    ? await db.select({ id: clubs.id, name: clubs.name }).from(clubs).where(eq(clubs.id, clubId))
+    : [];
+  if (!club) throw deny(404, "No such club.", opts);
+  const [membership] = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.clubId, club.id), eq(memberships.userId, user.id)));
+  if (!membership) throw deny(403, "You are not a member of this club.", opts);
+  if (need === "director" && !roleAllows(membership.role, "manage")) {
+    throw deny(403, "Only the club's directors can do this.", opts);
+  }
+  return { user, club, role: membership.role };
+}
+
+export type LayoutAccess = ClubAccess & {
+  layout: typeof layouts.$inferSelect;
+};
+
+/**
+ * Requires access to a layout: 404 when it does not exist (or is not published and the user is
+ * not a director: marshals and drivers never learn of drafts), 403 for non-members.
+ */
+export async function requireLayoutAccess(
+  request: Request,
+  layoutId: string | undefined,
+  need: "member" | "director" = "member",
+  opts: { api?: boolean } = {},
+): Promise<LayoutAccess> {
+  const user = await requireUser(request, opts);
+  const db = await getDb();
+  const [layout] = layoutId ? await db.select().from(layouts).where(eq(layouts.id, layoutId)) : [];
+  if (!layout) throw deny(404, "No such layout.", opts);
+  const access = await requireClubRole(request, layout.clubId, need, opts);
+  if (!canSeeLayout(access.role, layout.status)) throw deny(404, "No such layout.", opts);
+  return { ...access, user, layout };
+}
+
+function deny(status: number, message: string, opts: { api?: boolean }) {
+  return opts.api
+    ? Response.json({ error: message }, { status })
+    : new Response(message, { status, statusText: message });
+}

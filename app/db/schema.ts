@@ -1,0 +1,164 @@
+import { sql } from "drizzle-orm";
+import {
+  index,
+  integer,
+  real,
+  sqliteTable,
+  text,
+  uniqueIndex,
+} from "drizzle-orm/sqlite-core";
+
+/** Shared column helpers: a text UUID primary key and millisecond timestamps. */
+const id = () =>
+  text("id")
+    .primaryKey()
+    .$defaultFn(() => crypto.randomUUID());
+const createdAt = () =>
+  integer("created_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(unixepoch() * 1000)`);
+const updatedAt = () =>
+  integer("updated_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(unixepoch() * 1000)`)
+    .$onUpdateFn(() => new Date());
+
+export const ROLES = ["director", "marshal", "driver"] as const;
+export type Role = (typeof ROLES)[number];
+export const LAYOUT_STATUSES = ["draft", "published", "archived"] as const;
+export type LayoutStatus = (typeof LAYOUT_STATUSES)[number];
+
+export const users = sqliteTable("users", {
+  id: id(),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  passwordHash: text("password_hash").notNull(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const clubs = sqliteTable("clubs", {
+  id: id(),
+  name: text("name").notNull(),
+  /** Track guidance set used by the rule checks: "club" or "national". */
+  guidanceSet: text("guidance_set").notNull().default("club"),
+  /** JSON object of per-club overrides of guidance values, by rule id. */
+  guidanceOverrides: text("guidance_overrides").notNull().default("{}"),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const memberships = sqliteTable(
+  "memberships",
+  {
+    id: id(),
+    clubId: text("club_id")
+      .notNull()
+      .references(() => clubs.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("memberships_club_user").on(t.clubId, t.userId)],
+);
+
+export const invitations = sqliteTable(
+  "invitations",
+  {
+    id: id(),
+    clubId: text("club_id")
+      .notNull()
+      .references(() => clubs.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: text("role", { enum: ROLES }).notNull(),
+    /** SHA-256 of the token sent by e-mail; the token itself is never stored. */
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedBy: text("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    acceptedAt: integer("accepted_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("invitations_club").on(t.clubId)],
+);
+
+export const passwordResets = sqliteTable("password_resets", {
+  id: id(),
+  userId: text("user_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  usedAt: integer("used_at", { mode: "timestamp_ms" }),
+  createdAt: createdAt(),
+});
+
+/** Failed sign-ins, kept for the throttle window (by e-mail address and by client address). */
+export const signInFailures = sqliteTable(
+  "sign_in_failures",
+  {
+    id: id(),
+    email: text("email").notNull(),
+    clientAddress: text("client_address"),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("sign_in_failures_email").on(t.email, t.createdAt),
+    index("sign_in_failures_address").on(t.clientAddress, t.createdAt),
+  ],
+);
+
+export const layouts = sqliteTable(
+  "layouts",
+  {
+    id: id(),
+    clubId: text("club_id")
+      .notNull()
+      .references(() => clubs.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    surface: text("surface").notNull().default("dirt"),
+    trackWidth: real("track_width").notNull().default(3),
+    status: text("status", { enum: LAYOUT_STATUSES }).notNull().default("draft"),
+    /** Optimistic concurrency: every save must name the version it started from. */
+    version: integer("version").notNull().default(1),
+    /** Random token of a read-only link a director chose to share; null when not shared. */
+    shareToken: text("share_token").unique(),
+    createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("layouts_club").on(t.clubId)],
+);
+
+/** Each save of a layout's document is a new row; the layout's `version` names the latest. */
+export const layoutVersions = sqliteTable(
+  "layout_versions",
+  {
+    id: id(),
+    layoutId: text("layout_id")
+      .notNull()
+      .references(() => layouts.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    /** The layout document as JSON text in the product's own format (docs/layout-format.md). */
+    document: text("document").notNull(),
+    note: text("note"),
+    createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("layout_versions_number").on(t.layoutId, t.number)],
+);
+
+/** Uploaded files (background photos, CSV) stored through app/storage. */
+export const files = sqliteTable("files", {
+  id: id(),
+  clubId: text("club_id")
+    .notNull()
+    .references(() => clubs.id, { onDelete: "cascade" }),
+  storageKey: text("storage_key").notNull().unique(),
+  contentType: text("content_type").notNull(),
+  size: integer("size").notNull(),
+  originalName: text("original_name").notNull(),
+  createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+  createdAt: createdAt(),
+});

@@ -1,0 +1,26 @@
+import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
+
+export default [
+  index("routes/home.tsx"),
+  route("sign-up", "routes/sign-up.tsx"),
+  route("sign-in", "routes/sign-in.tsx"),
+  route("sign-out", "routes/sign-out.tsx"),
+  route("forgot-password", "routes/forgot-password.tsx"),
+  route("reset-password/:token", "routes/reset-password.tsx"),
+  route("invitations/:token", "routes/invitation.tsx"),
+  route("outbox", "routes/outbox.tsx"),
+
+  // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
+  layout("routes/signed-in-layout.tsx", [
+    route("clubs", "routes/clubs.tsx"),
+    ...prefix("clubs/:clubId", [
+      layout("routes/club-layout.tsx", [
+        index("routes/club-home.tsx"),
+        route("members", "routes/club-members.tsx"),
+        route("layouts/new", "routes/layout-new.tsx"),
+      ]),
+    ]),
+    route("layouts/:layoutId", "routes/layout-page.tsx"),
+    route("layouts/:layoutId/settings", "routes/layout-settings.tsx"),
+  ]),
+] satisfies RouteConfig;

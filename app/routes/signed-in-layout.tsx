@@ -1,0 +1,6 @@
+import { Outlet } from "react-router";
+
+// Placeholder while the guard is being built.
+export default function Page() {
+  return <Outlet />;
+}

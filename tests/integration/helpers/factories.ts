@@ -1,0 +1,52 @@
+import { getDb } from "~/db/client.server";
+import { clubs, layouts, memberships, type LayoutStatus, type Role } from "~/db/schema";
+import { createUser } from "~/auth/users.server";
+import { sessionCookie } from "./requests";
+
+let counter = 0;
+
+/** A user with a known password ("correct horse 1") and a ready session cookie. */
+export async function makeUser(overrides: { email?: string; name?: string; password?: string } = {}) {
+  counter += 1;
+  const password = overrides.password ?? "correct horse 1";
+  const user = await createUser({
+    email: overrides.email ?? `user${counter}-${Date.now()}@example.test`,
+    name: overrides.name ?? `Test User ${counter}`,
+    password,
+  });
+  if (!user) throw new Error("factory: e-mail taken");
+  return { ...user, password, cookie: await sessionCookie(user.id) };
+}
+
+export async function makeClub(directorId: string, name = "Test Valley RC") {
+  const db = await getDb();
+  const [club] = await db.insert(clubs).values({ name }).returning();
+  await db.insert(memberships).values({ clubId: club.id, userId: directorId, role: "director" });
+  return club;
+}
+
+export async function addMember(clubId: string, userId: string, role: Role) {
+  const db = await getDb();
+  await db.insert(memberships).values({ clubId, userId, role });
+}
+
+export async function makeLayout(clubId: string, fields: { name?: string; status?: LayoutStatus } = {}) {
+  const db = await getDb();
+  const [layout] = await db
+    .insert(layouts)
+    .values({ clubId, name: fields.name ?? "Test layout", status: fields.status ?? "draft" })
+    .returning();
+  return layout;
+}
+
+/** A club with one member of each role. */
+export async function makeClubWithRoles() {
+  const director = await makeUser({ name: "Dana Director" });
+  const marshal = await makeUser({ name: "Mo Marshal" });
+  const driver = await makeUser({ name: "Dee Driver" });
+  const outsider = await makeUser({ name: "Otto Outsider" });
+  const club = await makeClub(director.id);
+  await addMember(club.id, marshal.id, "marshal");
+  await addMember(club.id, driver.id, "driver");
+  return { club, director, marshal, driver, outsider };
+}
