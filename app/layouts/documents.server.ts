@@ -1,0 +1,124 @@
+import { and, desc, eq } from "drizzle-orm";
+import { getDb } from "~/db/client.server";
+import { layouts, layoutVersions } from "~/db/schema";
+import { type LayoutDocument, parseLayoutDocument } from "~/lib/layout-document";
+import { starterDocument } from "~/lib/starter-layout";
+
+type LayoutRow = typeof layouts.$inferSelect;
+
+/** Thrown when a save names a version older than the stored one (answered 409 by routes). */
+export class StaleVersionError extends Error {
+  constructor(
+    readonly expected: number,
+    readonly current: number,
+  ) {
+    super(`The layout was saved by someone else meanwhile (you started from version ${expected}, it is now at ${current}).`);
+  }
+}
+
+/**
+ * The layout's latest document. The layout row owns name, surface and track width (they can be
+ * changed from the metadata form), so they are laid over the stored document. A layout that has
+ * never been drawn gets the starter loop.
+ */
+export async function loadLayoutDocument(layout: LayoutRow): Promise<{ document: LayoutDocument; versionNumber: number | null }> {
+  const db = await getDb();
+  const [latest] = await db
+    .select({ document: layoutVersions.document, number: layoutVersions.number })
+    .from(layoutVersions)
+    .where(eq(layoutVersions.layoutId, layout.id))
+    .orderBy(desc(layoutVersions.number))
+    .limit(1);
+  let document: LayoutDocument;
+  if (latest) {
+    const parsed = parseLayoutDocument(latest.document);
+    // A stored document was valid when saved; if a later format change broke it, start over visibly.
+    document = parsed.ok ? parsed.document : starterDocument(layout.name, layout.trackWidth);
+  } else {
+    document = starterDocument(layout.name, layout.trackWidth);
+  }
+  return {
+    document: { ...document, name: layout.name, surface: layout.surface as LayoutDocument["surface"], trackWidth: layout.trackWidth },
+    versionNumber: latest?.number ?? null,
+  };
+}
+
+/** A specific stored version's document, or null. */
+export async function loadVersionDocument(layoutId: string, number: number): Promise<LayoutDocument | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ document: layoutVersions.document })
+    .from(layoutVersions)
+    .where(and(eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, number)));
+  if (!row) return null;
+  const parsed = parseLayoutDocument(row.document);
+  return parsed.ok ? parsed.document : null;
+}
+
+/**
+ * Saves a document as a new version of the layout, only if the layout is still at `baseVersion`
+ * (optimistic concurrency). Updates the row's name, surface and width from the document. All in
+ * one transaction: either both the version and the row change, or nothing does.
+ * @throws StaleVersionError when someone saved meanwhile.
+ */
+export async function saveLayoutDocument(
+  layoutId: string,
+  baseVersion: number,
+  document: LayoutDocument,
+  userId: string,
+  note?: string,
+): Promise<{ version: number }> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const updated = await tx
+      .update(layouts)
+      .set({
+        version: baseVersion + 1,
+        name: document.name,
+        surface: document.surface,
+        trackWidth: document.trackWidth,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(layouts.id, layoutId), eq(layouts.version, baseVersion)))
+      .returning({ version: layouts.version });
+    if (updated.length === 0) {
+      const [row] = await tx.select({ version: layouts.version }).from(layouts).where(eq(layouts.id, layoutId));
+      throw new StaleVersionError(baseVersion, row?.version ?? -1);
+    }
+    await tx.insert(layoutVersions).values({
+      layoutId,
+      number: baseVersion + 1,
+      document: JSON.stringify(document),
+      note: note ?? null,
+      createdBy: userId,
+    });
+    return { version: baseVersion + 1 };
+  });
+}
+
+/** Creates a new draft layout from a document (import). One transaction: row and first version. */
+export async function createLayoutFromDocument(clubId: string, document: LayoutDocument, userId: string) {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [layout] = await tx
+      .insert(layouts)
+      .values({
+        clubId,
+        name: document.name,
+        surface: document.surface,
+        trackWidth: document.trackWidth,
+        status: "draft",
+        version: 1,
+        createdBy: userId,
+      })
+      .returning();
+    await tx.insert(layoutVersions).values({
+      layoutId: layout.id,
+      number: 1,
+      document: JSON.stringify(document),
+      note: "Imported",
+      createdBy: userId,
+    });
+    return layout;
+  });
+}

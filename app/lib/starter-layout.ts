@@ -1,0 +1,26 @@
+import type { LayoutDocument } from "./layout-document";
+
+/**
+ * The loop a new layout starts from: a closed oval (two 30 m straights joined by two 180-degree
+ * turns of radius 8 m), for the 1/10 two-wheel-drive buggy class.
+ */
+export function starterDocument(name: string, trackWidth: number): LayoutDocument {
+  return {
+    format: "loftline-layout",
+    formatVersion: 1,
+    units: "metres-degrees",
+    name,
+    surface: "dirt",
+    trackWidth,
+    start: { x: 0, y: 0, headingDeg: 0 },
+    sections: [
+      { id: "s1", kind: "straight", length: 30 },
+      { id: "t1", kind: "turn", radius: 8, angleDeg: 180, direction: "left" },
+      { id: "s2", kind: "straight", length: 30 },
+      { id: "t2", kind: "turn", radius: 8, angleDeg: 180, direction: "left" },
+    ],
+    marshalPoints: [],
+    carClasses: ["buggy-2wd-10"],
+    guidance: "club",
+  };
+}
