@@ -1,0 +1,100 @@
+import {
+  MaxFileSizeExceededError,
+  MaxFilesExceededError,
+  MaxTotalSizeExceededError,
+  parseFormData,
+  type FileUpload,
+} from "@remix-run/form-data-parser";
+import { eq } from "drizzle-orm";
+import { getDb } from "~/db/client.server";
+import { files } from "~/db/schema";
+import { fileStore } from "./storage.server";
+
+export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+
+export type UploadKind = { field: string; maxBytes: number; types: Record<string, { ext: string; magic?: number[] }> };
+
+/** Site photos: PNG or JPEG, checked by their first bytes as well as the declared type. */
+export const SITE_PHOTO: UploadKind = {
+  field: "photo",
+  maxBytes: MAX_PHOTO_BYTES,
+  types: {
+    "image/png": { ext: "png", magic: [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a] },
+    "image/jpeg": { ext: "jpg", magic: [0xff, 0xd8, 0xff] },
+  },
+};
+
+function fail(status: number, field: string, message: string): Response {
+  return Response.json({ error: message, field, errors: { [field]: [message] } }, { status });
+}
+
+/**
+ * Reads one uploaded file from a multipart request, refusing anything too large (413), of the wrong
+ * type (415) or missing (400), stores it, and records it in the files table.
+ * @returns the stored file's id and content type; throws a JSON Response on bad input.
+ */
+export async function receiveUpload(
+  request: Request,
+  kind: UploadKind,
+  owner: { clubId: string; userId: string },
+): Promise<{ fileId: string; contentType: string; size: number; fields: FormData }> {
+  const declared = Number(request.headers.get("Content-Length") ?? "0");
+  if (declared > kind.maxBytes + 64 * 1024) {
+    throw fail(413, kind.field, `The file is too large: at most ${kind.maxBytes / (1024 * 1024)} MB.`);
+  }
+  if (!(request.headers.get("Content-Type") ?? "").startsWith("multipart/form-data")) {
+    throw fail(400, kind.field, "Send the file as a multipart form upload.");
+  }
+  let upload: { bytes: Uint8Array; type: string; name: string } | undefined;
+  let fields: FormData;
+  try {
+    fields = await parseFormData(request, { maxFileSize: kind.maxBytes, maxFiles: 1 }, async (file: FileUpload) => {
+      if (file.fieldName !== kind.field) return null;
+      upload = { bytes: new Uint8Array(await file.arrayBuffer()), type: file.type, name: file.name };
+      return null;
+    });
+  } catch (err) {
+    if (err instanceof MaxFileSizeExceededError || err instanceof MaxTotalSizeExceededError) {
+      throw fail(413, kind.field, `The file is too large: at most ${kind.maxBytes / (1024 * 1024)} MB.`);
+    }
+    if (err instanceof MaxFilesExceededError) throw fail(400, kind.field, "Send one file at a time.");
+    throw fail(400, kind.field, "The upload could not be read.");
+  }
+  if (!upload || upload.bytes.length === 0) throw fail(400, kind.field, "Choose a file to upload.");
+  const accepted = Object.keys(kind.types).map((t) => t.replace("image/", "").toUpperCase()).join(" or ");
+  const type = kind.types[upload.type];
+  if (!type || (type.magic && !type.magic.every((b, i) => upload!.bytes[i] === b))) {
+    throw fail(415, kind.field, `Only ${accepted} files are accepted.`);
+  }
+  const id = crypto.randomUUID();
+  const storageKey = `${owner.clubId}/${id}.${type.ext}`;
+  await fileStore().put(storageKey, upload.bytes);
+  const db = await getDb();
+  try {
+    await db.insert(files).values({
+      id,
+      clubId: owner.clubId,
+      storageKey,
+      contentType: upload.type,
+      size: upload.bytes.length,
+      originalName: upload.name.slice(0, 200),
+      createdBy: owner.userId,
+    });
+  } catch (err) {
+    await fileStore().delete(storageKey);
+    throw err;
+  }
+  return { fileId: id, contentType: upload.type, size: upload.bytes.length, fields };
+}
+
+/** A stored file's bytes and metadata, or null. */
+export async function readStoredFile(fileId: string) {
+  const db = await getDb();
+  const [row] = await db
+    .select({ clubId: files.clubId, storageKey: files.storageKey, contentType: files.contentType })
+    .from(files)
+    .where(eq(files.id, fileId));
+  if (!row) return null;
+  const bytes = await fileStore().get(row.storageKey);
+  return bytes ? { ...row, bytes } : null;
+}
