@@ -1,0 +1,62 @@
+#!/usr/bin/env bash
+# `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
+# the unit and integration tests (vitest), builds the app and runs the browser tests against it.
+# Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
+set -uo pipefail
+cd "$(dirname "$0")/.."
+
+ensure_chromium() {
+  if [ -x /usr/bin/chromium ]; then
+    return 0
+  fi
+  echo "==> /usr/bin/chromium is missing: installing Debian's chromium with apt-get"
+  local sudo=""
+  if [ "$(id -u)" -ne 0 ]; then
+    if command -v sudo >/dev/null 2>&1; then
+      sudo="sudo"
+    else
+      echo "Not root and no sudo: install chromium yourself (apt-get install -y chromium)." >&2
+      return 1
+    fi
+  fi
+  $sudo apt-get update -q &&
+    DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -q --no-install-recommends chromium
+}
+
+declare -a names=() results=() seconds=()
+stage() {
+  local name="$1"
+  shift
+  echo
+  echo "==> $name"
+  local started=$SECONDS
+  "$@"
+  local code=$?
+  names+=("$name")
+  results+=("$code")
+  seconds+=("$((SECONDS - started))")
+  return "$code"
+}
+
+stage "chromium" ensure_chromium
+stage "unit and integration tests" ./node_modules/.bin/vitest run
+if stage "build" ./node_modules/.bin/react-router build; then
+  stage "browser tests" ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
+else
+  names+=("browser tests")
+  results+=("skipped")
+  seconds+=("0")
+fi
+
+echo
+echo "==> Summary"
+failed=0
+for i in "${!names[@]}"; do
+  case "${results[$i]}" in
+    0) status="passed" ;;
+    skipped) status="skipped (the build failed)"; failed=1 ;;
+    *) status="FAILED (exit ${results[$i]})"; failed=1 ;;
+  esac
+  printf '  %-28s %-28s %4ss\n' "${names[$i]}" "$status" "${seconds[$i]}"
+done
+exit "$failed"
