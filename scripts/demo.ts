@@ -5,7 +5,7 @@
  * the built app on http://localhost:3000, prints the demo accounts, and stops both on Ctrl-C.
  *
  *   npm run demo               keep the existing demo database, bring the demo data back
- *   npm run demo -- --reset    delete the demo database and outbox first and start over
+ *   npm run demo -- --reset    delete the demo database, outbox and uploads first and start over
  */
 import crypto from "node:crypto";
 import fs from "node:fs";
@@ -14,7 +14,7 @@ import { closeDb, getDb, migrateDatabase } from "~/db/client.server";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
 import { DEMO_CLUB_NAME, seedDemoData } from "~/db/demo-data.server";
 import { startFakeSmtp, type FakeSmtp } from "~/mail/fake-smtp.server";
-import { buildApp, startAppServer } from "./lib/app-server";
+import { buildApp, buildIsStale, startAppServer } from "./lib/app-server";
 
 const USAGE = "Usage: npm run demo [-- --reset]";
 const args = process.argv.slice(2);
@@ -43,10 +43,10 @@ if (reset) {
     console.error("--reset only deletes the local demo file; unset DATABASE_URL to use it.");
     process.exit(2);
   }
-  for (const name of ["loftline.db", "loftline.db-wal", "loftline.db-shm", "outbox"]) {
+  for (const name of ["loftline.db", "loftline.db-wal", "loftline.db-shm", "outbox", "files"]) {
     fs.rmSync(path.join(dataDir, name), { recursive: true, force: true });
   }
-  console.log(`Removed the demo database and outbox in ${dataDir}.`);
+  console.log(`Removed the demo database, outbox and uploaded files in ${dataDir}.`);
 }
 
 await migrateDatabase();
@@ -58,8 +58,11 @@ console.log(
     : `The demo club "${DEMO_CLUB_NAME}" is already there; its demo accounts are back to their known passwords.`,
 );
 
-const buildSeconds = buildApp();
-console.log(buildSeconds === null ? "The build is up to date." : `Built the app in ${buildSeconds.toFixed(1)} s.`);
+if (buildIsStale()) console.log("Building the app (a few seconds)...");
+const buildSeconds = buildApp({ quiet: true });
+console.log(
+  buildSeconds === null ? "The build is up to date." : `Built the app in ${buildSeconds.toFixed(1)} s.`,
+);
 
 const smtp = await startSmtp();
 const app = await startAppServer({

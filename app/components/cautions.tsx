@@ -32,7 +32,10 @@ export function Cautions({ compact = false, headingLevel = 2, className = "" }: 
       aria-labelledby={headingId}
       className={`rounded-lg border border-clay-500/40 bg-clay-100/60 text-ink-900 ${compact ? "p-3 text-sm" : "p-5"} ${className}`}
     >
-      <Heading id={headingId} className={`flex items-center gap-2 font-semibold ${compact ? "text-sm" : "text-lg"}`}>
+      <Heading
+        id={headingId}
+        className={`flex items-center gap-2 font-semibold ${compact ? "text-sm" : "text-lg"}`}
+      >
         <WarningMark />
         {CAUTIONS_TITLE}
       </Heading>

@@ -70,14 +70,16 @@ export default function Home({ loaderData }: Route.ComponentProps) {
     <div className="space-y-16 pb-8">
       <section className="grid items-center gap-8 pt-4 lg:grid-cols-[1fr_1.1fr]">
         <div>
-          <p className="text-sm font-semibold tracking-wide text-clay-700 uppercase">For off-road RC racing clubs</p>
+          <p className="text-sm font-semibold tracking-wide text-clay-700 uppercase">
+            For off-road RC racing clubs
+          </p>
           <h1 className="mt-2 text-3xl leading-tight font-bold text-ink-900 sm:text-4xl">
             Plan the track and fly every jump before a shovel moves.
           </h1>
           <p className="mt-4 text-lg text-ink-700">
-            Loftline lets a club&apos;s race director draw a layout to scale, flies each jump for each class of car,
-            and tells the director, the drivers and the marshals where a jump lands into a turn, whether setting the
-            car up in the air is worth it, and where cars will crash.
+            Loftline lets a club&apos;s race director draw a layout to scale, flies each jump for each class
+            of car, and tells the director, the drivers and the marshals where a jump lands into a turn,
+            whether setting the car up in the air is worth it, and where cars will crash.
           </p>
           <div className="mt-6 flex flex-wrap gap-3">
             {loaderData.signedIn ? (
@@ -106,8 +108,8 @@ export default function Home({ loaderData }: Route.ComponentProps) {
         <figure className="rounded-xl border border-sand-200 bg-white p-3 shadow-sm sm:p-5">
           <JumpIllustration className="h-auto w-full" />
           <figcaption className="mt-2 text-center text-xs text-ink-500">
-            A tabletop seen from the side (heights exaggerated): the flight path from the lip, the landing, and the
-            overshoot zone a marshal keeps out of.
+            A tabletop seen from the side (heights exaggerated): the flight path from the lip, the landing,
+            and the overshoot zone a marshal keeps out of.
           </figcaption>
         </figure>
       </section>
@@ -117,8 +119,8 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           One layout, three jobs
         </h2>
         <p className="mt-2 max-w-3xl text-ink-700">
-          Every member has a role in each club they belong to. The race director plans and publishes; marshals and
-          drivers read the published layout, each with what their job needs.
+          Every member has a role in each club they belong to. The race director plans and publishes; marshals
+          and drivers read the published layout, each with what their job needs.
         </p>
         <div className="mt-6 grid gap-4 md:grid-cols-3">
           {ROLES.map((role) => (
@@ -153,8 +155,8 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           ))}
         </ol>
         <p className="mt-4 max-w-3xl text-sm text-ink-500">
-          Signed-out visitors see only this page and the layouts a director chose to share by link. Everything else
-          belongs to the club.
+          Signed-out visitors see only this page and the layouts a director chose to share by link. Everything
+          else belongs to the club.
         </p>
       </section>
 

@@ -10,7 +10,14 @@ import path from "node:path";
 const ROOT = path.resolve(import.meta.dirname, "../..");
 const SERVER_ENTRY = path.join(ROOT, "build/server/index.js");
 /** What the build depends on besides node_modules. */
-const SOURCES = ["app", "public", "package-lock.json", "vite.config.ts", "react-router.config.ts", "tsconfig.json"];
+const SOURCES = [
+  "app",
+  "public",
+  "package-lock.json",
+  "vite.config.ts",
+  "react-router.config.ts",
+  "tsconfig.json",
+];
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;

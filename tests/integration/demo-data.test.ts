@@ -57,14 +57,20 @@ describe("demo data", () => {
     const db = await getDb();
     const marshal = DEMO_ACCOUNTS.find((a) => a.role === "marshal")!;
     const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, marshal.email));
-    await db.update(users).set({ passwordHash: "$2b$10$invalidinvalidinvalidinvalidinvalidinvalidinvalidinva" }).where(eq(users.id, user.id));
+    await db
+      .update(users)
+      .set({ passwordHash: "$2b$10$invalidinvalidinvalidinvalidinvalidinvalidinvalidinva" })
+      .where(eq(users.id, user.id));
     await db.update(memberships).set({ role: "driver" }).where(eq(memberships.userId, user.id));
     expect(await verifyLogin(marshal.email, marshal.password)).toBeNull();
 
     await seedDemoData(db);
 
     expect(await verifyLogin(marshal.email, marshal.password)).not.toBeNull();
-    const [m] = await db.select({ role: memberships.role }).from(memberships).where(eq(memberships.userId, user.id));
+    const [m] = await db
+      .select({ role: memberships.role })
+      .from(memberships)
+      .where(eq(memberships.userId, user.id));
     expect(m.role).toBe("marshal");
   });
 });

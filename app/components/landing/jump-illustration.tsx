@@ -60,7 +60,10 @@ const ON_FACE = {
 /** A buggy seen from the side, centred on its centre of mass, 4 px above the path. */
 function Car({ x, y, angle, faded = false }: { x: number; y: number; angle: number; faded?: boolean }) {
   return (
-    <g transform={`translate(${f(x)} ${f(y)}) rotate(${f(angle)}) translate(0 -9)`} opacity={faded ? 0.35 : 1}>
+    <g
+      transform={`translate(${f(x)} ${f(y)}) rotate(${f(angle)}) translate(0 -9)`}
+      opacity={faded ? 0.35 : 1}
+    >
       <path d="M -17 -2 L -12 -8 L 8 -8 L 16 -3 L 17 2 L -17 2 Z" fill="var(--color-pine-700)" />
       <rect x="-4" y="-12" width="9" height="4" rx="1.5" fill="var(--color-clay-500)" />
       <circle cx="-11" cy="4" r="5.5" fill="var(--color-ink-900)" />
@@ -71,24 +74,61 @@ function Car({ x, y, angle, faded = false }: { x: number; y: number; angle: numb
 
 export function JumpIllustration({ className = "" }: { className?: string }) {
   return (
-    <svg viewBox="0 50 720 195" className={className} role="img" aria-labelledby="jump-art-title jump-art-desc">
+    <svg
+      viewBox="0 50 720 195"
+      className={className}
+      role="img"
+      aria-labelledby="jump-art-title jump-art-desc"
+    >
       <title id="jump-art-title">Side view of a tabletop jump</title>
       <desc id="jump-art-desc">
-        A car leaves the lip at the top of the face, flies a dashed arc over the table and lands a third of the way
-        down the landing. Beyond the landing lies the overshoot zone; a marshal stands clear of it.
+        A car leaves the lip at the top of the face, flies a dashed arc over the table and lands a third of
+        the way down the landing. Beyond the landing lies the overshoot zone; a marshal stands clear of it.
       </desc>
       <defs>
-        <pattern id="jump-art-hatch" width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+        <pattern
+          id="jump-art-hatch"
+          width="8"
+          height="8"
+          patternUnits="userSpaceOnUse"
+          patternTransform="rotate(45)"
+        >
           <rect width="8" height="8" fill="var(--color-clay-100)" />
           <line x1="0" y1="0" x2="0" y2="8" stroke="var(--color-clay-500)" strokeWidth="2" opacity="0.5" />
         </pattern>
       </defs>
 
-      <rect x={ZONE.from} y={GROUND - 60} width={ZONE.to - ZONE.from} height="60" fill="url(#jump-art-hatch)" />
+      <rect
+        x={ZONE.from}
+        y={GROUND - 60}
+        width={ZONE.to - ZONE.from}
+        height="60"
+        fill="url(#jump-art-hatch)"
+      />
       <path d={`${GROUND_PATH} L 710 240 L 10 240 Z`} fill="var(--color-sand-200)" />
-      <path d={GROUND_PATH} fill="none" stroke="var(--color-ink-700)" strokeWidth="3" strokeLinejoin="round" />
-      <path d={FLIGHT_PATH} fill="none" stroke="var(--color-clay-500)" strokeWidth="3" strokeDasharray="2 9" strokeLinecap="round" />
-      <circle cx={f(TOUCH.x)} cy={f(TOUCH.y)} r="5" fill="none" stroke="var(--color-clay-700)" strokeWidth="2" />
+      <path
+        d={GROUND_PATH}
+        fill="none"
+        stroke="var(--color-ink-700)"
+        strokeWidth="3"
+        strokeLinejoin="round"
+      />
+      <path
+        d={FLIGHT_PATH}
+        fill="none"
+        stroke="var(--color-clay-500)"
+        strokeWidth="3"
+        strokeDasharray="2 9"
+        strokeLinecap="round"
+      />
+      <circle
+        cx={f(TOUCH.x)}
+        cy={f(TOUCH.y)}
+        r="5"
+        fill="none"
+        stroke="var(--color-clay-700)"
+        strokeWidth="2"
+      />
 
       <Car {...ON_FACE} faded />
       <Car {...APEX} />
@@ -96,15 +136,32 @@ export function JumpIllustration({ className = "" }: { className?: string }) {
       <Marshal x={665} />
 
       <g fill="var(--color-ink-500)" fontSize="14" fontFamily="inherit">
-        <text x="214" y="200" textAnchor="middle">face</text>
-        <text x={LIP.x + 4} y={LIP.y + 18}>lip</text>
-        <text x="320" y="175" textAnchor="middle">table</text>
-        <text x="430" y="200" textAnchor="middle">landing</text>
-        <text x={ZONE.from + (ZONE.to - ZONE.from) / 2} y={GROUND - 66} textAnchor="middle" fill="var(--color-clay-700)">
+        <text x="214" y="200" textAnchor="middle">
+          face
+        </text>
+        <text x={LIP.x + 4} y={LIP.y + 18}>
+          lip
+        </text>
+        <text x="320" y="175" textAnchor="middle">
+          table
+        </text>
+        <text x="430" y="200" textAnchor="middle">
+          landing
+        </text>
+        <text
+          x={ZONE.from + (ZONE.to - ZONE.from) / 2}
+          y={GROUND - 66}
+          textAnchor="middle"
+          fill="var(--color-clay-700)"
+        >
           overshoot zone
         </text>
-        <text x="660" y="130" textAnchor="middle">marshal</text>
-        <text x={f(APEX.x + 36)} y={f(APEX.y - 26)}>flight path</text>
+        <text x="660" y="130" textAnchor="middle">
+          marshal
+        </text>
+        <text x={f(APEX.x + 36)} y={f(APEX.y - 26)}>
+          flight path
+        </text>
       </g>
     </svg>
   );
@@ -114,7 +171,12 @@ export function JumpIllustration({ className = "" }: { className?: string }) {
 function Marshal({ x }: { x: number }) {
   return (
     <g transform={`translate(${x} ${GROUND})`} strokeLinecap="round" strokeLinejoin="round">
-      <path d="M 2 -24 L -10 -14 L -6 0 M 2 -24 L 12 -12 L 10 0" fill="none" stroke="var(--color-ink-700)" strokeWidth="5" />
+      <path
+        d="M 2 -24 L -10 -14 L -6 0 M 2 -24 L 12 -12 L 10 0"
+        fill="none"
+        stroke="var(--color-ink-700)"
+        strokeWidth="5"
+      />
       <path d="M 2 -26 L -6 -46" stroke="var(--color-clay-500)" strokeWidth="12" />
       <path d="M -6 -42 L -14 -26" stroke="var(--color-ink-700)" strokeWidth="4" />
       <circle cx="-11" cy="-57" r="8" fill="var(--color-ink-700)" />
