@@ -1,4 +1,56 @@
-// Placeholder while the page is being built.
-export default function Page() {
-  return <p>Not built yet.</p>;
+import { Link } from "react-router";
+import type { Route } from "./+types/club-home";
+import { requireClubRole } from "~/auth/permissions.server";
+import { StatusBadge, surfaceLabel } from "~/components/layout-meta";
+import { buttonClass } from "~/components/ui/button";
+import { listClubLayouts } from "~/layouts/layouts.server";
+
+export const meta: Route.MetaFunction = () => [{ title: "Layouts · Loftline" }];
+
+/** The club's layouts: directors see every one with its status, marshals and drivers the published ones. */
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { club, role } = await requireClubRole(request, params.clubId);
+  return { club, isDirector: role === "director", layouts: await listClubLayouts(club.id, role) };
+}
+
+export default function ClubHome({ loaderData }: Route.ComponentProps) {
+  const { club, isDirector, layouts } = loaderData;
+  return (
+    <section aria-labelledby="layouts-heading">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h2 id="layouts-heading" className="text-lg font-semibold">
+          {isDirector ? "Layouts" : "Published layouts"}
+        </h2>
+        {isDirector ? (
+          <Link to={`/clubs/${club.id}/layouts/new`} className={buttonClass()}>
+            New layout
+          </Link>
+        ) : null}
+      </div>
+      {layouts.length === 0 ? (
+        <p className="mt-4 max-w-prose text-ink-700">
+          {isDirector
+            ? "No layouts yet. Start one: give it a name, a surface and a track width, then draw it."
+            : "No layout is published yet. Your race director publishes the layout for race day here."}
+        </p>
+      ) : (
+        <ul className="mt-4 grid gap-3 sm:grid-cols-2">
+          {layouts.map((layout) => (
+            <li key={layout.id} className="rounded-lg border border-sand-200 bg-white p-4">
+              <div className="flex items-start justify-between gap-2">
+                <Link to={`/layouts/${layout.id}`} className="font-medium text-pine-700 hover:underline">
+                  {layout.name}
+                </Link>
+                {isDirector ? <StatusBadge status={layout.status} /> : null}
+              </div>
+              <p className="mt-1 text-sm text-ink-500">
+                {surfaceLabel(layout.surface)} · {layout.trackWidth} m wide · version{" "}
+                {layout.version}
+              </p>
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
+  );
 }

@@ -1,4 +1,171 @@
-// Placeholder while the page is being built.
-export default function Page() {
-  return <p>Not built yet.</p>;
+import { data, Form, Link, useNavigation } from "react-router";
+import type { Route } from "./+types/layout-page";
+import { requireLayoutAccess } from "~/auth/permissions.server";
+import { redirectWithNotice } from "~/auth/session.server";
+import { refusal } from "~/clubs/rule-error.server";
+import { LayoutMeta, LayoutMetaFields, StatusBadge } from "~/components/layout-meta";
+import { Button } from "~/components/ui/button";
+import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form";
+import type { LayoutStatus } from "~/db/schema";
+import {
+  changeLayoutStatus,
+  deleteLayout,
+  layoutCreatorName,
+  updateLayoutMeta,
+} from "~/layouts/layouts.server";
+import { parseForm } from "~/lib/forms";
+import { formValues } from "~/clubs/form-values.server";
+import { layoutActionSchema } from "~/lib/schemas/layouts";
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.layout.name ?? "Layout"} · Loftline` }];
+
+/** Members see a published layout; only directors see drafts and archived ones (others get 404). */
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { layout, club, role } = await requireLayoutAccess(request, params.layoutId);
+  return {
+    club,
+    isDirector: role === "director",
+    layout: {
+      id: layout.id,
+      name: layout.name,
+      surface: layout.surface,
+      trackWidth: layout.trackWidth,
+      status: layout.status,
+      version: layout.version,
+      createdAt: layout.createdAt,
+      updatedAt: layout.updatedAt,
+    },
+    createdByName: await layoutCreatorName(layout.createdBy),
+  };
+}
+
+const DONE: Record<string, string> = {
+  update: "Saved.",
+  publish: "Published: every member of the club can now see it.",
+  unpublish: "Back to draft: only race directors see it now.",
+  archive: "Archived.",
+  unarchive: "Taken out of the archive as a draft.",
+};
+
+/** Director-only changes, each naming the version it started from. */
+export async function action({ request, params }: Route.ActionArgs) {
+  const { layout, club } = await requireLayoutAccess(request, params.layoutId, "director");
+  const formData = await request.formData();
+  const parsed = parseForm(layoutActionSchema, formData);
+  if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
+  const input = parsed.data;
+  try {
+    if (input.intent === "delete") {
+      const { name } = await deleteLayout(layout.id);
+      throw await redirectWithNotice(request, `/clubs/${club.id}`, `${name} is deleted.`);
+    }
+    if (input.intent === "update") {
+      const { name, surface, trackWidth } = input;
+      await updateLayoutMeta(layout.id, input.version, { name, surface, trackWidth });
+    } else {
+      await changeLayoutStatus(layout.id, input.version, input.intent);
+    }
+  } catch (error) {
+    if (error instanceof Response) throw error;
+    return refusal(error, formValues(formData));
+  }
+  throw await redirectWithNotice(request, `/layouts/${layout.id}`, DONE[input.intent]);
+}
+
+export default function LayoutPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { club, layout, isDirector, createdByName } = loaderData;
+  const errors: FieldErrors | undefined = actionData?.errors;
+  const values = actionData?.values;
+  return (
+    <article className="space-y-8">
+      <header>
+        <p className="text-sm">
+          <Link to={`/clubs/${club.id}`} className="text-pine-700 hover:underline">
+            {club.name}
+          </Link>
+        </p>
+        <div className="mt-1 flex flex-wrap items-center gap-3">
+          <h1 className="text-2xl font-semibold">{layout.name}</h1>
+          <StatusBadge status={layout.status} />
+        </div>
+      </header>
+      <FormMessage>{[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}</FormMessage>
+      <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
+        <section aria-labelledby="about" className="rounded-lg border border-sand-200 bg-white p-4">
+          <h2 id="about" className="mb-3 text-lg font-semibold">
+            About this layout
+          </h2>
+          <LayoutMeta {...layout} clubName={club.name} createdByName={createdByName} />
+          <p className="mt-4 text-sm text-ink-500">The track drawing and the jump analysis will appear on this page.</p>
+        </section>
+        {isDirector ? (
+          <DirectorTools layout={layout} errors={errors} values={values} />
+        ) : null}
+      </div>
+    </article>
+  );
+}
+
+type Tools = {
+  layout: { name: string; surface: string; trackWidth: number; status: LayoutStatus; version: number };
+  errors?: FieldErrors;
+  values?: Record<string, string>;
+};
+
+function DirectorTools({ layout, errors, values }: Tools) {
+  const busy = useNavigation().state === "submitting";
+  const version = <input type="hidden" name="version" value={layout.version} />;
+  const statusButtons: Record<LayoutStatus, [string, string][]> = {
+    draft: [["publish", "Publish for the club"], ["archive", "Archive"]],
+    published: [["unpublish", "Back to draft"], ["archive", "Archive"]],
+    archived: [["unarchive", "Take out of the archive"]],
+  };
+  return (
+    <div className="space-y-6">
+      <section aria-labelledby="details" className="rounded-lg border border-sand-200 bg-white p-4">
+        <h2 id="details" className="mb-3 text-lg font-semibold">
+          Details
+        </h2>
+        <Form method="post" className="space-y-4" noValidate>
+          {version}
+          <LayoutMetaFields errors={errors} values={values ?? layout} />
+          <Button type="submit" name="intent" value="update" disabled={busy}>
+            Save details
+          </Button>
+        </Form>
+      </section>
+      <section aria-labelledby="status" className="rounded-lg border border-sand-200 bg-white p-4">
+        <h2 id="status" className="text-lg font-semibold">
+          Status
+        </h2>
+        <p className="mt-1 text-sm text-ink-500">
+          Marshals and drivers see a layout only while it is published.
+        </p>
+        <Form method="post" className="mt-3 flex flex-wrap gap-2">
+          {version}
+          {statusButtons[layout.status].map(([intent, label]) => (
+            <Button key={intent} type="submit" name="intent" value={intent} variant={intent === "publish" ? "primary" : "secondary"} disabled={busy}>
+              {label}
+            </Button>
+          ))}
+        </Form>
+      </section>
+      <section aria-labelledby="delete" className="rounded-lg border border-danger-100 bg-white p-4">
+        <h2 id="delete" className="text-lg font-semibold">
+          Delete
+        </h2>
+        <Form method="post" className="mt-2 space-y-3">
+          <input type="hidden" name="intent" value="delete" />
+          <label className="flex items-start gap-2 text-sm">
+            <input type="checkbox" name="confirm" value="yes" className="mt-1" aria-describedby="confirm-error" />
+            <span>Yes, delete {layout.name} and every saved version of it. This cannot be undone.</span>
+          </label>
+          <FieldError id="confirm-error" errors={errors?.confirm} />
+          <Button type="submit" variant="danger" disabled={busy}>
+            Delete the layout
+          </Button>
+        </Form>
+      </section>
+    </div>
+  );
 }
