@@ -4,6 +4,7 @@
  */
 import fs from "node:fs";
 import path from "node:path";
+import { createClient, type InValue } from "@libsql/client";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, afterEach, beforeAll, expect, inject } from "vitest";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
@@ -67,9 +68,9 @@ export function useBrowser() {
 /** Signs in through the sign-in form and waits until the app has left the sign-in page. */
 export async function login(page: Page, account: Pick<Account, "email" | "password">): Promise<void> {
   await page.goto(url("/sign-in"));
-  await page.getByLabel("Email").fill(account.email);
+  await page.getByLabel("E-mail address").fill(account.email);
   await page.getByLabel("Password", { exact: true }).fill(account.password);
-  await page.getByRole("main").getByRole("button", { name: "Sign in" }).click();
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
   await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
   await expect.poll(() => page.getByRole("button", { name: "Sign out" }).count()).toBe(1);
 }
@@ -83,10 +84,10 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 }
 
 /**
- * Opens the outbox page and follows the link in the newest message to `to` whose subject matches.
- * Polls for a few seconds because delivery through SMTP is asynchronous.
+ * Opens the outbox page and follows the link in the newest message to `to` whose subject matches;
+ * returns the link's address. Polls for a few seconds because delivery through SMTP is asynchronous.
  */
-export async function followMailLink(page: Page, to: string, subject: RegExp, link: RegExp): Promise<void> {
+export async function followMailLink(page: Page, to: string, subject: RegExp, link: RegExp): Promise<string> {
   await expect
     .poll(
       async () => {
@@ -97,5 +98,23 @@ export async function followMailLink(page: Page, to: string, subject: RegExp, li
     )
     .toBeGreaterThan(0);
   const message = page.getByRole("article").filter({ hasText: to }).filter({ hasText: subject }).first();
-  await message.getByRole("link", { name: link }).first().click();
+  const anchor = message.getByRole("link", { name: link }).first();
+  const href = (await anchor.getAttribute("href")) ?? "";
+  await anchor.click();
+  return href;
+}
+
+/** Rows from the app's database of this run (read-only use: ids the pages do not show). */
+export async function queryDb<T>(sql: string, args: InValue[] = []): Promise<T[]> {
+  const client = createClient({ url: `file:${path.join(inject("dataDir"), "loftline.db")}` });
+  try {
+    return (await client.execute({ sql, args })).rows as unknown as T[];
+  } finally {
+    client.close();
+  }
+}
+
+/** True when the page is wider than the viewport (the reader would have to scroll sideways). */
+export async function scrollsSideways(page: Page): Promise<boolean> {
+  return page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth);
 }
