@@ -19,7 +19,9 @@ const host = process.env.FAKE_SMTP_HOST ?? "127.0.0.1";
 
 try {
   const smtp = await startFakeSmtp({ port: Number(rawPort), host });
-  process.stdout.write(`fake-smtp: listening on smtp://${host}:${smtp.port}, keeping messages in ${smtp.dir}\n`);
+  process.stdout.write(
+    `fake-smtp: listening on smtp://${host}:${smtp.port}, keeping messages in ${smtp.dir}\n`,
+  );
   const stop = () => {
     void smtp.close().then(() => process.exit(0));
   };

@@ -24,7 +24,9 @@ const MAX_MESSAGE_BYTES = 10 * 1024 * 1024;
  * Starts the listener. `port: 0` picks a free port (tests). Messages go to `dir`, by default
  * `${DATA_DIR}/outbox` as it is when the server starts.
  */
-export async function startFakeSmtp(opts: { port?: number; host?: string; dir?: string } = {}): Promise<FakeSmtp> {
+export async function startFakeSmtp(
+  opts: { port?: number; host?: string; dir?: string } = {},
+): Promise<FakeSmtp> {
   const host = opts.host ?? "127.0.0.1";
   const dir = opts.dir ?? outboxDir();
   const server = new SMTPServer({

@@ -9,7 +9,10 @@ export type MailContent = { subject: string; text: string; html: string };
 
 /** Escapes text for HTML element content and attribute values. */
 export function escapeHtml(s: string): string {
-  return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+  return s.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!,
+  );
 }
 
 /** Wraps paragraphs and one call-to-action link in a small, inline-styled HTML page. */
@@ -27,7 +30,11 @@ function htmlMessage(paragraphs: string[], link: { href: string; label: string }
 }
 
 /** The password reset message. `expiresInMinutes` is how long the link works, minutes. */
-export function passwordResetMail(input: { name: string; link: string; expiresInMinutes: number }): MailContent {
+export function passwordResetMail(input: {
+  name: string;
+  link: string;
+  expiresInMinutes: number;
+}): MailContent {
   const hours = input.expiresInMinutes % 60 === 0 ? input.expiresInMinutes / 60 : null;
   const lifetime = hours === 1 ? "one hour" : hours ? `${hours} hours` : `${input.expiresInMinutes} minutes`;
   const intro = [
@@ -35,9 +42,7 @@ export function passwordResetMail(input: { name: string; link: string; expiresIn
     "Someone, hopefully you, asked to reset the password of your Loftline account.",
     `Choose a new password with the link below. It works once, within ${lifetime}.`,
   ];
-  const footer = [
-    "If you did not ask for this, ignore this message: your password stays as it is.",
-  ];
+  const footer = ["If you did not ask for this, ignore this message: your password stays as it is."];
   return {
     subject: "Reset your Loftline password",
     text: [...intro, "", input.link, "", ...footer].join("\n"),

@@ -24,13 +24,17 @@ export const emailField = z
 /** A new password: at least 10 characters and at most 72 bytes. */
 export const newPasswordField = z
   .string({ error: "Choose a password." })
-  .min(PASSWORD_MIN_LENGTH, { error: `The password must be at least ${PASSWORD_MIN_LENGTH} characters long.` })
+  .min(PASSWORD_MIN_LENGTH, {
+    error: `The password must be at least ${PASSWORD_MIN_LENGTH} characters long.`,
+  })
   .refine((p) => utf8.encode(p).length <= PASSWORD_MAX_BYTES, {
     error: `The password is too long (at most ${PASSWORD_MAX_BYTES} bytes; accented letters count as two).`,
   })
   .refine((p) => p.trim().length > 0, { error: "The password cannot be only spaces." });
 
-const confirmField = z.string({ error: "Type the password again." }).min(1, { error: "Type the password again." });
+const confirmField = z
+  .string({ error: "Type the password again." })
+  .min(1, { error: "Type the password again." });
 
 /** Where to go after signing in or up; checked again by safeRedirect before use. */
 const redirectToField = z.string().max(500).optional();

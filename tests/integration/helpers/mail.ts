@@ -43,7 +43,9 @@ export async function waitForMail(
     const found = (await listOutbox()).find(matches);
     if (found) return found;
     if (Date.now() > deadline) {
-      throw new Error(`waitForMail: no message to ${address} with subject ${String(subjectMatch)} arrived in time`);
+      throw new Error(
+        `waitForMail: no message to ${address} with subject ${String(subjectMatch)} arrived in time`,
+      );
     }
     await new Promise((r) => setTimeout(r, 25));
   }

@@ -1,10 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  forgotPasswordSchema,
-  resetPasswordSchema,
-  signInSchema,
-  signUpSchema,
-} from "~/lib/schemas/auth";
+import { forgotPasswordSchema, resetPasswordSchema, signInSchema, signUpSchema } from "~/lib/schemas/auth";
 import { parseForm } from "~/lib/forms";
 
 function form(fields: Record<string, string>) {
@@ -43,16 +38,24 @@ describe("sign-up schema", () => {
   });
 
   it("refuses a password of 9 characters and accepts one of 10", () => {
-    const short = parseForm(signUpSchema, form({ ...goodSignUp, password: "123456789", confirm: "123456789" }));
+    const short = parseForm(
+      signUpSchema,
+      form({ ...goodSignUp, password: "123456789", confirm: "123456789" }),
+    );
     expect(short.ok).toBe(false);
     if (!short.ok) expect(short.errors.password?.[0]).toMatch(/at least 10 characters/);
-    const ten = parseForm(signUpSchema, form({ ...goodSignUp, password: "1234567890", confirm: "1234567890" }));
+    const ten = parseForm(
+      signUpSchema,
+      form({ ...goodSignUp, password: "1234567890", confirm: "1234567890" }),
+    );
     expect(ten.ok).toBe(true);
   });
 
   it("refuses passwords longer than bcrypt reads (72 bytes), counting bytes not letters", () => {
     const ascii72 = "a".repeat(72);
-    expect(parseForm(signUpSchema, form({ ...goodSignUp, password: ascii72, confirm: ascii72 })).ok).toBe(true);
+    expect(parseForm(signUpSchema, form({ ...goodSignUp, password: ascii72, confirm: ascii72 })).ok).toBe(
+      true,
+    );
     const accented = "é".repeat(40); // 40 letters, 80 bytes in UTF-8
     const r = parseForm(signUpSchema, form({ ...goodSignUp, password: accented, confirm: accented }));
     expect(r.ok).toBe(false);
@@ -122,10 +125,15 @@ describe("forgot and reset schemas", () => {
   });
 
   it("reset: applies the new-password rules and the match check", () => {
-    expect(parseForm(resetPasswordSchema, form({ password: "a new password", confirm: "a new password" })).ok).toBe(true);
+    expect(
+      parseForm(resetPasswordSchema, form({ password: "a new password", confirm: "a new password" })).ok,
+    ).toBe(true);
     const short = parseForm(resetPasswordSchema, form({ password: "short", confirm: "short" }));
     expect(!short.ok && short.errors.password?.[0]).toMatch(/at least 10/);
-    const differ = parseForm(resetPasswordSchema, form({ password: "a new password", confirm: "another one!" }));
+    const differ = parseForm(
+      resetPasswordSchema,
+      form({ password: "a new password", confirm: "another one!" }),
+    );
     expect(!differ.ok && differ.errors.confirm?.[0]).toMatch(/do not match/);
   });
 });
