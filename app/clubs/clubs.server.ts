@@ -1,6 +1,7 @@
 import { count, eq, inArray } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { clubs, memberships, type Role } from "~/db/schema";
+import { serialWrite } from "./write-lock.server";
 
 export type MyClub = { id: string; name: string; role: Role; memberCount: number };
 
@@ -26,9 +27,9 @@ export async function listMyClubs(userId: string): Promise<MyClub[]> {
 /** Creates a club and makes its creator the first race director, both or neither. */
 export async function createClub(userId: string, name: string): Promise<{ id: string; name: string }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  return serialWrite(() => db.transaction(async (tx) => {
     const [club] = await tx.insert(clubs).values({ name }).returning({ id: clubs.id, name: clubs.name });
     await tx.insert(memberships).values({ clubId: club.id, userId, role: "director" });
     return club;
-  });
+  }));
 }

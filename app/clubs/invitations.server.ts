@@ -11,6 +11,7 @@ import { sendMail } from "~/mail/mail.server";
 import { invitationMail } from "~/mail/templates.server";
 import { RuleError } from "./rule-error.server";
 import { newLinkToken } from "./tokens.server";
+import { serialWrite } from "./write-lock.server";
 
 /** How long an invitation link works: 7 days, ms. */
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
@@ -56,7 +57,7 @@ export async function inviteMember(input: { club: Club; inviter: Inviter; email:
   const now = input.now ?? Date.now();
   const { token, hash } = newLinkToken();
   const db = await getDb();
-  const invitation = await db.transaction(async (tx) => {
+  const invitation = await serialWrite(() => db.transaction(async (tx) => {
     const [member] = await tx
       .select({ id: memberships.id })
       .from(memberships)
@@ -80,12 +81,12 @@ export async function inviteMember(input: { club: Club; inviter: Inviter; email:
       .values({ clubId: club.id, email, role, tokenHash: hash, invitedBy: inviter.id, expiresAt: new Date(now + INVITATION_LIFETIME_MS) })
       .returning({ id: invitations.id, email: invitations.email, role: invitations.role });
     return row;
-  });
+  }));
   try {
     await mailInvitation(email, club, inviter, role, token);
   } catch (err) {
     console.error("[loftline] invitation e-mail failed:", (err as Error).message);
-    await db.delete(invitations).where(eq(invitations.id, invitation.id));
+    await serialWrite(() => db.delete(invitations).where(eq(invitations.id, invitation.id)));
     throw new RuleError(503, MAIL_FAILED, "email");
   }
   return { ...invitation, token };
@@ -130,20 +131,24 @@ export async function resendInvitation(input: { club: Club; inviter: Inviter; in
   const { token, hash } = newLinkToken();
   const db = await getDb();
   const where = and(eq(invitations.id, before.id), eq(invitations.tokenHash, before.tokenHash), isNull(invitations.acceptedAt));
-  const updated = await db
-    .update(invitations)
-    .set({ tokenHash: hash, expiresAt: new Date(now + INVITATION_LIFETIME_MS), invitedBy: input.inviter.id })
-    .where(where)
-    .returning({ id: invitations.id });
+  const updated = await serialWrite(() =>
+    db
+      .update(invitations)
+      .set({ tokenHash: hash, expiresAt: new Date(now + INVITATION_LIFETIME_MS), invitedBy: input.inviter.id })
+      .where(where)
+      .returning({ id: invitations.id }),
+  );
   if (updated.length === 0) throw new RuleError(409, "This invitation changed meanwhile. Reload the page and try again.", "invitationId");
   try {
     await mailInvitation(before.email, input.club, input.inviter, before.role, token);
   } catch (err) {
     console.error("[loftline] invitation e-mail failed:", (err as Error).message);
-    await db
-      .update(invitations)
-      .set({ tokenHash: before.tokenHash, expiresAt: before.expiresAt })
-      .where(and(eq(invitations.id, before.id), eq(invitations.tokenHash, hash)));
+    await serialWrite(() =>
+      db
+        .update(invitations)
+        .set({ tokenHash: before.tokenHash, expiresAt: before.expiresAt })
+        .where(and(eq(invitations.id, before.id), eq(invitations.tokenHash, hash))),
+    );
     throw new RuleError(503, MAIL_FAILED, "invitationId");
   }
   return { id: before.id, email: before.email, token };
@@ -152,10 +157,12 @@ export async function resendInvitation(input: { club: Club; inviter: Inviter; in
 /** Withdraws an invitation that has not been accepted; its link then answers 404. */
 export async function revokeInvitation(clubId: string, invitationId: string): Promise<{ email: string }> {
   const db = await getDb();
-  const [row] = await db
-    .delete(invitations)
-    .where(and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)))
-    .returning({ email: invitations.email });
+  const [row] = await serialWrite(() =>
+    db
+      .delete(invitations)
+      .where(and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)))
+      .returning({ email: invitations.email }),
+  );
   if (!row) throw new RuleError(404, "No such invitation waiting in this club: it may have been accepted or withdrawn.", "invitationId");
   return row;
 }

@@ -4,6 +4,7 @@ import { memberships, users, type Role } from "~/db/schema";
 import type { MemberQuery } from "~/lib/schemas/clubs";
 import { ROLE_LABELS } from "~/lib/roles";
 import { RuleError } from "./rule-error.server";
+import { serialWrite } from "./write-lock.server";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
@@ -91,24 +92,24 @@ const LAST_DIRECTOR =
  */
 export async function changeMemberRole(clubId: string, memberId: string, role: Role): Promise<{ name: string; role: Role }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  return serialWrite(() => db.transaction(async (tx) => {
     const member = await findMember(tx, clubId, memberId);
     if (member.role === role) return { name: member.name, role };
     await tx.update(memberships).set({ role }).where(eq(memberships.id, member.id));
     if ((await directorCount(tx, clubId)) === 0) throw new RuleError(409, LAST_DIRECTOR, "role");
     return { name: member.name, role };
-  });
+  }));
 }
 
 /** Removes a member from the club. Refuses (409) removing the last director. */
 export async function removeMember(clubId: string, memberId: string): Promise<{ name: string; userId: string }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  return serialWrite(() => db.transaction(async (tx) => {
     const member = await findMember(tx, clubId, memberId);
     await tx.delete(memberships).where(eq(memberships.id, member.id));
     if ((await directorCount(tx, clubId)) === 0) throw new RuleError(409, LAST_DIRECTOR, "memberId");
     return { name: member.name, userId: member.userId };
-  });
+  }));
 }
 
 export function roleChangeNotice(name: string, role: Role): string {

@@ -9,6 +9,7 @@ import { layouts, users, type LayoutStatus, type Role } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
+import { serialWrite } from "~/clubs/write-lock.server";
 
 export type LayoutFields = { name: string; surface: Surface; trackWidth: number };
 
@@ -45,10 +46,9 @@ export async function listClubLayouts(clubId: string, role: Role): Promise<Layou
 /** A new draft layout in the club; returns its id. */
 export async function createLayout(clubId: string, userId: string, fields: LayoutFields): Promise<{ id: string }> {
   const db = await getDb();
-  const [row] = await db
-    .insert(layouts)
-    .values({ clubId, createdBy: userId, ...fields, status: "draft" })
-    .returning({ id: layouts.id });
+  const [row] = await serialWrite(() =>
+    db.insert(layouts).values({ clubId, createdBy: userId, ...fields, status: "draft" }).returning({ id: layouts.id }),
+  );
   return row;
 }
 
@@ -67,11 +67,13 @@ async function changeAt(layoutId: string, expectedVersion: number, set: Partial<
   const db = await getDb();
   const where = [eq(layouts.id, layoutId), eq(layouts.version, expectedVersion)];
   if (allowedFrom) where.push(inArray(layouts.status, allowedFrom));
-  const rows = await db
-    .update(layouts)
-    .set({ ...set, version: sql`${layouts.version} + 1` })
-    .where(and(...where))
-    .returning({ version: layouts.version, status: layouts.status });
+  const rows = await serialWrite(() =>
+    db
+      .update(layouts)
+      .set({ ...set, version: sql`${layouts.version} + 1` })
+      .where(and(...where))
+      .returning({ version: layouts.version, status: layouts.status }),
+  );
   if (rows.length > 0) return rows[0];
   const [now] = await db.select({ version: layouts.version, status: layouts.status }).from(layouts).where(eq(layouts.id, layoutId));
   if (!now) throw new RuleError(404, "No such layout.");
@@ -102,7 +104,7 @@ export async function changeLayoutStatus(layoutId: string, expectedVersion: numb
 /** Deletes the layout; its saved versions go with it (ON DELETE CASCADE). */
 export async function deleteLayout(layoutId: string): Promise<{ name: string }> {
   const db = await getDb();
-  const [row] = await db.delete(layouts).where(eq(layouts.id, layoutId)).returning({ name: layouts.name });
+  const [row] = await serialWrite(() => db.delete(layouts).where(eq(layouts.id, layoutId)).returning({ name: layouts.name }));
   if (!row) throw new RuleError(404, "No such layout.");
   return row;
 }
