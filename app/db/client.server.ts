@@ -5,6 +5,7 @@ import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
 import { migrate } from "drizzle-orm/libsql/migrator";
 import { config } from "~/lib/config.server";
 import * as schema from "./schema";
+import { serialiseClient } from "./serialise.server";
 
 export type Database = LibSQLDatabase<typeof schema>;
 
@@ -20,7 +21,10 @@ function open(): { client: Client; database: Database } {
     fs.mkdirSync(path.dirname(url.slice("file:".length)), { recursive: true });
   }
   // The busy timeout goes on the client: a PRAGMA would reach only one pooled connection.
-  client = createClient({ url, authToken: process.env.DATABASE_AUTH_TOKEN, timeout: 5000 });
+  const raw = createClient({ url, authToken: process.env.DATABASE_AUTH_TOKEN, timeout: 5000 });
+  // A local file is driven synchronously: queue its statements (see serialise.server.ts). A libSQL
+  // server handles concurrency itself.
+  client = url.startsWith("file:") ? serialiseClient(raw) : raw;
   database = drizzle(client, { schema });
   return { client, database };
 }
