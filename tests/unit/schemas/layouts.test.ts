@@ -1,0 +1,54 @@
+import { describe, expect, it } from "vitest";
+import { parseForm } from "~/lib/forms";
+import { createLayoutSchema, layoutActionSchema, TRACK_WIDTH_MAX_M, TRACK_WIDTH_MIN_M } from "~/lib/schemas/layouts";
+
+const form = (fields: Record<string, string>) => {
+  const fd = new FormData();
+  for (const [k, v] of Object.entries(fields)) fd.set(k, v);
+  return fd;
+};
+const width = (trackWidth: string) => parseForm(createLayoutSchema, form({ name: "Loop", surface: "dirt", trackWidth }));
+
+describe("createLayoutSchema", () => {
+  it("reads the track width in metres, with a decimal point or comma, within 1.5 to 10 m", () => {
+    expect(width("3.5")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 3.5 } });
+    expect(width(" 2,75 ")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 2.75 } });
+    expect(width(String(TRACK_WIDTH_MIN_M)).ok).toBe(true);
+    expect(width(String(TRACK_WIDTH_MAX_M)).ok).toBe(true);
+    expect(width("1.49")).toEqual({ ok: false, errors: { trackWidth: ["Track width must be at least 1.5 m."] } });
+    expect(width("10.01")).toEqual({ ok: false, errors: { trackWidth: ["Track width must be at most 10 m."] } });
+    expect(width("")).toEqual({ ok: false, errors: { trackWidth: ["Enter the track width in metres."] } });
+    expect(width("three")).toEqual({ ok: false, errors: { trackWidth: ["Enter the track width as a number of metres, like 3.5."] } });
+  });
+
+  it("accepts the four surfaces only and needs a name", () => {
+    for (const surface of ["dirt", "clay", "turf", "carpet"]) {
+      expect(parseForm(createLayoutSchema, form({ name: "L", surface, trackWidth: "3" })).ok).toBe(true);
+    }
+    expect(parseForm(createLayoutSchema, form({ name: "  ", surface: "sand", trackWidth: "3" }))).toEqual({
+      ok: false,
+      errors: { name: ["Enter a name for the layout."], surface: ["Choose a surface: dirt, clay, turf or carpet."] },
+    });
+  });
+});
+
+describe("layoutActionSchema", () => {
+  it("needs the version a change started from, as a whole number", () => {
+    expect(parseForm(layoutActionSchema, form({ intent: "archive", version: "7" }))).toEqual({ ok: true, data: { intent: "archive", version: 7 } });
+    const bad = parseForm(layoutActionSchema, form({ intent: "publish", version: "7.5" }));
+    expect(bad).toEqual({ ok: false, errors: { version: ["The form's layout version is not valid; reload the page."] } });
+  });
+
+  it("deletes only when the confirmation is ticked", () => {
+    expect(parseForm(layoutActionSchema, form({ intent: "delete", confirm: "yes" })).ok).toBe(true);
+    const r = parseForm(layoutActionSchema, form({ intent: "delete" }));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.errors.confirm?.[0]).toMatch(/Tick the box/);
+  });
+
+  it("refuses an unknown intent, naming the field", () => {
+    const r = parseForm(layoutActionSchema, form({ intent: "rename-all" }));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(Object.keys(r.errors)).toEqual(["intent"]);
+  });
+});
