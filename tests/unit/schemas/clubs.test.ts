@@ -50,12 +50,13 @@ describe("memberActionSchema", () => {
   });
 
   it("accepts each director action with its own field", () => {
-    for (const fields of [
+    const actions: Record<string, string>[] = [
       { intent: "remove", memberId: "m1" },
       { intent: "resend", invitationId: "i1" },
       { intent: "revoke", invitationId: "i1" },
       { intent: "change-role", memberId: "m1", role: "director" },
-    ]) {
+    ];
+    for (const fields of actions) {
       expect(parseForm(memberActionSchema, form(fields))).toEqual({ ok: true, data: fields });
     }
   });
