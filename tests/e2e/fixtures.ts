@@ -21,6 +21,7 @@ const CHROMIUM_ARGS = [
   "--no-first-run",
 ];
 export const SCREENSHOT_DIR = path.resolve("test-results/screenshots");
+const FAILURE_DIR = path.resolve("test-results/failures");
 export const DEMO_CLUB = "Kestrel Valley Off-Road Club";
 
 export type Account = { email: string; password: string; name: string; role: Role };
@@ -47,7 +48,18 @@ export function useBrowser() {
   beforeAll(async () => {
     browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, headless: true });
   });
-  afterEach(async () => {
+  afterEach(async (ctx) => {
+    // A failed test leaves a picture of every page it had open, to see what the browser saw.
+    if (ctx.task.result?.state === "fail") {
+      const name = ctx.task.name.replace(/[^a-z0-9]+/gi, "-").slice(0, 60);
+      const pages = contexts.flatMap((c) => c.pages());
+      fs.mkdirSync(FAILURE_DIR, { recursive: true });
+      for (const [i, page] of pages.entries()) {
+        await page
+          .screenshot({ path: path.join(FAILURE_DIR, `${name}-${i + 1}.png`), fullPage: true })
+          .catch(() => {});
+      }
+    }
     await Promise.all(contexts.splice(0).map((c) => c.close()));
   });
   afterAll(async () => {

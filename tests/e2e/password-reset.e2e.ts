@@ -13,6 +13,8 @@ describe("password reset by e-mail", () => {
     const page = await browser.newPage();
     await page.goto(url("/sign-in"));
     await page.getByRole("link", { name: "Forgot your password?" }).click();
+    // Wait for the new page: until it arrives, the sign-in page's own e-mail field is still there.
+    await page.getByRole("heading", { name: "Reset your password" }).waitFor();
     await page.getByLabel("E-mail address").fill(member.email);
     await page.getByRole("button", { name: "Send the link" }).click();
     await page.getByRole("heading", { name: "Check your e-mail" }).waitFor();
