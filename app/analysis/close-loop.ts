@@ -9,7 +9,16 @@
  * much as 10 degrees of angle).
  */
 import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
-import { advancePose, closureError, resolveSections, sectionShape, startPose, wrapAngle, type Closure, type Pose } from "./geometry";
+import {
+  advancePose,
+  closureError,
+  resolveSections,
+  sectionShape,
+  startPose,
+  wrapAngle,
+  type Closure,
+  type Pose,
+} from "./geometry";
 
 export type AdjustableField = "length" | "angleDeg" | "radius";
 
@@ -39,17 +48,25 @@ interface Param {
 const DEG = Math.PI / 180;
 /** Weight of heading against position in the residual, m/rad. */
 const HEADING_WEIGHT = 10;
-const LIMITS: Record<AdjustableField, [number, number, number]> = { length: [0.5, 300, 1], angleDeg: [1, 360, 10], radius: [1, 300, 1] };
+const LIMITS: Record<AdjustableField, [number, number, number]> = {
+  length: [0.5, 300, 1],
+  angleDeg: [1, 360, 10],
+  radius: [1, 300, 1],
+};
 
 /**
  * Adjusts values among the last `tailSections` sections to close the loop.
  * @returns a new document and the changes, or the reason it cannot be closed that way.
  */
-export function closeLoop<T extends Pick<LayoutDocument, "start" | "sections">>(doc: T, tailSections = 6): CloseLoopResult<T> {
+export function closeLoop<T extends Pick<LayoutDocument, "start" | "sections">>(
+  doc: T,
+  tailSections = 6,
+): CloseLoopResult<T> {
   const sections = resolveSections(doc);
   const start = startPose(doc);
   const closure = closureError(sections, start);
-  if (closure.gap < 1e-6 && Math.abs(closure.headingDeg) < 1e-6) return { ok: true, document: doc, changes: [], closure };
+  if (closure.gap < 1e-6 && Math.abs(closure.headingDeg) < 1e-6)
+    return { ok: true, document: doc, changes: [], closure };
   const first = Math.max(0, doc.sections.length - tailSections);
   const params: Param[] = [];
   for (let i = first; i < doc.sections.length; i++) params.push(...adjustable(doc.sections[i], i));
@@ -66,7 +83,8 @@ export function closeLoop<T extends Pick<LayoutDocument, "start" | "sections">>(
         if (!best || score < best.score) best = { values, picked, score };
       }
   if (!best) {
-    const reason = "no choice of lengths, angles and radii in the last sections closes the loop within their allowed ranges; reshape the layout by hand";
+    const reason =
+      "no choice of lengths, angles and radii in the last sections closes the loop within their allowed ranges; reshape the layout by hand";
     return { ok: false, reason, closure };
   }
   const newSections = doc.sections.slice() as LayoutSection[];
@@ -94,7 +112,15 @@ function adjustable(s: LayoutSection, index: number): Param[] {
 type Shape = { length: number; curvature: number };
 
 /** Weighted closure residual of the tail with the picked values. */
-function residual(picked: Param[], values: number[], tail: Shape[], first: number, tailStart: Pose, start: Pose, out: number[]): void {
+function residual(
+  picked: Param[],
+  values: number[],
+  tail: Shape[],
+  first: number,
+  tailStart: Pose,
+  start: Pose,
+  out: number[],
+): void {
   const pose: Pose = { ...tailStart };
   for (let k = 0; k < tail.length; k++) {
     let { length, curvature } = tail[k];
@@ -131,7 +157,8 @@ function solve(picked: Param[], tail: Shape[], first: number, tailStart: Pose, s
   ];
   for (let iter = 0; iter < 40; iter++) {
     residual(picked, v, tail, first, tailStart, start, r);
-    if (Math.hypot(r[0], r[1], r[2]) < 1e-9) return v.every((x, k) => x >= picked[k].min && x <= picked[k].max) ? v : null;
+    if (Math.hypot(r[0], r[1], r[2]) < 1e-9)
+      return v.every((x, k) => x >= picked[k].min && x <= picked[k].max) ? v : null;
     for (let k = 0; k < 3; k++) {
       const h = 1e-6 * Math.max(1, Math.abs(v[k]));
       const keep = v[k];
@@ -144,7 +171,8 @@ function solve(picked: Param[], tail: Shape[], first: number, tailStart: Pose, s
     if (!step) return null;
     // Damp big steps so a value does not jump far outside its range in one go.
     let scale = 1;
-    for (let k = 0; k < 3; k++) scale = Math.min(scale, (20 * picked[k].unit) / Math.max(1e-12, Math.abs(step[k])));
+    for (let k = 0; k < 3; k++)
+      scale = Math.min(scale, (20 * picked[k].unit) / Math.max(1e-12, Math.abs(step[k])));
     for (let k = 0; k < 3; k++) v[k] -= scale * step[k];
     if (v.some((x) => !Number.isFinite(x) || x <= 0)) return null;
   }
@@ -154,7 +182,9 @@ function solve(picked: Param[], tail: Shape[], first: number, tailStart: Pose, s
 /** Solves J x = r for 3x3 J by Cramer's rule; null when J is (nearly) singular. */
 function solve3(J: number[][], r: number[]): number[] | null {
   const det = (m: number[][]) =>
-    m[0][0] * (m[1][1] * m[2][2] - m[1][2] * m[2][1]) - m[0][1] * (m[1][0] * m[2][2] - m[1][2] * m[2][0]) + m[0][2] * (m[1][0] * m[2][1] - m[1][1] * m[2][0]);
+    m[0][0] * (m[1][1] * m[2][2] - m[1][2] * m[2][1]) -
+    m[0][1] * (m[1][0] * m[2][2] - m[1][2] * m[2][0]) +
+    m[0][2] * (m[1][0] * m[2][1] - m[1][1] * m[2][0]);
   const d = det(J);
   if (!Number.isFinite(d) || Math.abs(d) < 1e-10) return null;
   const out = [0, 0, 0];

@@ -47,9 +47,14 @@ export function cyclicRuns(flagged: ArrayLike<boolean | number>): [number, numbe
   return runs.sort((a, b) => a[0] - b[0]);
 }
 
+/** Number of samples that make up about `stride` metres. */
+function strideStep(line: CentreLine, stride: number): number {
+  return Math.max(1, Math.round(stride / Math.max(1e-9, line.length / (line.count - 1))));
+}
+
 /** Sample indices about `stride` metres apart, without the closing sample. */
 export function stridedIndices(line: CentreLine, stride: number): number[] {
-  const step = Math.max(1, Math.round(stride / Math.max(1e-9, line.length / (line.count - 1))));
+  const step = strideStep(line, stride);
   const out: number[] = [];
   for (let i = 0; i < line.count - 1; i += step) out.push(i);
   return out;
@@ -60,11 +65,17 @@ export function stridedIndices(line: CentreLine, stride: number): number[] {
  * lap than (width + margin) * pi / 2 are the same stretch of track and are not compared.
  * @param width track width, m; @param margin extra room, m; @param stride check spacing, m.
  */
-export function findLaneConflicts(line: CentreLine, width: number, margin = DEFAULT_LANE_MARGIN, stride = 0.25): LaneConflict[] {
+export function findLaneConflicts(
+  line: CentreLine,
+  width: number,
+  margin = DEFAULT_LANE_MARGIN,
+  stride = 0.5,
+): LaneConflict[] {
   const D = width + margin;
   const ignore = (D * Math.PI) / 2;
   const L = line.length;
   const idx = stridedIndices(line, stride);
+  const step = strideStep(line, stride);
   const grid = new Map<number, number[]>();
   const key = (cx: number, cy: number) => cx * 1_000_003 + cy;
   for (const i of idx) {
@@ -85,9 +96,9 @@ export function findLaneConflicts(line: CentreLine, width: number, margin = DEFA
         for (const j of cell) {
           const along = Math.abs(line.s[i] - line.s[j]);
           if (Math.min(along, L - along) <= ignore) continue;
-          const d = Math.hypot(line.x[i] - line.x[j], line.y[i] - line.y[j]);
-          if (d < D && d < minDist[n]) {
-            minDist[n] = d;
+          const d2 = (line.x[i] - line.x[j]) ** 2 + (line.y[i] - line.y[j]) ** 2;
+          if (d2 < D * D && d2 < minDist[n] * minDist[n]) {
+            minDist[n] = Math.sqrt(d2);
             partner[n] = j;
           }
         }
@@ -99,14 +110,45 @@ export function findLaneConflicts(line: CentreLine, width: number, margin = DEFA
       if (minDist[n] < minDist[best]) best = n;
       if (n === b) break;
     }
-    const i = idx[best];
-    const centreDistance = minDist[best];
-    return { fromS: line.s[idx[a]], toS: line.s[idx[b]], otherS: line.s[partner[best]], centreDistance, edgeGap: centreDistance - width, x: line.x[i], y: line.y[i] };
+    // Refine the closest pair at full sample resolution around the strided one.
+    let i = idx[best];
+    let j = partner[best];
+    let d2 = minDist[best] ** 2;
+    const i0 = i;
+    const j0 = j;
+    const last = line.count - 1;
+    for (let di = -step; di <= step; di++)
+      for (let dj = -step; dj <= step; dj++) {
+        const ii = (i0 + di + last) % last;
+        const jj = (j0 + dj + last) % last;
+        const along = Math.abs(line.s[ii] - line.s[jj]);
+        if (Math.min(along, L - along) <= ignore) continue;
+        const e2 = (line.x[ii] - line.x[jj]) ** 2 + (line.y[ii] - line.y[jj]) ** 2;
+        if (e2 < d2) {
+          d2 = e2;
+          i = ii;
+          j = jj;
+        }
+      }
+    const centreDistance = Math.sqrt(d2);
+    return {
+      fromS: line.s[idx[a]],
+      toS: line.s[idx[b]],
+      otherS: line.s[j],
+      centreDistance,
+      edgeGap: centreDistance - width,
+      x: line.x[i],
+      y: line.y[i],
+    };
   });
   // Each pair of lanes shows up twice (once from each side): keep the one met first on the lap.
   const within = (r: LaneConflict, s: number) =>
-    r.fromS <= r.toS ? s >= r.fromS - stride && s <= r.toS + stride : s >= r.fromS - stride || s <= r.toS + stride;
-  return runs.filter((a) => !runs.some((b) => b !== a && b.fromS < a.fromS && within(b, a.otherS) && within(a, b.otherS)));
+    r.fromS <= r.toS
+      ? s >= r.fromS - stride && s <= r.toS + stride
+      : s >= r.fromS - stride || s <= r.toS + stride;
+  return runs.filter(
+    (a) => !runs.some((b) => b !== a && b.fromS < a.fromS && within(b, a.otherS) && within(a, b.otherS)),
+  );
 }
 
 /** A stretch of track edge outside the site boundary. */
@@ -146,11 +188,19 @@ function distanceToPolygon(poly: readonly (readonly [number, number])[], x: numb
  * Stretches where either track edge lies outside the site boundary polygon.
  * @param stride check spacing, m.
  */
-export function findOutsideBoundary(line: CentreLine, edges: TrackEdges, boundary: readonly (readonly [number, number])[], stride = 0.25): OutsideStretch[] {
+export function findOutsideBoundary(
+  line: CentreLine,
+  edges: TrackEdges,
+  boundary: readonly (readonly [number, number])[],
+  stride = 0.25,
+): OutsideStretch[] {
   const idx = stridedIndices(line, stride);
   const worst = idx.map((i) => {
     let w = 0;
-    for (const [x, y] of [[edges.leftX[i], edges.leftY[i]], [edges.rightX[i], edges.rightY[i]]]) {
+    for (const [x, y] of [
+      [edges.leftX[i], edges.leftY[i]],
+      [edges.rightX[i], edges.rightY[i]],
+    ]) {
       if (!insidePolygon(boundary, x, y)) w = Math.max(w, distanceToPolygon(boundary, x, y) || 1e-9);
     }
     return w;
@@ -166,15 +216,26 @@ export function findOutsideBoundary(line: CentreLine, edges: TrackEdges, boundar
 }
 
 /** The track edge point farthest from the driver stand (plan distance, m). */
-export function farthestFromStand(line: CentreLine, edges: TrackEdges, stand: { x: number; y: number }): { distance: number; s: number; x: number; y: number } {
-  let best = { distance: -1, s: 0, x: 0, y: 0 };
+export function farthestFromStand(
+  line: CentreLine,
+  edges: TrackEdges,
+  stand: { x: number; y: number },
+): { distance: number; s: number; x: number; y: number } {
+  let best2 = -1;
+  let bestI = 0;
+  let left = true;
   for (let i = 0; i < line.count; i++) {
-    for (const [x, y] of [[edges.leftX[i], edges.leftY[i]], [edges.rightX[i], edges.rightY[i]]]) {
-      const d = Math.hypot(x - stand.x, y - stand.y);
-      if (d > best.distance) best = { distance: d, s: line.s[i], x, y };
+    const l2 = (edges.leftX[i] - stand.x) ** 2 + (edges.leftY[i] - stand.y) ** 2;
+    const r2 = (edges.rightX[i] - stand.x) ** 2 + (edges.rightY[i] - stand.y) ** 2;
+    if (l2 > best2 || r2 > best2) {
+      best2 = Math.max(l2, r2);
+      bestI = i;
+      left = l2 >= r2;
     }
   }
-  return best;
+  const x = left ? edges.leftX[bestI] : edges.rightX[bestI];
+  const y = left ? edges.leftY[bestI] : edges.rightY[bestI];
+  return { distance: Math.sqrt(best2), s: line.s[bestI], x, y };
 }
 
 /**
@@ -182,15 +243,20 @@ export function farthestFromStand(line: CentreLine, edges: TrackEdges, stand: { 
  * start line, i.e. straights at the end of the list followed by straights at its beginning.
  * @returns its length, m, and the ids of its sections.
  */
-export function startStraight(sections: readonly ResolvedSection[]): { length: number; sectionIds: string[] } {
+export function startStraight(sections: readonly ResolvedSection[]): {
+  length: number;
+  sectionIds: string[];
+} {
   const before: ResolvedSection[] = [];
   const after: ResolvedSection[] = [];
   for (const s of sections) {
     if (s.kind !== "straight") break;
     after.push(s);
   }
-  if (after.length === sections.length) return { length: after.reduce((a, s) => a + s.length, 0), sectionIds: after.map((s) => s.id) };
-  for (let i = sections.length - 1; i >= 0 && sections[i].kind === "straight"; i--) before.unshift(sections[i]);
+  if (after.length === sections.length)
+    return { length: after.reduce((a, s) => a + s.length, 0), sectionIds: after.map((s) => s.id) };
+  for (let i = sections.length - 1; i >= 0 && sections[i].kind === "straight"; i--)
+    before.unshift(sections[i]);
   const run = before.concat(after);
   return { length: run.reduce((a, s) => a + s.length, 0), sectionIds: run.map((s) => s.id) };
 }
@@ -208,10 +274,12 @@ export interface MarshalSpread {
 
 /** How evenly the marshal points are spread around the lap. */
 export function marshalSpread(line: CentreLine, points: LayoutDocument["marshalPoints"]): MarshalSpread {
-  if (points.length === 0) return { positions: [], largestGap: line.length, evenShare: line.length, ratio: null };
+  if (points.length === 0)
+    return { positions: [], largestGap: line.length, evenShare: line.length, ratio: null };
   const positions = points.map((p) => nearestSample(line, p.x, p.y).s).sort((a, b) => a - b);
   let largestGap = positions[0] + line.length - positions[positions.length - 1];
-  for (let k = 1; k < positions.length; k++) largestGap = Math.max(largestGap, positions[k] - positions[k - 1]);
+  for (let k = 1; k < positions.length; k++)
+    largestGap = Math.max(largestGap, positions[k] - positions[k - 1]);
   const evenShare = line.length / positions.length;
   return { positions, largestGap, evenShare, ratio: largestGap / evenShare };
 }

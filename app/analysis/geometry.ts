@@ -71,7 +71,12 @@ const DEG = Math.PI / 180;
  * Pose after driving a length of constant curvature.
  * @param length m; @param curvature signed 1/m (positive = left).
  */
-export function advancePose(p: Pose, length: number, curvature: number, out: Pose = { x: 0, y: 0, heading: 0 }): Pose {
+export function advancePose(
+  p: Pose,
+  length: number,
+  curvature: number,
+  out: Pose = { x: 0, y: 0, heading: 0 },
+): Pose {
   const h = p.heading;
   if (Math.abs(curvature) < 1e-12) {
     out.x = p.x + length * Math.cos(h);
@@ -87,11 +92,19 @@ export function advancePose(p: Pose, length: number, curvature: number, out: Pos
 }
 
 /** Plan length (m) and signed curvature (1/m) of a section, with its jump profile. */
-export function sectionShape(section: LayoutSection): { length: number; curvature: number; profile: JumpProfile | null } {
+export function sectionShape(section: LayoutSection): {
+  length: number;
+  curvature: number;
+  profile: JumpProfile | null;
+} {
   if (section.kind === "straight") return { length: section.length, curvature: 0, profile: null };
   if (section.kind === "turn") {
     const sign = section.direction === "left" ? 1 : -1;
-    return { length: section.radius * section.angleDeg * DEG, curvature: sign / section.radius, profile: null };
+    return {
+      length: section.radius * section.angleDeg * DEG,
+      curvature: sign / section.radius,
+      profile: null,
+    };
   }
   const profile = jumpProfile(section);
   return { length: profile.length, curvature: 0, profile };
@@ -109,7 +122,18 @@ export function resolveSections(doc: Pick<LayoutDocument, "start" | "sections">)
   return doc.sections.map((section, index) => {
     const { length, curvature, profile } = sectionShape(section);
     const end = advancePose(pose, length, curvature);
-    const r: ResolvedSection = { index, id: section.id, kind: section.kind, length, curvature, turnAngle: curvature * length, startS: s, start: pose, end, profile };
+    const r: ResolvedSection = {
+      index,
+      id: section.id,
+      kind: section.kind,
+      length,
+      curvature,
+      turnAngle: curvature * length,
+      startS: s,
+      start: pose,
+      end,
+      profile,
+    };
     pose = end;
     s += length;
     return r;
@@ -217,7 +241,11 @@ export function trackEdges(line: CentreLine, width: number): TrackEdges {
 }
 
 /** The centre-line sample nearest a plan point: its index, lap distance (m) and distance (m). */
-export function nearestSample(line: CentreLine, x: number, y: number): { index: number; s: number; distance: number } {
+export function nearestSample(
+  line: CentreLine,
+  x: number,
+  y: number,
+): { index: number; s: number; distance: number } {
   let best = 0;
   let bestD2 = Infinity;
   for (let i = 0; i < line.count; i++) {
@@ -242,7 +270,10 @@ export interface LayoutGeometry {
  * Chains, samples and measures a layout.
  * @param spacing largest distance between centre-line samples, m.
  */
-export function layoutGeometry(doc: Pick<LayoutDocument, "start" | "sections">, spacing = 0.1): LayoutGeometry {
+export function layoutGeometry(
+  doc: Pick<LayoutDocument, "start" | "sections">,
+  spacing = 0.1,
+): LayoutGeometry {
   const sections = resolveSections(doc);
   const line = sampleCentreLine(sections, spacing);
   return { sections, line, lapLength: line.length, closure: closureError(sections, startPose(doc)) };

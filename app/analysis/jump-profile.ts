@@ -6,16 +6,17 @@
  * plan length of the jump section. Mound back sides are MOUND_BACK_SLOPE_DEG steep.
  */
 import type { JumpSection } from "~/lib/layout-document";
-import { MOUND_BACK_SLOPE_DEG } from "~/lib/layout-document";
+import { MOUND_BACK_SLOPE_DEG } from "~/lib/layout-document-checks";
 
 /** Fraction of the way down the landing ramp where a planned landing touches down (engine.md 2). */
 export const SWEET_SPOT_FRACTION = 1 / 3;
 
+/** A jump's ground profile. Shared between callers (see jumpProfile): treat as read-only. */
 export interface JumpProfile {
   /** Distance along the section of each point, m (increasing, d[0] = 0). */
-  d: number[];
+  readonly d: readonly number[];
   /** Ground height of each point, m. */
-  h: number[];
+  readonly h: readonly number[];
   lipIndex: number;
   landingStartIndex: number;
   landingEndIndex: number;
@@ -32,16 +33,35 @@ const BACK = Math.tan(MOUND_BACK_SLOPE_DEG * DEG);
 
 type Pts = [number, number][];
 
+const profileCache = new WeakMap<JumpSection, JumpProfile>();
+
 /**
- * Ground profile of a jump section.
+ * Ground profile of a jump section. With the default sweet spot the result is remembered per
+ * section object, so an unchanged section of an edited layout costs nothing and keeps the same
+ * profile object (whose speed window is remembered too, lap-jumps.ts).
  * @param sweetSpotFraction where down the landing ramp a planned landing touches down (0..1).
  */
 export function jumpProfile(section: JumpSection, sweetSpotFraction = SWEET_SPOT_FRACTION): JumpProfile {
+  if (sweetSpotFraction !== SWEET_SPOT_FRACTION) return buildProfile(section, sweetSpotFraction);
+  let p = profileCache.get(section);
+  if (!p) {
+    p = buildProfile(section, SWEET_SPOT_FRACTION);
+    profileCache.set(section, p);
+  }
+  return p;
+}
+
+function buildProfile(section: JumpSection, sweetSpotFraction: number): JumpProfile {
   switch (section.preset) {
     case "tabletop": {
       const face = section.faceHeight / Math.tan(section.faceAngleDeg * DEG);
       const top = face + section.tableLength;
-      const pts: Pts = [[0, 0], [face, section.faceHeight], [top, section.faceHeight], [top + section.faceHeight / Math.tan(section.landingAngleDeg * DEG), 0]];
+      const pts: Pts = [
+        [0, 0],
+        [face, section.faceHeight],
+        [top, section.faceHeight],
+        [top + section.faceHeight / Math.tan(section.landingAngleDeg * DEG), 0],
+      ];
       return finish(pts, 1, 2, 3, sweetSpotFraction);
     }
     case "double":
@@ -60,7 +80,13 @@ export function jumpProfile(section: JumpSection, sweetSpotFraction = SWEET_SPOT
       return finish(pts, per / 2, per + per / 2, 2 * per, sweetSpotFraction);
     }
     case "custom":
-      return finish(section.profile.map(([d, h]) => [d, h]), section.lipIndex, section.landingStartIndex, section.landingEndIndex, sweetSpotFraction);
+      return finish(
+        section.profile.map(([d, h]) => [d, h]),
+        section.lipIndex,
+        section.landingStartIndex,
+        section.landingEndIndex,
+        sweetSpotFraction,
+      );
   }
 }
 
@@ -73,14 +99,27 @@ function gapJump(s: GapJump, fraction: number): JumpProfile {
   const lip = h1 / Math.tan(s.faceAngleDeg * DEG);
   const crest = lip + s.gap;
   const down = h2 / Math.tan(s.landingAngleDeg * DEG);
-  const mounds: Pts[] = [[[0, 0], [lip, h1], [lip + h1 / BACK, 0]]];
+  const mounds: Pts[] = [
+    [
+      [0, 0],
+      [lip, h1],
+      [lip + h1 / BACK, 0],
+    ],
+  ];
   if (s.preset === "triple") {
     const mid = lip + s.gap / 2;
     const hm = Math.min(h1, h2);
-    mounds.push([[mid - hm / BACK, 0], [mid, hm], [mid + hm / BACK, 0]]);
+    mounds.push([
+      [mid - hm / BACK, 0],
+      [mid, hm],
+      [mid + hm / BACK, 0],
+    ]);
   }
   const deck = s.preset === "step-up" ? s.deckLength : 0;
-  const landing: Pts = [[crest - h2 / BACK, 0], [crest, h2]];
+  const landing: Pts = [
+    [crest - h2 / BACK, 0],
+    [crest, h2],
+  ];
   if (deck > 0) landing.push([crest + deck, h2]);
   landing.push([crest + deck + down, 0]);
   mounds.push(landing);
@@ -116,12 +155,27 @@ function joinMounds(mounds: Pts[]): Pts {
   return out;
 }
 
-function finish(pts: Pts, lipIndex: number, landingStartIndex: number, landingEndIndex: number, fraction: number): JumpProfile {
+function finish(
+  pts: Pts,
+  lipIndex: number,
+  landingStartIndex: number,
+  landingEndIndex: number,
+  fraction: number,
+): JumpProfile {
   const d = pts.map((p) => p[0]);
   const h = pts.map((p) => p[1]);
   const faceAngle = Math.atan2(h[lipIndex] - h[lipIndex - 1], d[lipIndex] - d[lipIndex - 1]);
   const sweetSpot = d[landingStartIndex] + fraction * (d[landingEndIndex] - d[landingStartIndex]);
-  return { d, h, lipIndex, landingStartIndex, landingEndIndex, length: d[d.length - 1], faceAngle, sweetSpot };
+  return {
+    d,
+    h,
+    lipIndex,
+    landingStartIndex,
+    landingEndIndex,
+    length: d[d.length - 1],
+    faceAngle,
+    sweetSpot,
+  };
 }
 
 /**

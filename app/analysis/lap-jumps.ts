@@ -36,51 +36,61 @@ const SEARCH_MAX = 40;
 const SCAN_STEP = 0.25;
 
 /**
- * Lowest takeoff speed (m/s) whose first touchdown lies at or beyond `target` (m along the
- * section); `beyond` false: the highest speed whose touchdown lies at or before it. Null when no
- * speed in the search range qualifies. Scans upward in 0.25 m/s steps, then bisects to 1e-6 m/s.
+ * Lowest takeoff speed (m/s) from `from` up whose first touchdown lies beyond `target` (m along
+ * the section; at or beyond it unless `strict`). Scans upward in 0.25 m/s steps, then bisects to
+ * 1e-6 m/s. Null when no speed up to the search limit qualifies.
  */
-function speedForTouchdown(profile: JumpProfile, target: number, beyond: boolean, g: number): number | null {
-  const reaches = (v: number) => ballisticTouchdown(profile, v, g).d >= target - 1e-9;
-  if (beyond) {
-    let prev = SEARCH_MIN;
-    if (reaches(prev)) return prev;
-    for (let v = SEARCH_MIN + SCAN_STEP; v <= SEARCH_MAX + 1e-9; v += SCAN_STEP) {
-      if (reaches(v)) return bisect(prev, v, reaches);
-      prev = v;
+function firstSpeedPast(
+  profile: JumpProfile,
+  target: number,
+  from: number,
+  strict: boolean,
+  g: number,
+): number | null {
+  const past = (v: number) => {
+    const d = ballisticTouchdown(profile, v, g).d;
+    return strict ? d > target + 1e-9 : d >= target - 1e-9;
+  };
+  if (past(from)) return from;
+  let lo = from;
+  for (let v = from + SCAN_STEP; lo < SEARCH_MAX; v += SCAN_STEP) {
+    const hi = Math.min(v, SEARCH_MAX);
+    if (past(hi)) {
+      let a = lo;
+      let b = hi;
+      while (b - a > 1e-6) {
+        const mid = 0.5 * (a + b);
+        if (past(mid)) b = mid;
+        else a = mid;
+      }
+      return b;
     }
-    return null;
-  }
-  const past = (v: number) => ballisticTouchdown(profile, v, g).d > target + 1e-9;
-  let prev = SEARCH_MAX;
-  if (!past(prev)) return prev;
-  for (let v = SEARCH_MAX - SCAN_STEP; v >= SEARCH_MIN - 1e-9; v -= SCAN_STEP) {
-    if (!past(v)) return bisect(v, prev, past);
-    prev = v;
+    lo = hi;
   }
   return null;
 }
 
-/** Smallest v in (lo, hi] with test(v) true, given test(lo) false and test(hi) true. */
-function bisect(lo: number, hi: number, test: (v: number) => boolean): number {
-  while (hi - lo > 1e-6) {
-    const mid = 0.5 * (lo + hi);
-    if (test(mid)) hi = mid;
-    else lo = mid;
-  }
-  return hi;
-}
+const windowCache = new WeakMap<JumpProfile, { g: number; window: JumpWindow }>();
 
 /**
  * Drag-free speed window and sweet-spot speed of a jump profile, from where the flight first
- * meets the ground (so a flight that clips a crest on the way does not count as reaching the ramp).
+ * meets the ground (so a flight that clips a crest on the way does not count as reaching the
+ * ramp). The top of the window is where the touchdown passes the ramp's end (40 m/s at most).
+ * Remembered per profile object.
  */
 export function ballisticJumpWindow(profile: JumpProfile, g = STANDARD_GRAVITY): JumpWindow {
-  const windowMin = speedForTouchdown(profile, profile.d[profile.landingStartIndex], true, g);
-  const windowMax = speedForTouchdown(profile, profile.d[profile.landingEndIndex], false, g);
-  const sweet = speedForTouchdown(profile, profile.sweetSpot, true, g);
-  const ok = windowMin !== null && windowMax !== null && windowMin <= windowMax;
-  return { windowMin: ok ? windowMin : null, sweetSpotSpeed: ok ? sweet : null, windowMax: ok ? windowMax : null };
+  const cached = windowCache.get(profile);
+  if (cached && cached.g === g) return cached.window;
+  const none: JumpWindow = { windowMin: null, sweetSpotSpeed: null, windowMax: null };
+  let window = none;
+  const windowMin = firstSpeedPast(profile, profile.d[profile.landingStartIndex], SEARCH_MIN, false, g);
+  if (windowMin !== null) {
+    const sweet = firstSpeedPast(profile, profile.sweetSpot, windowMin, false, g);
+    const beyond = firstSpeedPast(profile, profile.d[profile.landingEndIndex], sweet ?? windowMin, true, g);
+    window = { windowMin, sweetSpotSpeed: sweet, windowMax: beyond ?? SEARCH_MAX };
+  }
+  windowCache.set(profile, { g, window });
+  return window;
 }
 
 export interface BallisticTouchdown {
@@ -100,7 +110,11 @@ export interface BallisticTouchdown {
  * Where a drag-free flight from the lip at `speed` (m/s along the face) first meets the ground:
  * the profile, then flat ground at height 0 beyond it.
  */
-export function ballisticTouchdown(profile: JumpProfile, speed: number, g = STANDARD_GRAVITY): BallisticTouchdown {
+export function ballisticTouchdown(
+  profile: JumpProfile,
+  speed: number,
+  g = STANDARD_GRAVITY,
+): BallisticTouchdown {
   const a = profile.faceAngle;
   const lx = profile.d[profile.lipIndex];
   const lz = profile.h[profile.lipIndex];
@@ -121,8 +135,9 @@ export function ballisticTouchdown(profile: JumpProfile, speed: number, g = STAN
     const disc = B * B + 4 * A * C;
     if (disc < 0) continue;
     const r = Math.sqrt(disc);
-    const roots = [(B - r) / (2 * A), (B + r) / (2 * A)].sort((p, q) => p - q);
-    for (const X of roots) {
+    // A > 0, so the smaller root comes first.
+    for (let root = 0; root < 2; root++) {
+      const X = (B + (root === 0 ? -r : r)) / (2 * A);
       if (X > 1e-9 && X >= x0 - 1e-12 && X <= x1) {
         const h = h0 + m * (X - x0);
         const slope = Math.atan(m);

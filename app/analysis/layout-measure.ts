@@ -48,7 +48,9 @@ export function measureLayout(doc: LayoutDocument, options: MeasureOptions = {})
   const { line, sections } = geometry;
   const edges = trackEdges(line, doc.trackWidth);
   const stand = doc.driverStand;
-  const hidden = stand ? findHiddenFromStand(line, sections, doc.trackWidth, stand, { carHeight: options.carHeight }) : null;
+  const hidden = stand
+    ? findHiddenFromStand(line, sections, doc.trackWidth, stand, { carHeight: options.carHeight })
+    : null;
   return {
     geometry,
     edges,
@@ -75,6 +77,10 @@ export function ruleMeasurements(doc: LayoutDocument, m: LayoutMeasures): RuleMe
 }
 
 /** Rule checks of a layout against its chosen guidance set, with a club's overrides. */
-export function layoutRuleReport(doc: LayoutDocument, m: LayoutMeasures, overrides: GuidanceOverrides = {}): RuleReport {
+export function layoutRuleReport(
+  doc: LayoutDocument,
+  m: LayoutMeasures,
+  overrides: GuidanceOverrides = {},
+): RuleReport {
   return checkRules(ruleMeasurements(doc, m), doc.guidance, overrides);
 }

@@ -65,32 +65,100 @@ export interface RuleReport {
   note: string;
 }
 
-export const RULEBOOK_SOURCE = "Sanctioning bodies' track guidance as quoted in their public rulebooks; verify against the current edition";
-const MARSHAL_SOURCE = "Loftline default, an estimate (not from a rulebook): \"spread evenly\" read as no stretch longer than 1.5 times an even share of the lap";
+export const RULEBOOK_SOURCE =
+  "Sanctioning bodies' track guidance as quoted in their public rulebooks; verify against the current edition";
+const MARSHAL_SOURCE =
+  'Loftline default, an estimate (not from a rulebook): "spread evenly" read as no stretch longer than 1.5 times an even share of the lap';
 
 export const RULES_NOTE =
   "These checks are estimates from the drawing, not a safety certification. The sanctioning body's current rulebook decides, together with local regulations and the site's own risk assessment.";
 
-export const GUIDANCE_SETS: Record<GuidanceSetId, { id: GuidanceSetId; label: string; values: GuidanceValues }> = {
+export const GUIDANCE_SETS: Record<
+  GuidanceSetId,
+  { id: GuidanceSetId; label: string; values: GuidanceValues }
+> = {
   club: {
     id: "club",
     label: "Club track guidance",
-    values: { minTrackWidth: 2.4, minLapLength: 120, maxStandDistance: 50, minStartStraight: 20, maxHiddenLength: 0, maxMarshalGapRatio: 1.5 },
+    values: {
+      minTrackWidth: 2.4,
+      minLapLength: 120,
+      maxStandDistance: 50,
+      minStartStraight: 20,
+      maxHiddenLength: 0,
+      maxMarshalGapRatio: 1.5,
+    },
   },
   national: {
     id: "national",
     label: "National-level track guidance",
-    values: { minTrackWidth: 3, minLapLength: 120, maxStandDistance: 50, minStartStraight: 20, maxHiddenLength: 0, maxMarshalGapRatio: 1.5 },
+    values: {
+      minTrackWidth: 3,
+      minLapLength: 120,
+      maxStandDistance: 50,
+      minStartStraight: 20,
+      maxHiddenLength: 0,
+      maxMarshalGapRatio: 1.5,
+    },
   },
 };
 
-const RULES: { id: RuleId; label: string; comparison: "at least" | "at most"; unit: RuleCheck["unit"]; measure: (m: RuleMeasurements) => number | null; missing: string }[] = [
-  { id: "minTrackWidth", label: "Track width", comparison: "at least", unit: "m", measure: (m) => m.trackWidth, missing: "" },
-  { id: "minLapLength", label: "Lap length", comparison: "at least", unit: "m", measure: (m) => m.lapLength, missing: "" },
-  { id: "maxStandDistance", label: "Farthest point from the driver stand", comparison: "at most", unit: "m", measure: (m) => m.standDistance, missing: "no driver stand placed" },
-  { id: "minStartStraight", label: "Start straight without jumps", comparison: "at least", unit: "m", measure: (m) => m.startStraight, missing: "" },
-  { id: "maxHiddenLength", label: "Track hidden from the driver stand", comparison: "at most", unit: "m", measure: (m) => m.hiddenLength, missing: "no driver stand placed" },
-  { id: "maxMarshalGapRatio", label: "Marshal points spread evenly", comparison: "at most", unit: "x even share", measure: (m) => m.marshalGapRatio, missing: "no marshal points placed" },
+const RULES: {
+  id: RuleId;
+  label: string;
+  comparison: "at least" | "at most";
+  unit: RuleCheck["unit"];
+  measure: (m: RuleMeasurements) => number | null;
+  missing: string;
+}[] = [
+  {
+    id: "minTrackWidth",
+    label: "Track width",
+    comparison: "at least",
+    unit: "m",
+    measure: (m) => m.trackWidth,
+    missing: "",
+  },
+  {
+    id: "minLapLength",
+    label: "Lap length",
+    comparison: "at least",
+    unit: "m",
+    measure: (m) => m.lapLength,
+    missing: "",
+  },
+  {
+    id: "maxStandDistance",
+    label: "Farthest point from the driver stand",
+    comparison: "at most",
+    unit: "m",
+    measure: (m) => m.standDistance,
+    missing: "no driver stand placed",
+  },
+  {
+    id: "minStartStraight",
+    label: "Start straight without jumps",
+    comparison: "at least",
+    unit: "m",
+    measure: (m) => m.startStraight,
+    missing: "",
+  },
+  {
+    id: "maxHiddenLength",
+    label: "Track hidden from the driver stand",
+    comparison: "at most",
+    unit: "m",
+    measure: (m) => m.hiddenLength,
+    missing: "no driver stand placed",
+  },
+  {
+    id: "maxMarshalGapRatio",
+    label: "Marshal points spread evenly",
+    comparison: "at most",
+    unit: "x even share",
+    measure: (m) => m.marshalGapRatio,
+    missing: "no marshal points placed",
+  },
 ];
 
 /**
@@ -102,7 +170,8 @@ export function guidanceValues(guidance: GuidanceSetId, overrides: GuidanceOverr
   for (const [key, value] of Object.entries(overrides) as [RuleId, number | undefined][]) {
     if (value === undefined) continue;
     if (!(key in values)) throw new RangeError(`overrides.${key}: is not a rule`);
-    if (!Number.isFinite(value) || value < 0) throw new RangeError(`overrides.${key}: must be a number of at least 0`);
+    if (!Number.isFinite(value) || value < 0)
+      throw new RangeError(`overrides.${key}: must be a number of at least 0`);
     values[key] = value;
   }
   return values;
@@ -111,7 +180,11 @@ export function guidanceValues(guidance: GuidanceSetId, overrides: GuidanceOverr
 const fmt = (x: number) => (Math.abs(x) >= 10 ? x.toFixed(0) : x.toFixed(2).replace(/\.?0+$/, ""));
 
 /** Checks measured values against a guidance set (with a club's overrides). */
-export function checkRules(m: RuleMeasurements, guidance: GuidanceSetId, overrides: GuidanceOverrides = {}): RuleReport {
+export function checkRules(
+  m: RuleMeasurements,
+  guidance: GuidanceSetId,
+  overrides: GuidanceOverrides = {},
+): RuleReport {
   const values = guidanceValues(guidance, overrides);
   const checks = RULES.map((rule): RuleCheck => {
     const value = values[rule.id];
@@ -125,13 +198,43 @@ export function checkRules(m: RuleMeasurements, guidance: GuidanceSetId, overrid
     let measured = rule.measure(m);
     // No marshal points at all cannot be "spread evenly".
     if (measured === null && rule.id === "maxMarshalGapRatio")
-      return { id: rule.id, label: rule.label, value, comparison: rule.comparison, unit: rule.unit, measured: null, status: "fail", detail: rule.missing, source };
+      return {
+        id: rule.id,
+        label: rule.label,
+        value,
+        comparison: rule.comparison,
+        unit: rule.unit,
+        measured: null,
+        status: "fail",
+        detail: rule.missing,
+        source,
+      };
     if (measured === null)
-      return { id: rule.id, label: rule.label, value, comparison: rule.comparison, unit: rule.unit, measured: null, status: "not checked", detail: rule.missing, source };
+      return {
+        id: rule.id,
+        label: rule.label,
+        value,
+        comparison: rule.comparison,
+        unit: rule.unit,
+        measured: null,
+        status: "not checked",
+        detail: rule.missing,
+        source,
+      };
     measured = Math.round(measured * 1000) / 1000;
     const pass = rule.comparison === "at least" ? measured >= value : measured <= value;
     const detail = `${fmt(measured)} ${rule.unit} measured; ${rule.comparison} ${fmt(value)} ${rule.unit} required`;
-    return { id: rule.id, label: rule.label, value, comparison: rule.comparison, unit: rule.unit, measured, status: pass ? "pass" : "fail", detail, source };
+    return {
+      id: rule.id,
+      label: rule.label,
+      value,
+      comparison: rule.comparison,
+      unit: rule.unit,
+      measured,
+      status: pass ? "pass" : "fail",
+      detail,
+      source,
+    };
   });
   return {
     guidance,

@@ -19,7 +19,10 @@ import { ballisticJumpWindow, ballisticTouchdown, STANDARD_GRAVITY, type JumpWin
  * What the lap model needs of a car: a subset of CarParams (cars.ts), so a class preset or a
  * user's car profile can be passed as it is.
  */
-export type LapCar = Pick<CarParams, "topSpeed" | "accel0" | "brakeDecel" | "mu" | "wheelbase" | "steeringLockRad">;
+export type LapCar = Pick<
+  CarParams,
+  "topSpeed" | "accel0" | "brakeDecel" | "mu" | "wheelbase" | "steeringLockRad"
+>;
 
 export interface JumpLap {
   sectionIndex: number;
@@ -85,7 +88,11 @@ export function cornerSpeed(car: LapCar, radius: number, g = STANDARD_GRAVITY): 
 }
 
 /** Speed around the lap for one car; the layout is treated as a closed loop. */
-export function lapSpeed(geo: { sections: readonly ResolvedSection[]; line: CentreLine }, car: LapCar, options: LapOptions = {}): LapSpeed {
+export function lapSpeed(
+  geo: { sections: readonly ResolvedSection[]; line: CentreLine },
+  car: LapCar,
+  options: LapOptions = {},
+): LapSpeed {
   const g = options.g ?? STANDARD_GRAVITY;
   const { line, sections } = geo;
   const N = line.count - 1;
@@ -106,14 +113,22 @@ export function lapSpeed(geo: { sections: readonly ResolvedSection[]; line: Cent
       const lip = first + Math.round((p.d[p.lipIndex] / s.length) * n);
       lipOf[lip % N] = s.index;
       const window = options.jumpWindow ? options.jumpWindow(s, p) : ballisticJumpWindow(p, g);
-      return { section: s, profile: p, lip: lip % N, window, record: null as JumpLap | null, td: -1, steps: 0 };
+      return {
+        section: s,
+        profile: p,
+        lip: lip % N,
+        window,
+        record: null as JumpLap | null,
+        td: -1,
+        steps: 0,
+      };
     });
   const bySection = new Map(jumpInfo.map((j) => [j.section.index, j]));
   const ds = (i: number) => line.s[i + 1] - line.s[i];
   const fwd = new Float64Array(N);
   const airborne = new Uint8Array(N);
   let v = 0;
-  for (let step = 0; step < 2 * N; ) {
+  for (let step = 0; step < 2 * N;) {
     const i = (i0 + step) % N;
     const jump = lipOf[i] >= 0 ? bySection.get(lipOf[i])! : null;
     if (jump) {

@@ -9,7 +9,8 @@ export const EXAMPLE_LAYOUT = {
   formatVersion: 1,
   units: "metres-degrees",
   name: "Example oval",
-  description: "A practice oval: start straight, two hairpin-ish ends, a tabletop and a roller.",
+  description:
+    "A practice oval: a start straight, two half-circle ends, a tabletop and a roller on the back straight.",
   surface: "dirt",
   trackWidth: 3,
   start: { x: 0, y: 0, headingDeg: 0 },
@@ -17,7 +18,15 @@ export const EXAMPLE_LAYOUT = {
     { id: "start", kind: "straight", length: 24 },
     { id: "far-end", kind: "turn", radius: 7, angleDeg: 180, direction: "left" },
     { id: "run-up", kind: "straight", length: 6 },
-    { id: "tabletop", kind: "jump", preset: "tabletop", faceHeight: 0.4, faceAngleDeg: 30, tableLength: 2.5, landingAngleDeg: 25 },
+    {
+      id: "tabletop",
+      kind: "jump",
+      preset: "tabletop",
+      faceHeight: 0.4,
+      faceAngleDeg: 30,
+      tableLength: 2.5,
+      landingAngleDeg: 25,
+    },
     { id: "between", kind: "straight", length: 5 },
     {
       id: "roller",

@@ -6,12 +6,17 @@
  * degrees in the file; the engine converts to radians at its edge.
  */
 import { z } from "zod";
+import { crossFieldIssues } from "./layout-document-checks";
+
+export { MOUND_BACK_SLOPE_DEG, minimumGap } from "./layout-document-checks";
 
 /** A number in a range with messages that name the unit ("must be at least 1 m"). */
 function measure(min: number, max: number, unit: string) {
   const u = unit === "" ? "" : ` ${unit}`;
   return z
-    .number({ error: (iss) => (iss.input === undefined ? "is required" : `must be a number${u ? ` (${unit})` : ""}`) })
+    .number({
+      error: (iss) => (iss.input === undefined ? "is required" : `must be a number${u ? ` (${unit})` : ""}`),
+    })
     .min(min, { error: `must be at least ${min}${u}` })
     .max(max, { error: `must be at most ${max}${u}` });
 }
@@ -110,9 +115,12 @@ export const customJumpSchema = z.object({
   ...jumpBase,
   preset: z.literal("custom"),
   /** Ground profile: [distance along the section m, height m], distances increasing from 0. */
-  profile: z.array(profilePoint, { error: "must be a list of [distance, height] pairs" }).min(3, {
-    error: "must have at least 3 points",
-  }).max(500, { error: "must have at most 500 points" }),
+  profile: z
+    .array(profilePoint, { error: "must be a list of [distance, height] pairs" })
+    .min(3, {
+      error: "must have at least 3 points",
+    })
+    .max(500, { error: "must have at most 500 points" }),
   /** Index of the takeoff lip in the profile. */
   lipIndex: count(1, 498),
   /** Indices of the first and last points of the landing ramp. */
@@ -120,17 +128,38 @@ export const customJumpSchema = z.object({
   landingEndIndex: count(2, 499),
 });
 
-export const JUMP_PRESETS = ["tabletop", "double", "triple", "step-up", "step-down", "whoops", "custom"] as const;
+export const JUMP_PRESETS = [
+  "tabletop",
+  "double",
+  "triple",
+  "step-up",
+  "step-down",
+  "whoops",
+  "custom",
+] as const;
 
 export const jumpSectionSchema = z.discriminatedUnion(
   "preset",
-  [tabletopJumpSchema, doubleJumpSchema, tripleJumpSchema, stepUpJumpSchema, stepDownJumpSchema, whoopsJumpSchema, customJumpSchema],
+  [
+    tabletopJumpSchema,
+    doubleJumpSchema,
+    tripleJumpSchema,
+    stepUpJumpSchema,
+    stepDownJumpSchema,
+    whoopsJumpSchema,
+    customJumpSchema,
+  ],
   { error: `must be one of ${JUMP_PRESETS.map((p) => `"${p}"`).join(", ")}` },
 );
 
-export const sectionSchema = z.discriminatedUnion("kind", [straightSectionSchema, turnSectionSchema, jumpSectionSchema], {
-  error: (iss) => ((iss.code as string) === "invalid_type" ? "must be an object" : 'must be "straight", "turn" or "jump"'),
-});
+export const sectionSchema = z.discriminatedUnion(
+  "kind",
+  [straightSectionSchema, turnSectionSchema, jumpSectionSchema],
+  {
+    error: (iss) =>
+      (iss.code as string) === "invalid_type" ? "must be an object" : 'must be "straight", "turn" or "jump"',
+  },
+);
 
 const pointSchema = z.tuple([measure(-10000, 10000, "m"), measure(-10000, 10000, "m")], {
   error: "must be a pair [x m, y m]",
@@ -141,21 +170,57 @@ const layoutDocumentShape = z.object({
   formatVersion: z.literal(1, { error: "must be 1 (the only version so far)" }),
   /** Reminder of the file's units; always metres and degrees. */
   units: z.literal("metres-degrees", { error: 'must be "metres-degrees"' }).default("metres-degrees"),
-  name: z.string({ error: "must be text" }).trim().min(1, { error: "must not be empty" }).max(100, { error: "must be at most 100 characters" }),
-  description: z.string({ error: "must be text" }).max(2000, { error: "must be at most 2000 characters" }).optional(),
-  surface: z.enum(["dirt", "clay", "turf", "carpet"], { error: 'must be "dirt", "clay", "turf" or "carpet"' }),
+  name: z
+    .string({ error: "must be text" })
+    .trim()
+    .min(1, { error: "must not be empty" })
+    .max(100, { error: "must be at most 100 characters" }),
+  description: z
+    .string({ error: "must be text" })
+    .max(2000, { error: "must be at most 2000 characters" })
+    .optional(),
+  surface: z.enum(["dirt", "clay", "turf", "carpet"], {
+    error: 'must be "dirt", "clay", "turf" or "carpet"',
+  }),
   /** Track width between the edges, m. */
   trackWidth: measure(1, 10, "m"),
   /** Start pose: position of the start line on the centre line, m, and heading, degrees anticlockwise from +X. */
-  start: z.object({ x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), headingDeg: measure(-360, 360, "deg") }, { error: "must be an object {x, y, headingDeg}" }),
-  sections: z.array(sectionSchema, { error: "must be a list of sections" }).min(2, { error: "must have at least 2 sections" }).max(500, { error: "must have at most 500 sections" }),
+  start: z.object(
+    { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), headingDeg: measure(-360, 360, "deg") },
+    { error: "must be an object {x, y, headingDeg}" },
+  ),
+  sections: z
+    .array(sectionSchema, { error: "must be a list of sections" })
+    .min(2, { error: "must have at least 2 sections" })
+    .max(500, { error: "must have at most 500 sections" }),
   /** Site boundary polygon in plan, [[x, y], ...] m. */
-  siteBoundary: z.array(pointSchema, { error: "must be a list of [x, y] points" }).min(3, { error: "must have at least 3 points" }).max(200, { error: "must have at most 200 points" }).optional(),
+  siteBoundary: z
+    .array(pointSchema, { error: "must be a list of [x, y] points" })
+    .min(3, { error: "must have at least 3 points" })
+    .max(200, { error: "must have at most 200 points" })
+    .optional(),
   /** Driver stand: position m and the drivers' eye height above the ground m. */
-  driverStand: z.object({ x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), eyeHeight: measure(0.5, 15, "m") }, { error: "must be an object {x, y, eyeHeight}" }).optional(),
-  marshalPoints: z.array(z.object({ x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m") }, { error: "must be an object {x, y}" }), { error: "must be a list of {x, y}" }).max(50, { error: "must have at most 50 points" }).default([]),
+  driverStand: z
+    .object(
+      { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), eyeHeight: measure(0.5, 15, "m") },
+      { error: "must be an object {x, y, eyeHeight}" },
+    )
+    .optional(),
+  marshalPoints: z
+    .array(
+      z.object(
+        { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m") },
+        { error: "must be an object {x, y}" },
+      ),
+      { error: "must be a list of {x, y}" },
+    )
+    .max(50, { error: "must have at most 50 points" })
+    .default([]),
   /** Car class ids (class presets or a club's own classes). */
-  carClasses: z.array(idSchema, { error: "must be a list of class ids" }).min(1, { error: "must name at least one car class" }).max(10, { error: "must have at most 10 classes" }),
+  carClasses: z
+    .array(idSchema, { error: "must be a list of class ids" })
+    .min(1, { error: "must name at least one car class" })
+    .max(10, { error: "must have at most 10 classes" }),
   /** Track guidance set the rule checks use. */
   guidance: z.enum(["club", "national"], { error: 'must be "club" or "national"' }).default("club"),
   /**
@@ -180,10 +245,13 @@ const layoutDocumentShape = z.object({
 
 /** The full schema: field checks plus the checks that span fields (ids unique, profiles well formed). */
 export const layoutDocumentSchema = layoutDocumentShape.superRefine((doc, ctx) => {
-  for (const issue of crossFieldIssues(doc)) ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
+  for (const issue of crossFieldIssues(doc))
+    ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
 });
 
 export type LayoutDocument = z.infer<typeof layoutDocumentSchema>;
+/** The document's fields before the checks that span several of them. */
+export type LayoutDocumentFields = z.infer<typeof layoutDocumentShape>;
 /** The document as written in a file, before defaults are filled in. */
 export type LayoutDocumentInput = z.input<typeof layoutDocumentSchema>;
 export type LayoutSection = z.infer<typeof sectionSchema>;
@@ -193,18 +261,6 @@ export type JumpSection = z.infer<typeof jumpSectionSchema>;
 export type JumpPreset = JumpSection["preset"];
 export type CustomJumpSection = z.infer<typeof customJumpSchema>;
 
-/** Slope of the back sides of takeoff and landing mounds in the generated jump profiles, degrees. */
-export const MOUND_BACK_SLOPE_DEG = 40;
-
-/**
- * Shortest gap (m) for which the lower crest of a generated jump is not buried under the back
- * side of the higher mound (twice as far for a triple, whose middle hump sits half way).
- */
-export function minimumGap(preset: "double" | "triple" | "step-up" | "step-down", faceHeight: number, landingHeight: number): number {
-  const run = Math.abs(faceHeight - landingHeight) / Math.tan((MOUND_BACK_SLOPE_DEG * Math.PI) / 180);
-  return (preset === "triple" ? 2 : 1) * run + 0.1;
-}
-
 /** One problem found in a layout file: the field's path ("sections[3].radius") and what is wrong. */
 export interface LayoutIssue {
   path: string;
@@ -212,58 +268,6 @@ export interface LayoutIssue {
 }
 
 export type ParseLayoutResult = { ok: true; document: LayoutDocument } | { ok: false; issues: LayoutIssue[] };
-
-type RawPath = (string | number)[];
-const EPS = 1e-6;
-
-/** Checks that span several fields; runs on a document whose fields are each valid. */
-function crossFieldIssues(doc: z.infer<typeof layoutDocumentShape>): { path: RawPath; message: string }[] {
-  const out: { path: RawPath; message: string }[] = [];
-  const seen = new Map<string, number>();
-  doc.sections.forEach((s, i) => {
-    const first = seen.get(s.id);
-    if (first !== undefined) out.push({ path: ["sections", i, "id"], message: `repeats the id of sections[${first}]` });
-    else seen.set(s.id, i);
-    if (s.kind !== "jump") return;
-    const at = (field: string): RawPath => ["sections", i, field];
-    if (s.preset === "step-up" && s.landingHeight <= s.faceHeight)
-      out.push({ path: at("landingHeight"), message: "must be higher than faceHeight for a step-up" });
-    if (s.preset === "step-down" && s.landingHeight >= s.faceHeight)
-      out.push({ path: at("landingHeight"), message: "must be lower than faceHeight for a step-down" });
-    if (s.preset === "triple" && s.gap < 3) out.push({ path: at("gap"), message: "must be at least 3 m for a triple" });
-    if (s.preset === "double" || s.preset === "triple" || s.preset === "step-up" || s.preset === "step-down") {
-      const need = minimumGap(s.preset, s.faceHeight, s.landingHeight);
-      if (s.gap < need) out.push({ path: at("gap"), message: `must be at least ${need.toFixed(2)} m for these heights` });
-    }
-    if (s.preset === "custom") out.push(...customProfileIssues(s, i));
-  });
-  const classes = new Set<string>();
-  doc.carClasses.forEach((c, i) => {
-    if (classes.has(c)) out.push({ path: ["carClasses", i], message: `repeats "${c}"` });
-    classes.add(c);
-  });
-  return out;
-}
-
-function customProfileIssues(s: z.infer<typeof customJumpSchema>, i: number): { path: RawPath; message: string }[] {
-  const out: { path: RawPath; message: string }[] = [];
-  const p = s.profile;
-  const last = p.length - 1;
-  if (Math.abs(p[0][0]) > EPS) out.push({ path: ["sections", i, "profile", 0, 0], message: "must be 0 (the profile starts at the section start)" });
-  if (Math.abs(p[0][1]) > EPS) out.push({ path: ["sections", i, "profile", 0, 1], message: "must be 0 (the profile starts at ground level)" });
-  if (Math.abs(p[last][1]) > EPS) out.push({ path: ["sections", i, "profile", last, 1], message: "must be 0 (the profile ends at ground level)" });
-  for (let k = 1; k <= last; k++) {
-    if (p[k][0] <= p[k - 1][0] + EPS) {
-      out.push({ path: ["sections", i, "profile", k, 0], message: "must be greater than the distance of the point before" });
-      break;
-    }
-  }
-  if (s.lipIndex >= last) out.push({ path: ["sections", i, "lipIndex"], message: `must be less than ${last} (the last profile index)` });
-  if (s.landingStartIndex <= s.lipIndex) out.push({ path: ["sections", i, "landingStartIndex"], message: "must be greater than lipIndex" });
-  if (s.landingEndIndex <= s.landingStartIndex) out.push({ path: ["sections", i, "landingEndIndex"], message: "must be greater than landingStartIndex" });
-  if (s.landingEndIndex > last) out.push({ path: ["sections", i, "landingEndIndex"], message: `must be at most ${last} (the last profile index)` });
-  return out;
-}
 
 /** Formats a zod path as "sections[3].radius". */
 export function formatIssuePath(path: readonly PropertyKey[]): string {
@@ -285,19 +289,26 @@ export function parseLayoutDocument(json: unknown): ParseLayoutResult {
     try {
       value = JSON.parse(json);
     } catch (err) {
-      return { ok: false, issues: [{ path: "(document)", message: `is not valid JSON: ${(err as Error).message}` }] };
+      return {
+        ok: false,
+        issues: [{ path: "(document)", message: `is not valid JSON: ${(err as Error).message}` }],
+      };
     }
   }
   if (typeof value !== "object" || value === null || Array.isArray(value))
     return { ok: false, issues: [{ path: "(document)", message: "must be a JSON object" }] };
   const result = layoutDocumentSchema.safeParse(value, {
     error: (iss) => {
-      if (iss.code === "invalid_type") return iss.input === undefined ? "is required" : `must be ${article(iss.expected)}`;
+      if (iss.code === "invalid_type")
+        return iss.input === undefined ? "is required" : `must be ${article(iss.expected)}`;
       return undefined;
     },
   });
   if (result.success) return { ok: true, document: result.data };
-  const issues = result.error.issues.map((iss) => ({ path: formatIssuePath(iss.path), message: iss.message }));
+  const issues = result.error.issues.map((iss) => ({
+    path: formatIssuePath(iss.path),
+    message: iss.message,
+  }));
   return { ok: false, issues };
 }
 

@@ -60,7 +60,9 @@ describe("layout geometry", () => {
       expect(step).toBeGreaterThan(0);
       expect(step).toBeLessThanOrEqual(0.1 + 1e-12);
       // Plan chord between samples is never longer than the arc between them.
-      expect(Math.hypot(line.x[i] - line.x[i - 1], line.y[i] - line.y[i - 1])).toBeLessThanOrEqual(step + 1e-9);
+      expect(Math.hypot(line.x[i] - line.x[i - 1], line.y[i] - line.y[i - 1])).toBeLessThanOrEqual(
+        step + 1e-9,
+      );
     }
     for (let k = 0; k < g.sections.length; k++) {
       expect(line.s[line.sectionStart[k]]).toBeCloseTo(g.sections[k].startS, 12);
@@ -80,13 +82,22 @@ describe("layout geometry", () => {
   });
 
   it("carries jump heights onto the centre line", () => {
-    const jump: LayoutSection = { id: "j", kind: "jump", preset: "tabletop", faceHeight: 0.4, faceAngleDeg: 30, tableLength: 2, landingAngleDeg: 25 };
+    const jump: LayoutSection = {
+      id: "j",
+      kind: "jump",
+      preset: "tabletop",
+      faceHeight: 0.4,
+      faceAngleDeg: 30,
+      tableLength: 2,
+      landingAngleDeg: 25,
+    };
     const loop = oval(30, 8);
     loop.sections.splice(1, 0, jump);
     const g = layoutGeometry(loop);
     const p = jumpProfile(jump);
     const first = g.line.sectionStart[1];
-    for (let i = first; i < g.line.sectionStart[2]; i++) expect(g.line.z[i]).toBeCloseTo(profileHeightAt(p, g.line.s[i] - 30), 12);
+    for (let i = first; i < g.line.sectionStart[2]; i++)
+      expect(g.line.z[i]).toBeCloseTo(profileHeightAt(p, g.line.s[i] - 30), 12);
     expect(Math.max(...g.line.z)).toBeCloseTo(0.4, 12);
     expect(g.lapLength).toBeCloseTo(60 + 16 * Math.PI + p.length, 9);
   });

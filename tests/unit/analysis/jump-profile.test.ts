@@ -5,13 +5,78 @@ import { jumpProfile, profileHeightAt, SWEET_SPOT_FRACTION, type JumpProfile } f
 const DEG = Math.PI / 180;
 const BACK = Math.tan(40 * DEG); // mound back sides, MOUND_BACK_SLOPE_DEG
 
-const tabletop: JumpSection = { id: "t", kind: "jump", preset: "tabletop", faceHeight: 0.45, faceAngleDeg: 30, tableLength: 3, landingAngleDeg: 25 };
-const double: JumpSection = { id: "d", kind: "jump", preset: "double", faceHeight: 0.45, faceAngleDeg: 30, gap: 4, landingHeight: 0.4, landingAngleDeg: 25 };
-const triple: JumpSection = { id: "tr", kind: "jump", preset: "triple", faceHeight: 0.45, faceAngleDeg: 30, gap: 6, landingHeight: 0.45, landingAngleDeg: 25 };
-const stepUp: JumpSection = { id: "u", kind: "jump", preset: "step-up", faceHeight: 0.35, faceAngleDeg: 30, gap: 2.5, landingHeight: 0.6, deckLength: 3, landingAngleDeg: 25 };
-const stepDown: JumpSection = { id: "sd", kind: "jump", preset: "step-down", faceHeight: 0.6, faceAngleDeg: 20, gap: 2.5, landingHeight: 0.3, landingAngleDeg: 20 };
-const whoops: JumpSection = { id: "w", kind: "jump", preset: "whoops", count: 6, bumpHeight: 0.15, spacing: 1 };
-const custom: JumpSection = { id: "c", kind: "jump", preset: "custom", profile: [[0, 0], [0.8, 0.4], [3.8, 0.4], [4.8, 0]], lipIndex: 1, landingStartIndex: 2, landingEndIndex: 3 };
+const tabletop: JumpSection = {
+  id: "t",
+  kind: "jump",
+  preset: "tabletop",
+  faceHeight: 0.45,
+  faceAngleDeg: 30,
+  tableLength: 3,
+  landingAngleDeg: 25,
+};
+const double: JumpSection = {
+  id: "d",
+  kind: "jump",
+  preset: "double",
+  faceHeight: 0.45,
+  faceAngleDeg: 30,
+  gap: 4,
+  landingHeight: 0.4,
+  landingAngleDeg: 25,
+};
+const triple: JumpSection = {
+  id: "tr",
+  kind: "jump",
+  preset: "triple",
+  faceHeight: 0.45,
+  faceAngleDeg: 30,
+  gap: 6,
+  landingHeight: 0.45,
+  landingAngleDeg: 25,
+};
+const stepUp: JumpSection = {
+  id: "u",
+  kind: "jump",
+  preset: "step-up",
+  faceHeight: 0.35,
+  faceAngleDeg: 30,
+  gap: 2.5,
+  landingHeight: 0.6,
+  deckLength: 3,
+  landingAngleDeg: 25,
+};
+const stepDown: JumpSection = {
+  id: "sd",
+  kind: "jump",
+  preset: "step-down",
+  faceHeight: 0.6,
+  faceAngleDeg: 20,
+  gap: 2.5,
+  landingHeight: 0.3,
+  landingAngleDeg: 20,
+};
+const whoops: JumpSection = {
+  id: "w",
+  kind: "jump",
+  preset: "whoops",
+  count: 6,
+  bumpHeight: 0.15,
+  spacing: 1,
+};
+const custom: JumpSection = {
+  id: "c",
+  kind: "jump",
+  preset: "custom",
+  profile: [
+    [0, 0],
+    [0.8, 0.4],
+    [3.8, 0.4],
+    [4.8, 0],
+  ],
+  lipIndex: 1,
+  landingStartIndex: 2,
+  landingEndIndex: 3,
+};
 
 /** The shape rules every generated profile keeps (they make the jump a closed piece of ground). */
 function expectWellFormed(p: JumpProfile) {
@@ -28,7 +93,8 @@ function expectWellFormed(p: JumpProfile) {
 
 describe("jump profiles", () => {
   it("all presets give well-formed profiles", () => {
-    for (const s of [tabletop, double, triple, stepUp, stepDown, whoops, custom]) expectWellFormed(jumpProfile(s));
+    for (const s of [tabletop, double, triple, stepUp, stepDown, whoops, custom])
+      expectWellFormed(jumpProfile(s));
   });
 
   it("tabletop: face, table and landing of the given sizes (exact geometry)", () => {

@@ -1,9 +1,21 @@
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { describeLayoutIssues, EXAMPLE_LAYOUT, formatIssuePath, minimumGap, parseLayoutDocument, type LayoutIssue } from "~/lib/layout-document";
+import {
+  describeLayoutIssues,
+  EXAMPLE_LAYOUT,
+  formatIssuePath,
+  minimumGap,
+  parseLayoutDocument,
+  type LayoutIssue,
+} from "~/lib/layout-document";
+
+/** The tests write wrong types on purpose, so the copy is untyped. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+type Untyped = any;
 
 /** A deep copy of the example, changed by `edit`. */
-function exampleWith(edit: (doc: any) => void): unknown {
-  const doc = structuredClone(EXAMPLE_LAYOUT) as any;
+function exampleWith(edit: (doc: Untyped) => void): unknown {
+  const doc: Untyped = structuredClone(EXAMPLE_LAYOUT);
   edit(doc);
   return doc;
 }
@@ -69,7 +81,17 @@ describe("layout document", () => {
         d.sections[4].id = "start";
         d.sections[5].profile[2][0] = 0.5; // goes backwards
         d.sections[5].landingStartIndex = 1; // not after the lip
-        d.sections.push({ id: "up", kind: "jump", preset: "step-up", faceHeight: 0.5, faceAngleDeg: 30, gap: 3, landingHeight: 0.4, deckLength: 2, landingAngleDeg: 25 });
+        d.sections.push({
+          id: "up",
+          kind: "jump",
+          preset: "step-up",
+          faceHeight: 0.5,
+          faceAngleDeg: 30,
+          gap: 3,
+          landingHeight: 0.4,
+          deckLength: 2,
+          landingAngleDeg: 25,
+        });
       }),
     );
     const paths = issues.map((i) => i.path);
@@ -84,7 +106,16 @@ describe("layout document", () => {
     expect(minimumGap("double", 1.0, 0.2)).toBeCloseTo(0.8 / Math.tan((40 * Math.PI) / 180) + 0.1, 12);
     const issues = issuesOf(
       exampleWith((d) =>
-        d.sections.push({ id: "drop", kind: "jump", preset: "step-down", faceHeight: 1.5, faceAngleDeg: 20, gap: 1, landingHeight: 0.2, landingAngleDeg: 20 }),
+        d.sections.push({
+          id: "drop",
+          kind: "jump",
+          preset: "step-down",
+          faceHeight: 1.5,
+          faceAngleDeg: 20,
+          gap: 1,
+          landingHeight: 0.2,
+          landingAngleDeg: 20,
+        }),
       ),
     );
     expect(issues.map((i) => i.path)).toEqual(["sections[8].gap"]);
@@ -94,7 +125,18 @@ describe("layout document", () => {
     expect(issuesOf("{ not json")[0].message).toMatch(/^is not valid JSON/);
     expect(issuesOf([1, 2])).toEqual([{ path: "(document)", message: "must be a JSON object" }]);
     expect(issuesOf(exampleWith((d) => (d.format = "other"))).map((i) => i.path)).toEqual(["format"]);
-    expect(issuesOf(exampleWith((d) => (d.formatVersion = 2)))[0]).toEqual({ path: "formatVersion", message: "must be 1 (the only version so far)" });
+    expect(issuesOf(exampleWith((d) => (d.formatVersion = 2)))[0]).toEqual({
+      path: "formatVersion",
+      message: "must be 1 (the only version so far)",
+    });
+  });
+
+  it("the example in docs/layout-format.md is the example layout", () => {
+    const block = readFileSync("docs/layout-format.md", "utf8").split("```json")[1].split("```")[0];
+    const fromDocs = parseLayoutDocument(block);
+    const own = parseLayoutDocument(EXAMPLE_LAYOUT);
+    expect(fromDocs.ok && own.ok).toBe(true);
+    expect(fromDocs.ok && fromDocs.document).toEqual(own.ok && own.document);
   });
 
   it("formats paths with indices", () => {

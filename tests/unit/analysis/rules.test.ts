@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/lib/layout-document";
 import { layoutRuleReport, measureLayout } from "~/analysis/layout-measure";
-import { checkRules, GUIDANCE_SETS, guidanceValues, RULES_NOTE, type RuleMeasurements } from "~/analysis/rules";
+import {
+  checkRules,
+  GUIDANCE_SETS,
+  guidanceValues,
+  RULES_NOTE,
+  type RuleMeasurements,
+} from "~/analysis/rules";
 
 function example(edit: (d: LayoutDocument) => void = () => {}): LayoutDocument {
   const r = parseLayoutDocument(structuredClone(EXAMPLE_LAYOUT));
@@ -10,19 +16,34 @@ function example(edit: (d: LayoutDocument) => void = () => {}): LayoutDocument {
   return r.document;
 }
 
-const good: RuleMeasurements = { trackWidth: 3, lapLength: 200, standDistance: 40, startStraight: 25, hiddenLength: 0, marshalGapRatio: 1.2 };
+const good: RuleMeasurements = {
+  trackWidth: 3,
+  lapLength: 200,
+  standDistance: 40,
+  startStraight: 25,
+  hiddenLength: 0,
+  marshalGapRatio: 1.2,
+};
 
 describe("track guidance sets", () => {
   it("carry the values quoted from sanctioning bodies' public rulebooks", () => {
     // engine.md, "Sanctioning bodies' track guidance as quoted in their public rulebooks":
     // width 2.4 m (3 m national), length 120 m, stand 50 m, start straight 20 m, nothing hidden.
-    expect(GUIDANCE_SETS.club.values).toMatchObject({ minTrackWidth: 2.4, minLapLength: 120, maxStandDistance: 50, minStartStraight: 20, maxHiddenLength: 0 });
+    expect(GUIDANCE_SETS.club.values).toMatchObject({
+      minTrackWidth: 2.4,
+      minLapLength: 120,
+      maxStandDistance: 50,
+      minStartStraight: 20,
+      maxHiddenLength: 0,
+    });
     expect(GUIDANCE_SETS.national.values.minTrackWidth).toBe(3);
   });
 
   it("fail on a 2 m wide track and pass on 3 m", () => {
     for (const set of ["club", "national"] as const) {
-      const narrow = checkRules({ ...good, trackWidth: 2 }, set).checks.find((c) => c.id === "minTrackWidth")!;
+      const narrow = checkRules({ ...good, trackWidth: 2 }, set).checks.find(
+        (c) => c.id === "minTrackWidth",
+      )!;
       const wide = checkRules({ ...good, trackWidth: 3 }, set).checks.find((c) => c.id === "minTrackWidth")!;
       expect(narrow.status).toBe("fail");
       expect(wide.status).toBe("pass");
@@ -34,7 +55,8 @@ describe("track guidance sets", () => {
   it("measure a real layout: 2 m fails and 3 m passes the width rule", () => {
     const narrow = example((d) => (d.trackWidth = 2));
     const wide = example((d) => (d.trackWidth = 3));
-    const width = (d: LayoutDocument) => layoutRuleReport(d, measureLayout(d)).checks.find((c) => c.id === "minTrackWidth")!.status;
+    const width = (d: LayoutDocument) =>
+      layoutRuleReport(d, measureLayout(d)).checks.find((c) => c.id === "minTrackWidth")!.status;
     expect(width(narrow)).toBe("fail");
     expect(width(wide)).toBe("pass");
   });
@@ -44,13 +66,28 @@ describe("track guidance sets", () => {
     expect(all.checks.map((c) => c.status)).toEqual(["pass", "pass", "pass", "pass", "pass", "pass"]);
     expect(all.note).toBe(RULES_NOTE);
     expect(all.note).toMatch(/current rulebook decides/);
-    const bad = checkRules({ trackWidth: 2, lapLength: 100, standDistance: 60, startStraight: 12, hiddenLength: 3, marshalGapRatio: 2.5 }, "club");
+    const bad = checkRules(
+      {
+        trackWidth: 2,
+        lapLength: 100,
+        standDistance: 60,
+        startStraight: 12,
+        hiddenLength: 3,
+        marshalGapRatio: 2.5,
+      },
+      "club",
+    );
     expect(bad.failed).toBe(6);
-    expect(bad.checks.find((c) => c.id === "minLapLength")!.detail).toBe("100 m measured; at least 120 m required");
+    expect(bad.checks.find((c) => c.id === "minLapLength")!.detail).toBe(
+      "100 m measured; at least 120 m required",
+    );
   });
 
   it("cannot check the stand without one; no marshal points fails the spread", () => {
-    const r = checkRules({ ...good, standDistance: null, hiddenLength: null, marshalGapRatio: null }, "national");
+    const r = checkRules(
+      { ...good, standDistance: null, hiddenLength: null, marshalGapRatio: null },
+      "national",
+    );
     expect(r.checks.find((c) => c.id === "maxStandDistance")!.status).toBe("not checked");
     expect(r.checks.find((c) => c.id === "maxHiddenLength")!.status).toBe("not checked");
     expect(r.checks.find((c) => c.id === "maxMarshalGapRatio")!.status).toBe("fail");

@@ -118,7 +118,20 @@ describe("jump ballistics (drag-free)", () => {
 
   it("flies the range formula over flat ground at lip height", () => {
     // Range R = v^2 sin(2 theta) / g: OpenStax University Physics Vol. 1, section 4.3.
-    const s: LayoutSection = { id: "p", kind: "jump", preset: "custom", profile: [[0, 0], [1, Math.tan(30 * DEG)], [60, Math.tan(30 * DEG)], [61, 0]], lipIndex: 1, landingStartIndex: 2, landingEndIndex: 3 };
+    const s: LayoutSection = {
+      id: "p",
+      kind: "jump",
+      preset: "custom",
+      profile: [
+        [0, 0],
+        [1, Math.tan(30 * DEG)],
+        [60, Math.tan(30 * DEG)],
+        [61, 0],
+      ],
+      lipIndex: 1,
+      landingStartIndex: 2,
+      landingEndIndex: 3,
+    };
     const p = jumpProfile(s);
     const td = ballisticTouchdown(p, 8, 9.81);
     expect(td.d - 1).toBeCloseTo((64 * Math.sin(60 * DEG)) / 9.81, 9);
@@ -126,7 +139,15 @@ describe("jump ballistics (drag-free)", () => {
   });
 
   it("the speed window brackets the sweet spot, and each lands where it says", () => {
-    const p = jumpProfile({ id: "t", kind: "jump", preset: "tabletop", faceHeight: 0.45, faceAngleDeg: 30, tableLength: 3, landingAngleDeg: 25 });
+    const p = jumpProfile({
+      id: "t",
+      kind: "jump",
+      preset: "tabletop",
+      faceHeight: 0.45,
+      faceAngleDeg: 30,
+      tableLength: 3,
+      landingAngleDeg: 25,
+    });
     const w = ballisticJumpWindow(p);
     expect(w.windowMin!).toBeLessThan(w.sweetSpotSpeed!);
     expect(w.sweetSpotSpeed!).toBeLessThan(w.windowMax!);
@@ -137,10 +158,22 @@ describe("jump ballistics (drag-free)", () => {
 });
 
 describe("jumps in the lap", () => {
-  const table: LayoutSection = { id: "table", kind: "jump", preset: "tabletop", faceHeight: 0.45, faceAngleDeg: 30, tableLength: 3, landingAngleDeg: 25 };
+  const table: LayoutSection = {
+    id: "table",
+    kind: "jump",
+    preset: "tabletop",
+    faceHeight: 0.45,
+    faceAngleDeg: 30,
+    tableLength: 3,
+    landingAngleDeg: 25,
+  };
 
   it("a jump on a long straight is taken at the sweet-spot speed and lands on the sweet spot", () => {
-    const loop = oval(40, 6, [{ id: "run", kind: "straight", length: 25 }, table, { id: "out", kind: "straight", length: 20 }]);
+    const loop = oval(40, 6, [
+      { id: "run", kind: "straight", length: 25 },
+      table,
+      { id: "out", kind: "straight", length: 20 },
+    ]);
     loop.sections[2] = { id: "run", kind: "straight", length: 25 };
     const g = layoutGeometry(loop);
     const lap = lapSpeed(g, buggy);
@@ -150,7 +183,10 @@ describe("jumps in the lap", () => {
     expect(j.approachMaxSpeed).toBeGreaterThan(j.sweetSpotSpeed!);
     expect(j.plannedTakeoffSpeed).toBe(j.sweetSpotSpeed);
     expect(j.touchdownD).toBeCloseTo(p.sweetSpot, 4);
-    expect(j.airtime).toBeCloseTo((j.touchdownD - p.d[p.lipIndex]) / (j.plannedTakeoffSpeed * Math.cos(30 * DEG)), 9);
+    expect(j.airtime).toBeCloseTo(
+      (j.touchdownD - p.d[p.lipIndex]) / (j.plannedTakeoffSpeed * Math.cos(30 * DEG)),
+      9,
+    );
     expect(j.cannotClear).toBe(false);
     expect(j.landingOverspeed).toBe(0);
     const airborne = lap.airborne.reduce((a, b) => a + b, 0) * 0.1;
@@ -158,7 +194,16 @@ describe("jumps in the lap", () => {
   });
 
   it("a big jump straight out of a hairpin cannot be cleared", () => {
-    const triple: LayoutSection = { id: "triple", kind: "jump", preset: "triple", faceHeight: 0.45, faceAngleDeg: 30, gap: 7, landingHeight: 0.45, landingAngleDeg: 25 };
+    const triple: LayoutSection = {
+      id: "triple",
+      kind: "jump",
+      preset: "triple",
+      faceHeight: 0.45,
+      faceAngleDeg: 30,
+      gap: 7,
+      landingHeight: 0.45,
+      landingAngleDeg: 25,
+    };
     const loop = oval(40, 2.5, [{ id: "run", kind: "straight", length: 1 }, triple]);
     const lap = lapSpeed(layoutGeometry(loop), buggy);
     const j = lap.jumps[0];
@@ -170,7 +215,15 @@ describe("jumps in the lap", () => {
   it("a landing too fast for the hairpin right after it is reported", () => {
     const loop = oval(40, 6);
     loop.sections[0] = { id: "a", kind: "straight", length: 30 };
-    loop.sections.splice(1, 0, { id: "big", kind: "jump", preset: "tabletop", faceHeight: 0.6, faceAngleDeg: 35, tableLength: 6, landingAngleDeg: 25 });
+    loop.sections.splice(1, 0, {
+      id: "big",
+      kind: "jump",
+      preset: "tabletop",
+      faceHeight: 0.6,
+      faceAngleDeg: 35,
+      tableLength: 6,
+      landingAngleDeg: 25,
+    });
     loop.sections[2] = { id: "b", kind: "turn", radius: 1.5, angleDeg: 180, direction: "left" };
     const soft: LapCar = { ...buggy, brakeDecel: 2 };
     const lap = lapSpeed(layoutGeometry(loop), soft);

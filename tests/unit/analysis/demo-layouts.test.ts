@@ -1,0 +1,90 @@
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/lib/layout-document";
+import { CAR_PRESETS } from "~/analysis/cars";
+import { DEMO_LAYOUTS, SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/analysis/demo-layouts";
+import { layoutRuleReport, measureLayout } from "~/analysis/layout-measure";
+import { lapSpeed } from "~/analysis/speed";
+
+const readJson = (name: string) => JSON.parse(readFileSync(`docs/examples/${name}`, "utf8"));
+
+/** Jumps whose next turn starts within `within` metres of the jump's end, with that turn. */
+function jumpsIntoTurns(doc: LayoutDocument, within: number) {
+  const out: { jump: string; turn: { radius: number; angleDeg: number } }[] = [];
+  doc.sections.forEach((s, i) => {
+    if (s.kind !== "jump") return;
+    let run = 0;
+    for (let k = i + 1; k < doc.sections.length; k++) {
+      const next = doc.sections[k];
+      if (next.kind === "turn") {
+        if (run <= within) out.push({ jump: s.id, turn: next });
+        return;
+      }
+      if (next.kind !== "straight") return;
+      run += next.length;
+    }
+  });
+  return out;
+}
+
+describe("demo layouts", () => {
+  it("are valid documents, identical to the files in docs/examples", () => {
+    expect(readJson("summer-layout.json")).toEqual(SUMMER_LAYOUT);
+    expect(readJson("wet-weather-layout.json")).toEqual(WET_WEATHER_LAYOUT);
+    expect(readJson("example-oval.json")).toEqual(EXAMPLE_LAYOUT);
+    for (const doc of DEMO_LAYOUTS) {
+      const r = parseLayoutDocument(JSON.stringify(doc));
+      expect(r.ok && r.document).toEqual(doc);
+    }
+  });
+
+  it("are closed loops", () => {
+    for (const doc of [...DEMO_LAYOUTS, EXAMPLE_LAYOUT as LayoutDocument]) {
+      const { closure } = measureLayout(doc).geometry;
+      expect(closure.gap).toBeLessThan(0.05);
+      expect(Math.abs(closure.headingDeg)).toBeLessThan(0.5);
+    }
+  });
+
+  it("the summer layout is the big one: 40+ sections, 8+ jumps of several kinds", () => {
+    const jumps = SUMMER_LAYOUT.sections.filter((s) => s.kind === "jump");
+    expect(SUMMER_LAYOUT.sections.length).toBeGreaterThanOrEqual(40);
+    expect(jumps.length).toBeGreaterThanOrEqual(8);
+    expect(new Set(jumps.map((j) => j.preset)).size).toBeGreaterThanOrEqual(6);
+    expect(SUMMER_LAYOUT.carClasses.length).toBe(3);
+    expect(WET_WEATHER_LAYOUT.sections.length).toBeLessThan(SUMMER_LAYOUT.sections.length);
+  });
+
+  it("some summer jumps land into turns (one into a hairpin), others onto long straights", () => {
+    const into = jumpsIntoTurns(SUMMER_LAYOUT, 2);
+    expect(into.some((j) => j.turn.angleDeg >= 150 && j.turn.radius <= 4)).toBe(true);
+    const jumps = SUMMER_LAYOUT.sections.filter((s) => s.kind === "jump").length;
+    expect(into.length).toBeLessThan(jumps);
+    const ontoStraights = SUMMER_LAYOUT.sections.filter(
+      (s, i) =>
+        s.kind === "jump" &&
+        SUMMER_LAYOUT.sections[i + 1]?.kind === "straight" &&
+        (SUMMER_LAYOUT.sections[i + 1] as { length: number }).length >= 10,
+    );
+    expect(ontoStraights.length).toBeGreaterThanOrEqual(2);
+  });
+
+  it("pass their own guidance set, with nothing off site or too close", () => {
+    for (const doc of DEMO_LAYOUTS) {
+      const m = measureLayout(doc);
+      expect(m.laneConflicts).toEqual([]);
+      expect(m.outsideBoundary).toEqual([]);
+      const report = layoutRuleReport(doc, m);
+      expect(report.checks.filter((c) => c.status !== "pass")).toEqual([]);
+    }
+  });
+
+  it("every class can clear every summer jump from its approach", () => {
+    const { geometry } = measureLayout(SUMMER_LAYOUT);
+    for (const id of SUMMER_LAYOUT.carClasses) {
+      const lap = lapSpeed(geometry, CAR_PRESETS[id]);
+      expect(lap.jumps.filter((j) => j.cannotClear).map((j) => j.sectionId)).toEqual([]);
+      expect(lap.lapTime).toBeGreaterThan(20);
+    }
+  });
+});
