@@ -91,7 +91,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
       </header>
       <FormMessage>{[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}</FormMessage>
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
-        <section aria-labelledby="about" className="rounded-lg border border-sand-200 bg-white p-4">
+        <section aria-labelledby="about" className="self-start rounded-lg border border-sand-200 bg-white p-4">
           <h2 id="about" className="mb-3 text-lg font-semibold">
             About this layout
           </h2>
@@ -157,7 +157,7 @@ function DirectorTools({ layout, errors, values }: Tools) {
         <Form method="post" className="mt-2 space-y-3">
           <input type="hidden" name="intent" value="delete" />
           <label className="flex items-start gap-2 text-sm">
-            <input type="checkbox" name="confirm" value="yes" className="mt-1" aria-describedby="confirm-error" />
+            <input type="checkbox" name="confirm" value="yes" className="mt-1" aria-describedby={errors?.confirm ? "confirm-error" : undefined} />
             <span>Yes, delete {layout.name} and every saved version of it. This cannot be undone.</span>
           </label>
           <FieldError id="confirm-error" errors={errors?.confirm} />

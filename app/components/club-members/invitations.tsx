@@ -27,8 +27,8 @@ export function InviteForm({ errors, values }: { errors?: FieldErrors; values?: 
         directors can change everything, members included.
       </p>
       <Form method="post" className="mt-4 grid gap-4 sm:grid-cols-[1fr_12rem]" noValidate>
-        <Field label="E-mail address" name="email" type="email" autoComplete="off" required defaultValue={values?.email} errors={errors?.email} />
-        <SelectField label="Role" name="role" defaultValue={values?.role ?? "driver"} errors={errors?.role}>
+        <Field label="E-mail address" id="invite-email" name="email" type="email" autoComplete="off" required defaultValue={values?.email} errors={errors?.email} />
+        <SelectField label="Role" id="invite-role" name="role" defaultValue={values?.role ?? "driver"} errors={errors?.role}>
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}

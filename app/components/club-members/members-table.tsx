@@ -33,10 +33,10 @@ export function MemberFilters({ query, errors, withEmail }: { query: MemberQuery
   return (
     <Form method="get" className="mt-3 flex flex-wrap items-end gap-3" role="search" aria-label="Filter members">
       <div className="w-full sm:w-64">
-        <Field label={withEmail ? "Search by name or e-mail" : "Search by name"} name="q" type="search" defaultValue={query.q} errors={errors.q} />
+        <Field label={withEmail ? "Search by name or e-mail" : "Search by name"} id="filter-q" name="q" type="search" defaultValue={query.q} errors={errors.q} />
       </div>
       <div className="w-44">
-        <SelectField label="Role" name="role" defaultValue={query.role} errors={errors.role}>
+        <SelectField label="Role" id="filter-role" name="role" defaultValue={query.role} errors={errors.role}>
           <option value="all">All roles</option>
           {ROLES.map((r) => (
             <option key={r} value={r}>
