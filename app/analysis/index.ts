@@ -1,0 +1,59 @@
+/**
+ * The analysis engine's public face. Pure TypeScript: no React, database or Node imports; SI
+ * units and radians everywhere (degrees only at the edges: JSON files, forms, screens).
+ *
+ * Flight of a jump (flight.ts, flight-window.ts)
+ * - `flyJump({ speed, faceAngleRad, lip: {x, z}, surface: [{x, z}], g?, drag?, landingRamp? })`
+ *   -> `{ airtime, apex: {x, z, t}, landing: { x, z, t, speed, flightPathRad, surfaceSlopeRad,
+ *   normalSpeed, equivalentFallHeight }, segmentIndex, beyondProfile, landedOn }`; `landedOn` is
+ *   "short" | "ramp" | "overshoot" when `landingRamp: { start, end }` (x positions, m) is given.
+ * - `speedWindow({ faceAngleRad, lip, surface, landingRamp, g?, drag?, minSpeed?, maxSpeed? })`
+ *   -> `{ min, max, maxIsSearchLimit }` m/s, or null when the ramp is out of reach.
+ * - `sweetSpotSpeed(sameInput, fraction = 1/3)` -> m/s landing `fraction` down the ramp.
+ * - `speedToLandAt(input, targetX)` -> m/s touching down at x = targetX.
+ * - `equivalentFallHeight(speed, flightPathRad, surfaceSlopeRad, g?)` -> m.
+ *
+ * Attitude in the air (attitude.ts)
+ * - `simulateAttitude(car, { speed, duration, steering?: [t, rad][], rearWheelAccel?: [t, rad/s^2][],
+ *   initialRates?, initialPitchRad?, dt? }, { seriesEvery? })` -> `{ yawRad, pitchRad, rollRad,
+ *   angularMomentumDrift, finalRates, finalQuaternion, series? }`.
+ *
+ * Mid-air set-up plan (air-plan.ts)
+ * - `planAirSetup({ car, speed, airtime, turn: "left" | "right", rollToleranceRad?, maxYawRad?,
+ *   turnAngleRad?, pitchChangeRad?, seed?, skillSigmas? })` -> `{ feasible, reason, steering:
+ *   [t, rad][], rearWheelAccel: [t, rad/s^2][], yawRad, pitchRad, rollRad, targetYawRad,
+ *   pitchPulse: { kind: "brake" | "throttle" | "none", start, duration, wheelAccel, limited },
+ *   switches: [{ t, earlyMs, lateMs }], timingWindowMs, successRate: { novice, club, expert } }`.
+ *   Steering is in radians here; the command line prints degrees.
+ *
+ * Track length saved and the verdict (verdict.ts)
+ * - `landsIntoTurn(distanceToTurn, landingSpeed, lookaheadS = 0.5)`,
+ *   `trackLengthSaved(radius, psi, turnAngle)` m, `timeSaved(radius, psi, turnAngle, entrySpeed)` s,
+ *   `expectedGain(successRate, timeSaved, failCost = 3)` s,
+ *   `jumpVerdict({ landsIntoTurn, turnAngle, airtime, expectedGain, planFeasible? })`
+ *   -> `{ verdict: "set-up" | "straight", reason, text }`.
+ *
+ * Car classes (cars.ts)
+ * - `CAR_PRESETS` by id ("buggy-2wd-10", "buggy-4wd-10", "sct-10", "buggy-8"), `CAR_PRESET_IDS`,
+ *   `carPreset(id)`, `CarParams` (every value an estimate, with notes on the inertias).
+ */
+export * from "./flight";
+export * from "./flight-window";
+export * from "./attitude";
+export { compileServo, compileWheel, evaluate, type PiecewiseLinear, type TimedValue } from "./attitude-inputs";
+export * from "./air-plan";
+export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
+export { pitchPulse, drivenSpinInertia, type PitchPulse, type PulseKind, type PulseLimits } from "./air-plan-pulse";
+export * from "./verdict";
+export * from "./cars";
+export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./vec";
+export * from "./jump-profile";
+export * from "./geometry";
+export * from "./close-loop";
+export * from "./geometry-checks";
+export * from "./sight";
+export * from "./lap-jumps";
+export * from "./speed";
+export * from "./rules";
+export * from "./layout-measure";
+export * from "./demo-layouts";
