@@ -1,7 +1,6 @@
 import { count, eq, inArray } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { clubs, memberships, type Role } from "~/db/schema";
-import { serialWrite } from "./write-lock.server";
 
 export type MyClub = { id: string; name: string; role: Role; memberCount: number };
 
@@ -18,7 +17,12 @@ export async function listMyClubs(userId: string): Promise<MyClub[]> {
   const counts = await db
     .select({ clubId: memberships.clubId, n: count() })
     .from(memberships)
-    .where(inArray(memberships.clubId, mine.map((c) => c.id)))
+    .where(
+      inArray(
+        memberships.clubId,
+        mine.map((c) => c.id),
+      ),
+    )
     .groupBy(memberships.clubId);
   const byClub = new Map(counts.map((c) => [c.clubId, c.n]));
   return mine.map((c) => ({ ...c, memberCount: byClub.get(c.id) ?? 0 }));
@@ -27,9 +31,9 @@ export async function listMyClubs(userId: string): Promise<MyClub[]> {
 /** Creates a club and makes its creator the first race director, both or neither. */
 export async function createClub(userId: string, name: string): Promise<{ id: string; name: string }> {
   const db = await getDb();
-  return serialWrite(() => db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const [club] = await tx.insert(clubs).values({ name }).returning({ id: clubs.id, name: clubs.name });
     await tx.insert(memberships).values({ clubId: club.id, userId, role: "director" });
     return club;
-  }));
+  });
 }

@@ -9,7 +9,6 @@ import { clubs, invitations, memberships, users, type Role } from "~/db/schema";
 import { hashPassword } from "~/auth/users.server";
 import { RuleError } from "./rule-error.server";
 import { hashLinkToken, looksLikeLinkToken } from "./tokens.server";
-import { serialWrite } from "./write-lock.server";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
@@ -27,7 +26,12 @@ const NOT_VALID =
 const USED = "This invitation has already been used. If it was you, sign in to reach the club.";
 
 function expiredMessage(expiresAt: Date): string {
-  const day = expiresAt.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+  const day = expiresAt.toLocaleDateString("en-GB", {
+    day: "numeric",
+    month: "long",
+    year: "numeric",
+    timeZone: "UTC",
+  });
   return `This invitation expired on ${day}. Ask the club's race director to send it again.`;
 }
 
@@ -89,7 +93,7 @@ export async function acceptInvitation(
   now = Date.now(),
 ): Promise<InvitationView> {
   const db = await getDb();
-  return serialWrite(() => db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const invitation = await lookUp(tx, token, now);
     if (invitation.email !== user.email.toLowerCase()) {
       throw new RuleError(403, emailMismatchMessage(invitation.email, user.email));
@@ -101,7 +105,7 @@ export async function acceptInvitation(
     if (already) throw new RuleError(409, `You are already a member of ${invitation.club.name}.`);
     await join(tx, invitation, user.id, now);
     return invitation;
-  }));
+  });
 }
 
 /**
@@ -117,11 +121,14 @@ export async function acceptWithSignUp(
   await findInvitation(token, now);
   const passwordHash = await hashPassword(input.password);
   const db = await getDb();
-  return serialWrite(() => db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const invitation = await lookUp(tx, token, now);
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, invitation.email));
     if (existing) {
-      throw new RuleError(409, `There is already an account for ${invitation.email}. Sign in to accept the invitation.`);
+      throw new RuleError(
+        409,
+        `There is already an account for ${invitation.email}. Sign in to accept the invitation.`,
+      );
     }
     const [user] = await tx
       .insert(users)
@@ -129,5 +136,5 @@ export async function acceptWithSignUp(
       .returning({ id: users.id });
     await join(tx, invitation, user.id, now);
     return { invitation, userId: user.id };
-  }));
+  });
 }

@@ -11,7 +11,6 @@ import { sendMail } from "~/mail/mail.server";
 import { invitationMail } from "~/mail/templates.server";
 import { RuleError } from "./rule-error.server";
 import { newLinkToken } from "./tokens.server";
-import { serialWrite } from "./write-lock.server";
 
 /** How long an invitation link works: 7 days, ms. */
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
@@ -52,12 +51,18 @@ const MAIL_FAILED = "The invitation e-mail could not be sent, so nothing was cha
  * already belongs to a member or already has a live invitation; an expired one is replaced. When
  * the e-mail cannot be sent the invitation is taken back (503).
  */
-export async function inviteMember(input: { club: Club; inviter: Inviter; email: string; role: Role; now?: number }) {
+export async function inviteMember(input: {
+  club: Club;
+  inviter: Inviter;
+  email: string;
+  role: Role;
+  now?: number;
+}) {
   const { club, inviter, email, role } = input;
   const now = input.now ?? Date.now();
   const { token, hash } = newLinkToken();
   const db = await getDb();
-  const invitation = await serialWrite(() => db.transaction(async (tx) => {
+  const invitation = await db.transaction(async (tx) => {
     const [member] = await tx
       .select({ id: memberships.id })
       .from(memberships)
@@ -67,7 +72,9 @@ export async function inviteMember(input: { club: Club; inviter: Inviter; email:
     const open = await tx
       .select({ id: invitations.id, expiresAt: invitations.expiresAt })
       .from(invitations)
-      .where(and(eq(invitations.clubId, club.id), eq(invitations.email, email), isNull(invitations.acceptedAt)));
+      .where(
+        and(eq(invitations.clubId, club.id), eq(invitations.email, email), isNull(invitations.acceptedAt)),
+      );
     if (open.some((i) => i.expiresAt.getTime() > now)) {
       throw new RuleError(
         409,
@@ -78,15 +85,22 @@ export async function inviteMember(input: { club: Club; inviter: Inviter; email:
     for (const stale of open) await tx.delete(invitations).where(eq(invitations.id, stale.id));
     const [row] = await tx
       .insert(invitations)
-      .values({ clubId: club.id, email, role, tokenHash: hash, invitedBy: inviter.id, expiresAt: new Date(now + INVITATION_LIFETIME_MS) })
+      .values({
+        clubId: club.id,
+        email,
+        role,
+        tokenHash: hash,
+        invitedBy: inviter.id,
+        expiresAt: new Date(now + INVITATION_LIFETIME_MS),
+      })
       .returning({ id: invitations.id, email: invitations.email, role: invitations.role });
     return row;
-  }));
+  });
   try {
     await mailInvitation(email, club, inviter, role, token);
   } catch (err) {
     console.error("[loftline] invitation e-mail failed:", (err as Error).message);
-    await serialWrite(() => db.delete(invitations).where(eq(invitations.id, invitation.id)));
+    await db.delete(invitations).where(eq(invitations.id, invitation.id));
     throw new RuleError(503, MAIL_FAILED, "email");
   }
   return { ...invitation, token };
@@ -114,10 +128,23 @@ export async function listPendingInvitations(clubId: string, now = Date.now()): 
 async function findPending(clubId: string, invitationId: string) {
   const db = await getDb();
   const [row] = await db
-    .select({ id: invitations.id, email: invitations.email, role: invitations.role, tokenHash: invitations.tokenHash, expiresAt: invitations.expiresAt })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      tokenHash: invitations.tokenHash,
+      expiresAt: invitations.expiresAt,
+    })
     .from(invitations)
-    .where(and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)));
-  if (!row) throw new RuleError(404, "No such invitation waiting in this club: it may have been accepted or withdrawn.", "invitationId");
+    .where(
+      and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)),
+    );
+  if (!row)
+    throw new RuleError(
+      404,
+      "No such invitation waiting in this club: it may have been accepted or withdrawn.",
+      "invitationId",
+    );
   return row;
 }
 
@@ -125,30 +152,40 @@ async function findPending(clubId: string, invitationId: string) {
  * Sends an invitation again with a new link and a fresh 7 days; the old link stops working.
  * When the e-mail cannot be sent, the old link and expiry are put back (503).
  */
-export async function resendInvitation(input: { club: Club; inviter: Inviter; invitationId: string; now?: number }) {
+export async function resendInvitation(input: {
+  club: Club;
+  inviter: Inviter;
+  invitationId: string;
+  now?: number;
+}) {
   const now = input.now ?? Date.now();
   const before = await findPending(input.club.id, input.invitationId);
   const { token, hash } = newLinkToken();
   const db = await getDb();
-  const where = and(eq(invitations.id, before.id), eq(invitations.tokenHash, before.tokenHash), isNull(invitations.acceptedAt));
-  const updated = await serialWrite(() =>
-    db
-      .update(invitations)
-      .set({ tokenHash: hash, expiresAt: new Date(now + INVITATION_LIFETIME_MS), invitedBy: input.inviter.id })
-      .where(where)
-      .returning({ id: invitations.id }),
+  const where = and(
+    eq(invitations.id, before.id),
+    eq(invitations.tokenHash, before.tokenHash),
+    isNull(invitations.acceptedAt),
   );
-  if (updated.length === 0) throw new RuleError(409, "This invitation changed meanwhile. Reload the page and try again.", "invitationId");
+  const updated = await db
+    .update(invitations)
+    .set({ tokenHash: hash, expiresAt: new Date(now + INVITATION_LIFETIME_MS), invitedBy: input.inviter.id })
+    .where(where)
+    .returning({ id: invitations.id });
+  if (updated.length === 0)
+    throw new RuleError(
+      409,
+      "This invitation changed meanwhile. Reload the page and try again.",
+      "invitationId",
+    );
   try {
     await mailInvitation(before.email, input.club, input.inviter, before.role, token);
   } catch (err) {
     console.error("[loftline] invitation e-mail failed:", (err as Error).message);
-    await serialWrite(() =>
-      db
-        .update(invitations)
-        .set({ tokenHash: before.tokenHash, expiresAt: before.expiresAt })
-        .where(and(eq(invitations.id, before.id), eq(invitations.tokenHash, hash))),
-    );
+    await db
+      .update(invitations)
+      .set({ tokenHash: before.tokenHash, expiresAt: before.expiresAt })
+      .where(and(eq(invitations.id, before.id), eq(invitations.tokenHash, hash)));
     throw new RuleError(503, MAIL_FAILED, "invitationId");
   }
   return { id: before.id, email: before.email, token };
@@ -157,12 +194,17 @@ export async function resendInvitation(input: { club: Club; inviter: Inviter; in
 /** Withdraws an invitation that has not been accepted; its link then answers 404. */
 export async function revokeInvitation(clubId: string, invitationId: string): Promise<{ email: string }> {
   const db = await getDb();
-  const [row] = await serialWrite(() =>
-    db
-      .delete(invitations)
-      .where(and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)))
-      .returning({ email: invitations.email }),
-  );
-  if (!row) throw new RuleError(404, "No such invitation waiting in this club: it may have been accepted or withdrawn.", "invitationId");
+  const [row] = await db
+    .delete(invitations)
+    .where(
+      and(eq(invitations.id, invitationId), eq(invitations.clubId, clubId), isNull(invitations.acceptedAt)),
+    )
+    .returning({ email: invitations.email });
+  if (!row)
+    throw new RuleError(
+      404,
+      "No such invitation waiting in this club: it may have been accepted or withdrawn.",
+      "invitationId",
+    );
   return row;
 }

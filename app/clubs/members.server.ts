@@ -4,7 +4,6 @@ import { memberships, users, type Role } from "~/db/schema";
 import type { MemberQuery } from "~/lib/schemas/clubs";
 import { ROLE_LABELS } from "~/lib/roles";
 import { RuleError } from "./rule-error.server";
-import { serialWrite } from "./write-lock.server";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
@@ -82,34 +81,40 @@ async function findMember(tx: Tx, clubId: string, memberId: string) {
   return member;
 }
 
-const LAST_DIRECTOR =
-  "A club always keeps at least one race director. Make another member a director first.";
+const LAST_DIRECTOR = "A club always keeps at least one race director. Make another member a director first.";
 
 /**
  * Changes a member's role. Refuses (409) a change that would leave the club without a director;
  * the check runs after the write, inside one transaction, so two directors demoting each other at
  * the same moment cannot both succeed.
  */
-export async function changeMemberRole(clubId: string, memberId: string, role: Role): Promise<{ name: string; role: Role }> {
+export async function changeMemberRole(
+  clubId: string,
+  memberId: string,
+  role: Role,
+): Promise<{ name: string; role: Role }> {
   const db = await getDb();
-  return serialWrite(() => db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const member = await findMember(tx, clubId, memberId);
     if (member.role === role) return { name: member.name, role };
     await tx.update(memberships).set({ role }).where(eq(memberships.id, member.id));
     if ((await directorCount(tx, clubId)) === 0) throw new RuleError(409, LAST_DIRECTOR, "role");
     return { name: member.name, role };
-  }));
+  });
 }
 
 /** Removes a member from the club. Refuses (409) removing the last director. */
-export async function removeMember(clubId: string, memberId: string): Promise<{ name: string; userId: string }> {
+export async function removeMember(
+  clubId: string,
+  memberId: string,
+): Promise<{ name: string; userId: string }> {
   const db = await getDb();
-  return serialWrite(() => db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const member = await findMember(tx, clubId, memberId);
     await tx.delete(memberships).where(eq(memberships.id, member.id));
     if ((await directorCount(tx, clubId)) === 0) throw new RuleError(409, LAST_DIRECTOR, "memberId");
     return { name: member.name, userId: member.userId };
-  }));
+  });
 }
 
 export function roleChangeNotice(name: string, role: Role): string {

@@ -1,6 +1,12 @@
 import { Field, SelectField, type FieldErrors } from "~/components/ui/form";
 import type { LayoutStatus } from "~/db/schema";
-import { SURFACES, SURFACE_LABELS, TRACK_WIDTH_MAX_M, TRACK_WIDTH_MIN_M, type Surface } from "~/lib/schemas/layouts";
+import {
+  SURFACES,
+  SURFACE_LABELS,
+  TRACK_WIDTH_MAX_M,
+  TRACK_WIDTH_MIN_M,
+  type Surface,
+} from "~/lib/schemas/layouts";
 
 const STATUS_STYLES: Record<LayoutStatus, string> = {
   draft: "border-clay-500 bg-clay-100 text-clay-700",
@@ -8,12 +14,18 @@ const STATUS_STYLES: Record<LayoutStatus, string> = {
   archived: "border-ink-300 bg-sand-100 text-ink-500",
 };
 
-export const STATUS_LABELS: Record<LayoutStatus, string> = { draft: "Draft", published: "Published", archived: "Archived" };
+export const STATUS_LABELS: Record<LayoutStatus, string> = {
+  draft: "Draft",
+  published: "Published",
+  archived: "Archived",
+};
 
 /** A layout's status as a word in a coloured outline (the word carries the meaning, not the colour). */
 export function StatusBadge({ status }: { status: LayoutStatus }) {
   return (
-    <span className={`inline-block rounded-full border px-2 py-0.5 text-xs font-medium ${STATUS_STYLES[status]}`}>
+    <span
+      className={`inline-block rounded-full border px-2 py-0.5 text-xs font-medium ${STATUS_STYLES[status]}`}
+    >
       {STATUS_LABELS[status]}
     </span>
   );
@@ -36,7 +48,12 @@ export type LayoutMetaProps = {
   clubName: string;
 };
 
-const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const dateFormat = new Intl.DateTimeFormat("en-GB", {
+  day: "numeric",
+  month: "short",
+  year: "numeric",
+  timeZone: "UTC",
+});
 
 function day(value: Date | string): string {
   return dateFormat.format(new Date(value));
@@ -50,7 +67,10 @@ export function LayoutMeta(props: LayoutMetaProps) {
     ["Surface", surfaceLabel(props.surface)],
     ["Track width", `${props.trackWidth} m`],
     ["Version", String(props.version)],
-    ["Created", props.createdByName ? `${day(props.createdAt)} by ${props.createdByName}` : day(props.createdAt)],
+    [
+      "Created",
+      props.createdByName ? `${day(props.createdAt)} by ${props.createdByName}` : day(props.createdAt),
+    ],
     ["Last changed", day(props.updatedAt)],
   ];
   return (
@@ -75,8 +95,20 @@ export function LayoutMetaFields({
 }) {
   return (
     <>
-      <Field label="Name" name="name" required maxLength={100} defaultValue={values?.name} errors={errors?.name} />
-      <SelectField label="Surface" name="surface" defaultValue={values?.surface ?? "dirt"} errors={errors?.surface}>
+      <Field
+        label="Name"
+        name="name"
+        required
+        maxLength={100}
+        defaultValue={values?.name}
+        errors={errors?.name}
+      />
+      <SelectField
+        label="Surface"
+        name="surface"
+        defaultValue={values?.surface ?? "dirt"}
+        errors={errors?.surface}
+      >
         {SURFACES.map((s) => (
           <option key={s} value={s}>
             {SURFACE_LABELS[s]}

@@ -9,7 +9,6 @@ import { layouts, users, type LayoutStatus, type Role } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
-import { serialWrite } from "~/clubs/write-lock.server";
 
 export type LayoutFields = { name: string; surface: Surface; trackWidth: number };
 
@@ -44,11 +43,16 @@ export async function listClubLayouts(clubId: string, role: Role): Promise<Layou
 }
 
 /** A new draft layout in the club; returns its id. */
-export async function createLayout(clubId: string, userId: string, fields: LayoutFields): Promise<{ id: string }> {
+export async function createLayout(
+  clubId: string,
+  userId: string,
+  fields: LayoutFields,
+): Promise<{ id: string }> {
   const db = await getDb();
-  const [row] = await serialWrite(() =>
-    db.insert(layouts).values({ clubId, createdBy: userId, ...fields, status: "draft" }).returning({ id: layouts.id }),
-  );
+  const [row] = await db
+    .insert(layouts)
+    .values({ clubId, createdBy: userId, ...fields, status: "draft" })
+    .returning({ id: layouts.id });
   return row;
 }
 
@@ -60,22 +64,29 @@ export async function layoutCreatorName(createdBy: string | null): Promise<strin
   return row?.name ?? null;
 }
 
-const STALE = "Someone changed this layout after you opened it. Reload the page to see the latest, then try again.";
+const STALE =
+  "Someone changed this layout after you opened it. Reload the page to see the latest, then try again.";
 
 /** Applies a change only if the layout is still at `expectedVersion` (409 otherwise); bumps the version. */
-async function changeAt(layoutId: string, expectedVersion: number, set: Partial<typeof layouts.$inferInsert>, allowedFrom?: LayoutStatus[]) {
+async function changeAt(
+  layoutId: string,
+  expectedVersion: number,
+  set: Partial<typeof layouts.$inferInsert>,
+  allowedFrom?: LayoutStatus[],
+) {
   const db = await getDb();
   const where = [eq(layouts.id, layoutId), eq(layouts.version, expectedVersion)];
   if (allowedFrom) where.push(inArray(layouts.status, allowedFrom));
-  const rows = await serialWrite(() =>
-    db
-      .update(layouts)
-      .set({ ...set, version: sql`${layouts.version} + 1` })
-      .where(and(...where))
-      .returning({ version: layouts.version, status: layouts.status }),
-  );
+  const rows = await db
+    .update(layouts)
+    .set({ ...set, version: sql`${layouts.version} + 1` })
+    .where(and(...where))
+    .returning({ version: layouts.version, status: layouts.status });
   if (rows.length > 0) return rows[0];
-  const [now] = await db.select({ version: layouts.version, status: layouts.status }).from(layouts).where(eq(layouts.id, layoutId));
+  const [now] = await db
+    .select({ version: layouts.version, status: layouts.status })
+    .from(layouts)
+    .where(eq(layouts.id, layoutId));
   if (!now) throw new RuleError(404, "No such layout.");
   if (now.version !== expectedVersion) throw new RuleError(409, STALE, "version");
   throw new RuleError(409, `This layout is ${now.status}; that change does not apply to it.`, "intent");
@@ -104,7 +115,7 @@ export async function changeLayoutStatus(layoutId: string, expectedVersion: numb
 /** Deletes the layout; its saved versions go with it (ON DELETE CASCADE). */
 export async function deleteLayout(layoutId: string): Promise<{ name: string }> {
   const db = await getDb();
-  const [row] = await serialWrite(() => db.delete(layouts).where(eq(layouts.id, layoutId)).returning({ name: layouts.name }));
+  const [row] = await db.delete(layouts).where(eq(layouts.id, layoutId)).returning({ name: layouts.name });
   if (!row) throw new RuleError(404, "No such layout.");
   return row;
 }

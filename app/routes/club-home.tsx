@@ -44,8 +44,7 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
                 {isDirector ? <StatusBadge status={layout.status} /> : null}
               </div>
               <p className="mt-1 text-sm text-ink-500">
-                {surfaceLabel(layout.surface)} · {layout.trackWidth} m wide · version{" "}
-                {layout.version}
+                {surfaceLabel(layout.surface)} · {layout.trackWidth} m wide · version {layout.version}
               </p>
             </li>
           ))}

@@ -3,7 +3,12 @@ import type { Route } from "./+types/club-members";
 import { requireClubRole } from "~/auth/permissions.server";
 import { redirectWithNotice } from "~/auth/session.server";
 import { formValues } from "~/clubs/form-values.server";
-import { listPendingInvitations, inviteMember, resendInvitation, revokeInvitation } from "~/clubs/invitations.server";
+import {
+  listPendingInvitations,
+  inviteMember,
+  resendInvitation,
+  revokeInvitation,
+} from "~/clubs/invitations.server";
 import { changeMemberRole, listMembers, removeMember, roleChangeNotice } from "~/clubs/members.server";
 import { refusal } from "~/clubs/rule-error.server";
 import { InviteForm, PendingInvitations } from "~/components/club-members/invitations";
@@ -26,7 +31,15 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     listMembers(club.id, parsed.query, { withEmail: isDirector }),
     isDirector ? listPendingInvitations(club.id) : Promise.resolve([]),
   ]);
-  const body = { club, isDirector, me: user.id, query: parsed.query, members, invitations, queryErrors: parsed.ok ? {} : parsed.errors };
+  const body = {
+    club,
+    isDirector,
+    me: user.id,
+    query: parsed.query,
+    members,
+    invitations,
+    queryErrors: parsed.ok ? {} : parsed.errors,
+  };
   return data(body, { status: parsed.ok ? 200 : 400 });
 }
 
@@ -86,7 +99,8 @@ export default function ClubMembers({ loaderData, actionData }: Route.ComponentP
   const values = actionData?.values;
   const inviteErrors = values?.intent === "invite" ? errors : undefined;
   // Errors that belong to no row and no field shown here (a form without its intent, say).
-  const general = errors && !inviteErrors && !values?.memberId && !values?.invitationId ? Object.values(errors).flat() : [];
+  const general =
+    errors && !inviteErrors && !values?.memberId && !values?.invitationId ? Object.values(errors).flat() : [];
   return (
     <div className="space-y-8">
       <section aria-labelledby="members-heading">

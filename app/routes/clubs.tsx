@@ -23,7 +23,11 @@ export async function action({ request }: Route.ActionArgs) {
   const parsed = parseForm(createClubSchema, formData);
   if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
   const club = await createClub(user.id, parsed.data.name);
-  throw await redirectWithNotice(request, `/clubs/${club.id}`, `${club.name} is set up, and you are its race director.`);
+  throw await redirectWithNotice(
+    request,
+    `/clubs/${club.id}`,
+    `${club.name} is set up, and you are its race director.`,
+  );
 }
 
 export default function Clubs({ loaderData, actionData }: Route.ComponentProps) {
@@ -49,7 +53,8 @@ export default function Clubs({ loaderData, actionData }: Route.ComponentProps) 
                   {club.name}
                 </Link>
                 <span className="text-sm text-ink-500">
-                  {ROLE_LABELS[club.role]} · {club.memberCount} {club.memberCount === 1 ? "member" : "members"}
+                  {ROLE_LABELS[club.role]} · {club.memberCount}{" "}
+                  {club.memberCount === 1 ? "member" : "members"}
                 </span>
               </li>
             ))}
@@ -62,7 +67,15 @@ export default function Clubs({ loaderData, actionData }: Route.ComponentProps) 
         </h2>
         <p className="mt-1 text-sm text-ink-500">You become its race director and can invite the others.</p>
         <Form method="post" className="mt-4 space-y-4" noValidate>
-          <Field label="Club name" name="name" required maxLength={80} errors={errors?.name} defaultValue={actionData?.values.name} autoComplete="organization" />
+          <Field
+            label="Club name"
+            name="name"
+            required
+            maxLength={80}
+            errors={errors?.name}
+            defaultValue={actionData?.values.name}
+            autoComplete="organization"
+          />
           <Button type="submit" disabled={busy}>
             Create the club
           </Button>

@@ -2,15 +2,28 @@ import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/invitation";
 import { getUser, requireUser } from "~/auth/permissions.server";
 import { createUserSession, redirectWithNotice } from "~/auth/session.server";
-import { acceptInvitation, acceptWithSignUp, emailMismatchMessage, findInvitation } from "~/clubs/invitation-accept.server";
+import {
+  acceptInvitation,
+  acceptWithSignUp,
+  emailMismatchMessage,
+  findInvitation,
+} from "~/clubs/invitation-accept.server";
 import { formValues } from "~/clubs/form-values.server";
 import { isRuleError, refusal } from "~/clubs/rule-error.server";
-import { InvitationCard, InvitationProblem, JoinForm, SignUpToJoin } from "~/components/club-members/invitation-views";
+import {
+  InvitationCard,
+  InvitationProblem,
+  JoinForm,
+  SignUpToJoin,
+} from "~/components/club-members/invitation-views";
 import { isMember } from "~/clubs/members.server";
 import { parseForm } from "~/lib/forms";
 import { invitationActionSchema } from "~/lib/schemas/clubs";
 
-export const meta: Route.MetaFunction = () => [{ title: "Invitation · Loftline" }, { name: "robots", content: "noindex" }];
+export const meta: Route.MetaFunction = () => [
+  { title: "Invitation · Loftline" },
+  { name: "robots", content: "noindex" },
+];
 
 /**
  * What an invitation link shows: the club, role and inviter, then one of: join (signed in with
@@ -30,7 +43,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!user) return { state: "signed-out" as const, invitation: shown };
   if (user.email !== invitation.email) {
     return data(
-      { state: "other-account" as const, invitation: shown, message: emailMismatchMessage(invitation.email, user.email) },
+      {
+        state: "other-account" as const,
+        invitation: shown,
+        message: emailMismatchMessage(invitation.email, user.email),
+      },
       { status: 403 },
     );
   }
@@ -47,17 +64,33 @@ export async function action({ request, params }: Route.ActionArgs) {
     if (parsed.data.intent === "join") {
       const user = await requireUser(request);
       const invitation = await acceptInvitation(params.token, user);
-      throw await redirectWithNotice(request, `/clubs/${invitation.club.id}`, `Welcome to ${invitation.club.name}.`);
+      throw await redirectWithNotice(
+        request,
+        `/clubs/${invitation.club.id}`,
+        `Welcome to ${invitation.club.name}.`,
+      );
     }
     const signedIn = await getUser(request);
     if (signedIn) {
       return data(
-        { errors: { form: [`You are already signed in as ${signedIn.email}. Sign out first to create another account.`] }, values },
+        {
+          errors: {
+            form: [
+              `You are already signed in as ${signedIn.email}. Sign out first to create another account.`,
+            ],
+          },
+          values,
+        },
         { status: 409 },
       );
     }
     const { invitation, userId } = await acceptWithSignUp(params.token, parsed.data);
-    return await createUserSession(request, userId, `/clubs/${invitation.club.id}`, `Welcome to ${invitation.club.name}. Your account is ready.`);
+    return await createUserSession(
+      request,
+      userId,
+      `/clubs/${invitation.club.id}`,
+      `Welcome to ${invitation.club.name}. Your account is ready.`,
+    );
   } catch (error) {
     if (error instanceof Response) throw error;
     return refusal(error, values);
@@ -94,7 +127,13 @@ export default function Invitation({ loaderData, actionData, params }: Route.Com
         </div>
       ) : null}
       {loaderData.state === "signed-out" ? (
-        <SignUpToJoin email={invitation.email} errors={errors} values={actionData?.values} busy={busy} signInHref={signInHref} />
+        <SignUpToJoin
+          email={invitation.email}
+          errors={errors}
+          values={actionData?.values}
+          busy={busy}
+          signInHref={signInHref}
+        />
       ) : null}
     </InvitationCard>
   );

@@ -22,7 +22,11 @@ export async function action({ request, params }: Route.ActionArgs) {
   const parsed = parseForm(createLayoutSchema, formData);
   if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
   const layout = await createLayout(club.id, user.id, parsed.data);
-  throw await redirectWithNotice(request, `/layouts/${layout.id}`, `${parsed.data.name} is saved as a draft.`);
+  throw await redirectWithNotice(
+    request,
+    `/layouts/${layout.id}`,
+    `${parsed.data.name} is saved as a draft.`,
+  );
 }
 
 export default function LayoutNew({ loaderData, actionData }: Route.ComponentProps) {

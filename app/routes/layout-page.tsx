@@ -17,7 +17,9 @@ import { parseForm } from "~/lib/forms";
 import { formValues } from "~/clubs/form-values.server";
 import { layoutActionSchema } from "~/lib/schemas/layouts";
 
-export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.layout.name ?? "Layout"} · Loftline` }];
+export const meta: Route.MetaFunction = ({ data }) => [
+  { title: `${data?.layout.name ?? "Layout"} · Loftline` },
+];
 
 /** Members see a published layout; only directors see drafts and archived ones (others get 404). */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -89,18 +91,23 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
           <StatusBadge status={layout.status} />
         </div>
       </header>
-      <FormMessage>{[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}</FormMessage>
+      <FormMessage>
+        {[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}
+      </FormMessage>
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
-        <section aria-labelledby="about" className="self-start rounded-lg border border-sand-200 bg-white p-4">
+        <section
+          aria-labelledby="about"
+          className="self-start rounded-lg border border-sand-200 bg-white p-4"
+        >
           <h2 id="about" className="mb-3 text-lg font-semibold">
             About this layout
           </h2>
           <LayoutMeta {...layout} clubName={club.name} createdByName={createdByName} />
-          <p className="mt-4 text-sm text-ink-500">The track drawing and the jump analysis will appear on this page.</p>
+          <p className="mt-4 text-sm text-ink-500">
+            The track drawing and the jump analysis will appear on this page.
+          </p>
         </section>
-        {isDirector ? (
-          <DirectorTools layout={layout} errors={errors} values={values} />
-        ) : null}
+        {isDirector ? <DirectorTools layout={layout} errors={errors} values={values} /> : null}
       </div>
     </article>
   );
@@ -116,8 +123,14 @@ function DirectorTools({ layout, errors, values }: Tools) {
   const busy = useNavigation().state === "submitting";
   const version = <input type="hidden" name="version" value={layout.version} />;
   const statusButtons: Record<LayoutStatus, [string, string][]> = {
-    draft: [["publish", "Publish for the club"], ["archive", "Archive"]],
-    published: [["unpublish", "Back to draft"], ["archive", "Archive"]],
+    draft: [
+      ["publish", "Publish for the club"],
+      ["archive", "Archive"],
+    ],
+    published: [
+      ["unpublish", "Back to draft"],
+      ["archive", "Archive"],
+    ],
     archived: [["unarchive", "Take out of the archive"]],
   };
   return (
@@ -144,7 +157,14 @@ function DirectorTools({ layout, errors, values }: Tools) {
         <Form method="post" className="mt-3 flex flex-wrap gap-2">
           {version}
           {statusButtons[layout.status].map(([intent, label]) => (
-            <Button key={intent} type="submit" name="intent" value={intent} variant={intent === "publish" ? "primary" : "secondary"} disabled={busy}>
+            <Button
+              key={intent}
+              type="submit"
+              name="intent"
+              value={intent}
+              variant={intent === "publish" ? "primary" : "secondary"}
+              disabled={busy}
+            >
               {label}
             </Button>
           ))}
@@ -157,7 +177,13 @@ function DirectorTools({ layout, errors, values }: Tools) {
         <Form method="post" className="mt-2 space-y-3">
           <input type="hidden" name="intent" value="delete" />
           <label className="flex items-start gap-2 text-sm">
-            <input type="checkbox" name="confirm" value="yes" className="mt-1" aria-describedby={errors?.confirm ? "confirm-error" : undefined} />
+            <input
+              type="checkbox"
+              name="confirm"
+              value="yes"
+              className="mt-1"
+              aria-describedby={errors?.confirm ? "confirm-error" : undefined}
+            />
             <span>Yes, delete {layout.name} and every saved version of it. This cannot be undone.</span>
           </label>
           <FieldError id="confirm-error" errors={errors?.confirm} />

@@ -36,7 +36,12 @@ describe("your clubs", () => {
     expect(r.status).toBe(302);
     const [club] = (await allClubs()).filter((c) => c.name === "Heron Lake Racing");
     expect(r.location).toBe(`/clubs/${club.id}`);
-    const rows = await (await db()).select({ userId: memberships.userId, role: memberships.role }).from(memberships).where(eq(memberships.clubId, club.id));
+    const rows = await (
+      await db()
+    )
+      .select({ userId: memberships.userId, role: memberships.role })
+      .from(memberships)
+      .where(eq(memberships.clubId, club.id));
     expect(rows).toEqual([{ userId: me.id, role: "director" }]);
   });
 
@@ -45,11 +50,17 @@ describe("your clubs", () => {
     const before = await allClubs();
     const empty = await createClub({ name: " " }, me.cookie);
     expect(empty.status).toBe(400);
-    expect((empty.data as { errors: Record<string, string[]> }).errors.name).toEqual(["Enter the club's name (at least 2 characters)."]);
+    expect((empty.data as { errors: Record<string, string[]> }).errors.name).toEqual([
+      "Enter the club's name (at least 2 characters).",
+    ]);
     const long = await createClub({ name: "x".repeat(81) }, me.cookie);
-    expect((long.data as { errors: Record<string, string[]> }).errors.name).toEqual(["Keep the club's name to 80 characters or fewer."]);
+    expect((long.data as { errors: Record<string, string[]> }).errors.name).toEqual([
+      "Keep the club's name to 80 characters or fewer.",
+    ]);
     const missing = await createClub({}, me.cookie);
-    expect((missing.data as { errors: Record<string, string[]> }).errors.name).toEqual(["Enter the club's name."]);
+    expect((missing.data as { errors: Record<string, string[]> }).errors.name).toEqual([
+      "Enter the club's name.",
+    ]);
     expect(await allClubs()).toEqual(before);
   });
 
@@ -67,8 +78,14 @@ describe("your clubs", () => {
 describe("the club frame", () => {
   it("loads the club and the reader's role for each member", async () => {
     const { club, director, marshal, driver } = await makeClubWithRoles();
-    for (const [who, role] of [[director, "director"], [marshal, "marshal"], [driver, "driver"]] as const) {
-      const r = await run(() => clubLayout.loader(args(getRequest(`/clubs/${club.id}`, who.cookie), { clubId: club.id })));
+    for (const [who, role] of [
+      [director, "director"],
+      [marshal, "marshal"],
+      [driver, "driver"],
+    ] as const) {
+      const r = await run(() =>
+        clubLayout.loader(args(getRequest(`/clubs/${club.id}`, who.cookie), { clubId: club.id })),
+      );
       expect(r.status).toBe(200);
       expect(r.data).toEqual({ club: { id: club.id, name: club.name }, role });
     }
@@ -80,6 +97,8 @@ describe("the club frame", () => {
       run(() => clubLayout.loader(args(getRequest(`/clubs/${clubId}`, cookie), { clubId })));
     expect((await frame(club.id, outsider.cookie)).status).toBe(403);
     expect((await frame("no-such-club", outsider.cookie)).status).toBe(404);
-    expect((await frame(club.id)).location).toBe(`/sign-in?redirectTo=${encodeURIComponent(`/clubs/${club.id}`)}`);
+    expect((await frame(club.id)).location).toBe(
+      `/sign-in?redirectTo=${encodeURIComponent(`/clubs/${club.id}`)}`,
+    );
   });
 });

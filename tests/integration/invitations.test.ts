@@ -20,9 +20,14 @@ let n = 0;
 const uniqueEmail = (tag: string) => `${tag}-${++n}@invite.example`;
 
 const invite = (clubId: string, email: string, role: string, cookie: string) =>
-  run(() => members.action(args(formRequest(`/clubs/${clubId}/members`, { intent: "invite", email, role }, cookie), { clubId })));
+  run(() =>
+    members.action(
+      args(formRequest(`/clubs/${clubId}/members`, { intent: "invite", email, role }, cookie), { clubId }),
+    ),
+  );
 const tokenOf = (path: string) => path.split("/").pop()!;
-const openLink = (path: string, cookie?: string) => run(() => invitation.loader(args(getRequest(path, cookie), { token: tokenOf(path) })));
+const openLink = (path: string, cookie?: string) =>
+  run(() => invitation.loader(args(getRequest(path, cookie), { token: tokenOf(path) })));
 const answer = (path: string, fields: Record<string, string>, cookie?: string) =>
   run(() => invitation.action(args(formRequest(path, fields, cookie), { token: tokenOf(path) })));
 const cookieFrom = (headers: Headers) => headers.get("Set-Cookie")!.split(";")[0];
@@ -37,21 +42,32 @@ async function inviteAndRead(clubId: string, clubName: string, email: string, ro
 }
 
 async function membershipOf(clubId: string, userId: string) {
-  const [row] = await (await db())
+  const [row] = await (
+    await db()
+  )
     .select({ role: memberships.role })
     .from(memberships)
     .where(and(eq(memberships.clubId, clubId), eq(memberships.userId, userId)));
   return row;
 }
 
-const pendingOf = async (clubId: string) => (await db()).select().from(invitations).where(eq(invitations.clubId, clubId));
+const pendingOf = async (clubId: string) =>
+  (await db()).select().from(invitations).where(eq(invitations.clubId, clubId));
 
 describe("invite and accept, end to end through the outbox", () => {
   it("a signed-out visitor follows the e-mailed link, signs up with the invited address and joins with the role", async () => {
     const { club, director } = await makeClubWithRoles();
     const email = uniqueEmail("newcomer");
-    const { mail, path } = await inviteAndRead(club.id, club.name, email.toUpperCase(), "marshal", director.cookie);
-    expect(mail.text).toContain(`${director.name} has invited you to join ${club.name} on Loftline as a marshal.`);
+    const { mail, path } = await inviteAndRead(
+      club.id,
+      club.name,
+      email.toUpperCase(),
+      "marshal",
+      director.cookie,
+    );
+    expect(mail.text).toContain(
+      `${director.name} has invited you to join ${club.name} on Loftline as a marshal.`,
+    );
     expect(mail.html).toContain(extractLink(mail.text));
     expect(path).toMatch(/^\/invitations\/[A-Za-z0-9_-]{43}$/);
 
@@ -59,19 +75,36 @@ describe("invite and accept, end to end through the outbox", () => {
     expect(stored.email).toBe(email);
     expect(stored.tokenHash).toBe(hashLinkToken(tokenOf(path)));
     expect(JSON.stringify(stored)).not.toContain(tokenOf(path));
-    expect(stored.expiresAt.getTime() - stored.createdAt.getTime()).toBeGreaterThan(INVITATION_LIFETIME_MS - 5000);
-    expect(stored.expiresAt.getTime() - stored.createdAt.getTime()).toBeLessThanOrEqual(INVITATION_LIFETIME_MS + 1000);
+    expect(stored.expiresAt.getTime() - stored.createdAt.getTime()).toBeGreaterThan(
+      INVITATION_LIFETIME_MS - 5000,
+    );
+    expect(stored.expiresAt.getTime() - stored.createdAt.getTime()).toBeLessThanOrEqual(
+      INVITATION_LIFETIME_MS + 1000,
+    );
 
     const page = await openLink(path);
     expect(page.status).toBe(200);
-    expect(page.data).toMatchObject({ state: "signed-out", invitation: { email, role: "marshal", club: { name: club.name }, inviterName: director.name } });
+    expect(page.data).toMatchObject({
+      state: "signed-out",
+      invitation: { email, role: "marshal", club: { name: club.name }, inviterName: director.name },
+    });
 
-    const mismatch = await answer(path, { intent: "sign-up", name: "Nia New", password: "long enough pw", confirm: "other words" });
+    const mismatch = await answer(path, {
+      intent: "sign-up",
+      name: "Nia New",
+      password: "long enough pw",
+      confirm: "other words",
+    });
     expect(mismatch.status).toBe(400);
     expect(errorsOf(mismatch).confirm).toEqual(["The two passwords do not match."]);
-    expect((await (await db()).select().from(users).where(eq(users.email, email)))).toEqual([]);
+    expect(await (await db()).select().from(users).where(eq(users.email, email))).toEqual([]);
 
-    const joined = await answer(path, { intent: "sign-up", name: "Nia New", password: "long enough pw", confirm: "long enough pw" });
+    const joined = await answer(path, {
+      intent: "sign-up",
+      name: "Nia New",
+      password: "long enough pw",
+      confirm: "long enough pw",
+    });
     expect(joined.status).toBe(302);
     expect(joined.location).toBe(`/clubs/${club.id}`);
     const me = await getUser(getRequest("/", cookieFrom(joined.headers)));
@@ -110,7 +143,13 @@ describe("invite and accept, end to end through the outbox", () => {
 describe("links that cannot be used", () => {
   it("answers 403 to someone signed in with another address, and writes nothing", async () => {
     const { club, director, outsider } = await makeClubWithRoles();
-    const { path } = await inviteAndRead(club.id, club.name, uniqueEmail("intended"), "driver", director.cookie);
+    const { path } = await inviteAndRead(
+      club.id,
+      club.name,
+      uniqueEmail("intended"),
+      "driver",
+      director.cookie,
+    );
     const page = await openLink(path, outsider.cookie);
     expect(page.status).toBe(403);
     expect((page.data as { message: string }).message).toMatch(/signed in as/);
@@ -125,23 +164,48 @@ describe("links that cannot be used", () => {
     const { club, director } = await makeClubWithRoles();
     const email = uniqueEmail("late");
     const { path } = await inviteAndRead(club.id, club.name, email, "driver", director.cookie);
-    await (await db()).update(invitations).set({ expiresAt: new Date("2026-03-04T10:00:00Z") }).where(eq(invitations.clubId, club.id));
+    await (
+      await db()
+    )
+      .update(invitations)
+      .set({ expiresAt: new Date("2026-03-04T10:00:00Z") })
+      .where(eq(invitations.clubId, club.id));
     const page = await openLink(path);
     expect(page.status).toBe(410);
     expect((page.data as { message: string }).message).toBe(
       "This invitation expired on 4 March 2026. Ask the club's race director to send it again.",
     );
-    const r = await answer(path, { intent: "sign-up", name: "Lee Late", password: "long enough pw", confirm: "long enough pw" });
+    const r = await answer(path, {
+      intent: "sign-up",
+      name: "Lee Late",
+      password: "long enough pw",
+      confirm: "long enough pw",
+    });
     expect(r.status).toBe(410);
     expect(await (await db()).select().from(users).where(eq(users.email, email))).toEqual([]);
   });
 
   it("answers 404 to a withdrawn link and to a made-up one", async () => {
     const { club, director } = await makeClubWithRoles();
-    const { path } = await inviteAndRead(club.id, club.name, uniqueEmail("withdrawn"), "driver", director.cookie);
+    const { path } = await inviteAndRead(
+      club.id,
+      club.name,
+      uniqueEmail("withdrawn"),
+      "driver",
+      director.cookie,
+    );
     const [pending] = await pendingOf(club.id);
     const revoked = await run(() =>
-      members.action(args(formRequest(`/clubs/${club.id}/members`, { intent: "revoke", invitationId: pending.id }, director.cookie), { clubId: club.id })),
+      members.action(
+        args(
+          formRequest(
+            `/clubs/${club.id}/members`,
+            { intent: "revoke", invitationId: pending.id },
+            director.cookie,
+          ),
+          { clubId: club.id },
+        ),
+      ),
     );
     expect(revoked.status).toBe(302);
     expect(await pendingOf(club.id)).toEqual([]);
@@ -157,7 +221,16 @@ describe("links that cannot be used", () => {
     const [pending] = await pendingOf(club.id);
     const since = new Date();
     const r = await run(() =>
-      members.action(args(formRequest(`/clubs/${club.id}/members`, { intent: "resend", invitationId: pending.id }, director.cookie), { clubId: club.id })),
+      members.action(
+        args(
+          formRequest(
+            `/clubs/${club.id}/members`,
+            { intent: "resend", invitationId: pending.id },
+            director.cookie,
+          ),
+          { clubId: club.id },
+        ),
+      ),
     );
     expect(r.status).toBe(302);
     const second = extractPath((await waitForMail(email, `Join ${club.name}`, { since })).text);
@@ -171,7 +244,12 @@ describe("links that cannot be used", () => {
     const { club, director } = await makeClubWithRoles();
     const existing = await makeUser({ email: uniqueEmail("has-account") });
     const { path } = await inviteAndRead(club.id, club.name, existing.email, "driver", director.cookie);
-    const r = await answer(path, { intent: "sign-up", name: "Someone", password: "long enough pw", confirm: "long enough pw" });
+    const r = await answer(path, {
+      intent: "sign-up",
+      name: "Someone",
+      password: "long enough pw",
+      confirm: "long enough pw",
+    });
     expect(r.status).toBe(409);
     expect(errorsOf(r).form[0]).toMatch(/Sign in to accept/);
     expect(await membershipOf(club.id, existing.id)).toBeUndefined();
@@ -198,7 +276,12 @@ describe("inviting: refusals", () => {
     const { club, director } = await makeClubWithRoles();
     const email = uniqueEmail("expired-then-new");
     await inviteAndRead(club.id, club.name, email, "driver", director.cookie);
-    await (await db()).update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.clubId, club.id));
+    await (
+      await db()
+    )
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.clubId, club.id));
     const { path } = await inviteAndRead(club.id, club.name, email, "marshal", director.cookie);
     const rows = await pendingOf(club.id);
     expect(rows).toHaveLength(1);

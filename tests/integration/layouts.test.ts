@@ -21,16 +21,28 @@ const change = (layoutId: string, fields: Record<string, string>, cookie?: strin
 const open = (layoutId: string, cookie?: string) =>
   run(() => layoutPage.loader(args(getRequest(`/layouts/${layoutId}`, cookie), { layoutId })));
 const row = async (id: string) => (await (await db()).select().from(layouts).where(eq(layouts.id, id)))[0];
-const clubLayouts = async (clubId: string) => (await db()).select().from(layouts).where(eq(layouts.clubId, clubId)).orderBy(layouts.id);
+const clubLayouts = async (clubId: string) =>
+  (await db()).select().from(layouts).where(eq(layouts.clubId, clubId)).orderBy(layouts.id);
 
 describe("creating a layout", () => {
   it("saves a draft with the director's name, surface and width, then opens its page", async () => {
     const { club, director } = await makeClubWithRoles();
-    const r = await create(club.id, { name: " Summer loop ", surface: "clay", trackWidth: "3,5" }, director.cookie);
+    const r = await create(
+      club.id,
+      { name: " Summer loop ", surface: "clay", trackWidth: "3,5" },
+      director.cookie,
+    );
     expect(r.status).toBe(302);
     const [saved] = await clubLayouts(club.id);
     expect(r.location).toBe(`/layouts/${saved.id}`);
-    expect(saved).toMatchObject({ name: "Summer loop", surface: "clay", trackWidth: 3.5, status: "draft", version: 1, createdBy: director.id });
+    expect(saved).toMatchObject({
+      name: "Summer loop",
+      surface: "clay",
+      trackWidth: 3.5,
+      status: "draft",
+      version: 1,
+      createdBy: director.id,
+    });
   });
 
   it("answers 400 naming each bad field, and writes nothing", async () => {
@@ -55,11 +67,19 @@ describe("what each role sees", () => {
     await makeLayout(club.id, { name: "Race day", status: "published" });
     await makeLayout(club.id, { name: "Old winter", status: "archived" });
     const list = async (cookie: string) => {
-      const r = await run(() => clubHome.loader(args(getRequest(`/clubs/${club.id}`, cookie), { clubId: club.id })));
+      const r = await run(() =>
+        clubHome.loader(args(getRequest(`/clubs/${club.id}`, cookie), { clubId: club.id })),
+      );
       expect(r.status).toBe(200);
-      return (r.data as { layouts: { name: string; status: string }[] }).layouts.map((l) => `${l.name}:${l.status}`);
+      return (r.data as { layouts: { name: string; status: string }[] }).layouts.map(
+        (l) => `${l.name}:${l.status}`,
+      );
     };
-    expect(await list(director.cookie)).toEqual(["Race day:published", "Draft loop:draft", "Old winter:archived"]);
+    expect(await list(director.cookie)).toEqual([
+      "Race day:published",
+      "Draft loop:draft",
+      "Old winter:archived",
+    ]);
     expect(await list(marshal.cookie)).toEqual(["Race day:published"]);
     expect(await list(driver.cookie)).toEqual(["Race day:published"]);
   });
@@ -86,7 +106,11 @@ describe("what each role sees", () => {
     const { club, director, marshal } = await makeClubWithRoles();
     const published = await makeLayout(club.id, { status: "published" });
     const settings = (cookie: string) =>
-      run(() => layoutSettings.loader(args(getRequest(`/layouts/${published.id}/settings`, cookie), { layoutId: published.id })));
+      run(() =>
+        layoutSettings.loader(
+          args(getRequest(`/layouts/${published.id}/settings`, cookie), { layoutId: published.id }),
+        ),
+      );
     const r = await settings(director.cookie);
     expect(r.status).toBe(302);
     expect(r.location).toBe(`/layouts/${published.id}#details`);
@@ -98,28 +122,51 @@ describe("changing a layout", () => {
   it("renames it and sets surface and width, bumping the version each time", async () => {
     const { club, director } = await makeClubWithRoles();
     const layout = await makeLayout(club.id, { name: "First" });
-    const r = await change(layout.id, { intent: "update", version: "1", name: "Second", surface: "turf", trackWidth: "4" }, director.cookie);
+    const r = await change(
+      layout.id,
+      { intent: "update", version: "1", name: "Second", surface: "turf", trackWidth: "4" },
+      director.cookie,
+    );
     expect(r.status).toBe(302);
     expect(r.location).toBe(`/layouts/${layout.id}`);
-    expect(await row(layout.id)).toMatchObject({ name: "Second", surface: "turf", trackWidth: 4, version: 2 });
+    expect(await row(layout.id)).toMatchObject({
+      name: "Second",
+      surface: "turf",
+      trackWidth: 4,
+      version: 2,
+    });
   });
 
   it("refuses with 409 a change that started from an older version, and keeps the newer one", async () => {
     const { club, director } = await makeClubWithRoles();
     const layout = await makeLayout(club.id, { name: "Kept" });
-    await change(layout.id, { intent: "update", version: "1", name: "Newer", surface: "dirt", trackWidth: "3" }, director.cookie);
-    const stale = await change(layout.id, { intent: "update", version: "1", name: "Older", surface: "clay", trackWidth: "5" }, director.cookie);
+    await change(
+      layout.id,
+      { intent: "update", version: "1", name: "Newer", surface: "dirt", trackWidth: "3" },
+      director.cookie,
+    );
+    const stale = await change(
+      layout.id,
+      { intent: "update", version: "1", name: "Older", surface: "clay", trackWidth: "5" },
+      director.cookie,
+    );
     expect(stale.status).toBe(409);
     expect(errorsOf(stale).version[0]).toMatch(/changed this layout after you opened it/);
     const staleStatus = await change(layout.id, { intent: "publish", version: "1" }, director.cookie);
     expect(staleStatus.status).toBe(409);
-    expect(await row(layout.id)).toMatchObject({ name: "Newer", surface: "dirt", version: 2, status: "draft" });
+    expect(await row(layout.id)).toMatchObject({
+      name: "Newer",
+      surface: "dirt",
+      version: 2,
+      status: "draft",
+    });
   });
 
   it("publishes, unpublishes, archives and takes out of the archive, refusing changes that do not apply", async () => {
     const { club, director } = await makeClubWithRoles();
     const layout = await makeLayout(club.id);
-    const step = async (intent: string, version: number) => (await change(layout.id, { intent, version: String(version) }, director.cookie)).status;
+    const step = async (intent: string, version: number) =>
+      (await change(layout.id, { intent, version: String(version) }, director.cookie)).status;
     expect(await step("publish", 1)).toBe(302);
     expect(await row(layout.id)).toMatchObject({ status: "published", version: 2 });
     expect(await step("publish", 2)).toBe(409); // already published
@@ -145,13 +192,19 @@ describe("changing a layout", () => {
     expect(r.status).toBe(302);
     expect(r.location).toBe(`/clubs/${club.id}`);
     expect(await row(layout.id)).toBeUndefined();
-    expect(await (await db()).select().from(layoutVersions).where(eq(layoutVersions.layoutId, layout.id))).toEqual([]);
+    expect(
+      await (await db()).select().from(layoutVersions).where(eq(layoutVersions.layoutId, layout.id)),
+    ).toEqual([]);
   });
 
   it("answers 400 naming the field for a bad width or a missing version", async () => {
     const { club, director } = await makeClubWithRoles();
     const layout = await makeLayout(club.id);
-    const r = await change(layout.id, { intent: "update", version: "1", name: "X", surface: "dirt", trackWidth: "wide" }, director.cookie);
+    const r = await change(
+      layout.id,
+      { intent: "update", version: "1", name: "X", surface: "dirt", trackWidth: "wide" },
+      director.cookie,
+    );
     expect(r.status).toBe(400);
     expect(errorsOf(r).trackWidth).toEqual(["Enter the track width as a number of metres, like 3.5."]);
     const noVersion = await change(layout.id, { intent: "publish" }, director.cookie);
@@ -179,22 +232,32 @@ describe("director-only layout actions", () => {
     }
     for (const [layoutId, fields] of forms) {
       for (const who of [marshal, driver, outsider]) {
-        expect((await change(layoutId, fields, who.cookie)).status, `${fields.intent} by ${who.name}`).toBe(403);
+        expect((await change(layoutId, fields, who.cookie)).status, `${fields.intent} by ${who.name}`).toBe(
+          403,
+        );
       }
       const anonymous = await change(layoutId, fields);
       expect(anonymous.status).toBe(302);
       expect(anonymous.location).toMatch(/^\/sign-in\?redirectTo=/);
     }
     for (const who of [marshal, driver, outsider]) {
-      expect((await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" }, who.cookie)).status).toBe(403);
+      expect(
+        (await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" }, who.cookie)).status,
+      ).toBe(403);
     }
-    expect((await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" })).location).toMatch(/^\/sign-in/);
+    expect((await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" })).location).toMatch(
+      /^\/sign-in/,
+    );
     expect(await clubLayouts(club.id)).toEqual(before);
   });
 
   it("answers 404 for a club or a layout that does not exist", async () => {
     const { director } = await makeClubWithRoles();
-    expect((await create("no-such-club", { name: "X", surface: "dirt", trackWidth: "3" }, director.cookie)).status).toBe(404);
-    expect((await change("no-such-layout", { intent: "delete", confirm: "yes" }, director.cookie)).status).toBe(404);
+    expect(
+      (await create("no-such-club", { name: "X", surface: "dirt", trackWidth: "3" }, director.cookie)).status,
+    ).toBe(404);
+    expect(
+      (await change("no-such-layout", { intent: "delete", confirm: "yes" }, director.cookie)).status,
+    ).toBe(404);
   });
 });

@@ -19,7 +19,11 @@ const post = (clubId: string, fields: Record<string, string>, cookie?: string) =
 const view = (clubId: string, cookie: string, search = "") =>
   run(() => members.loader(args(getRequest(`/clubs/${clubId}/members${search}`, cookie), { clubId })));
 
-type Loaded = { members: { id: string; name: string; email: string | null; role: string }[]; invitations: unknown[]; queryErrors: Errors };
+type Loaded = {
+  members: { id: string; name: string; email: string | null; role: string }[];
+  invitations: unknown[];
+  queryErrors: Errors;
+};
 const loaded = (r: { data: unknown }) => r.data as Loaded;
 
 async function membershipsOf(clubId: string) {
@@ -31,7 +35,9 @@ async function membershipsOf(clubId: string) {
 }
 
 async function membershipId(clubId: string, userId: string) {
-  const [row] = await (await db())
+  const [row] = await (
+    await db()
+  )
     .select({ id: memberships.id })
     .from(memberships)
     .where(and(eq(memberships.clubId, clubId), eq(memberships.userId, userId)));
@@ -47,7 +53,8 @@ describe("members table", () => {
     await addMember(club.id, amy.id, "marshal");
     await addMember(club.id, bob.id, "driver");
 
-    const names = async (search: string) => loaded(await view(club.id, director.cookie, search)).members.map((m) => m.name);
+    const names = async (search: string) =>
+      loaded(await view(club.id, director.cookie, search)).members.map((m) => m.name);
     expect(await names("")).toEqual(["amy Marshal", "Bob Driver", "Carla Director"]); // name, case-insensitive
     expect(await names("?dir=desc")).toEqual(["Carla Director", "Bob Driver", "amy Marshal"]);
     expect(await names("?sort=email")).toEqual(["Bob Driver", "Carla Director", "amy Marshal"]);
@@ -62,10 +69,20 @@ describe("members table", () => {
   it("orders by joined date, oldest first, newest first with dir=desc", async () => {
     const { club, director, marshal, driver } = await makeClubWithRoles();
     const d = await db();
-    await d.update(memberships).set({ createdAt: new Date("2026-01-01T00:00:00Z") }).where(eq(memberships.userId, driver.id));
-    await d.update(memberships).set({ createdAt: new Date("2026-02-01T00:00:00Z") }).where(eq(memberships.userId, director.id));
-    await d.update(memberships).set({ createdAt: new Date("2026-03-01T00:00:00Z") }).where(eq(memberships.userId, marshal.id));
-    const ids = async (search: string) => loaded(await view(club.id, director.cookie, search)).members.map((m) => m.name);
+    await d
+      .update(memberships)
+      .set({ createdAt: new Date("2026-01-01T00:00:00Z") })
+      .where(eq(memberships.userId, driver.id));
+    await d
+      .update(memberships)
+      .set({ createdAt: new Date("2026-02-01T00:00:00Z") })
+      .where(eq(memberships.userId, director.id));
+    await d
+      .update(memberships)
+      .set({ createdAt: new Date("2026-03-01T00:00:00Z") })
+      .where(eq(memberships.userId, marshal.id));
+    const ids = async (search: string) =>
+      loaded(await view(club.id, director.cookie, search)).members.map((m) => m.name);
     expect(await ids("?sort=joined")).toEqual([driver.name, director.name, marshal.name]);
     expect(await ids("?sort=joined&dir=desc")).toEqual([marshal.name, director.name, driver.name]);
   });
@@ -115,14 +132,25 @@ describe("members table", () => {
 describe("changing roles and removing members", () => {
   it("lets a director change a member's role and remove a member", async () => {
     const { club, director, marshal, driver } = await makeClubWithRoles();
-    const changed = await post(club.id, { intent: "change-role", memberId: await membershipId(club.id, marshal.id), role: "director" }, director.cookie);
+    const changed = await post(
+      club.id,
+      { intent: "change-role", memberId: await membershipId(club.id, marshal.id), role: "director" },
+      director.cookie,
+    );
     expect(changed.status).toBe(302);
     expect(changed.location).toBe(`/clubs/${club.id}/members`);
-    const removed = await post(club.id, { intent: "remove", memberId: await membershipId(club.id, driver.id) }, director.cookie);
+    const removed = await post(
+      club.id,
+      { intent: "remove", memberId: await membershipId(club.id, driver.id) },
+      director.cookie,
+    );
     expect(removed.status).toBe(302);
     const rows = await membershipsOf(club.id);
     expect(rows.map((r) => [r.userId, r.role]).sort()).toEqual(
-      [[director.id, "director"], [marshal.id, "director"]].sort(),
+      [
+        [director.id, "director"],
+        [marshal.id, "director"],
+      ].sort(),
     );
   });
 
@@ -130,7 +158,16 @@ describe("changing roles and removing members", () => {
     const { club, director, driver } = await makeClubWithRoles();
     const memberId = await membershipId(club.id, driver.id);
     const r = await run(() =>
-      members.action(args(formRequest(`/clubs/${club.id}/members?sort=role&dir=desc`, { intent: "change-role", memberId, role: "marshal" }, director.cookie), { clubId: club.id })),
+      members.action(
+        args(
+          formRequest(
+            `/clubs/${club.id}/members?sort=role&dir=desc`,
+            { intent: "change-role", memberId, role: "marshal" },
+            director.cookie,
+          ),
+          { clubId: club.id },
+        ),
+      ),
     );
     expect(r.location).toBe(`/clubs/${club.id}/members?sort=role&dir=desc`);
   });
@@ -152,10 +189,18 @@ describe("changing roles and removing members", () => {
     const { club, director, marshal } = await makeClubWithRoles();
     const marshalId = await membershipId(club.id, marshal.id);
     await post(club.id, { intent: "change-role", memberId: marshalId, role: "director" }, director.cookie);
-    const leave = await post(club.id, { intent: "remove", memberId: await membershipId(club.id, director.id) }, director.cookie);
+    const leave = await post(
+      club.id,
+      { intent: "remove", memberId: await membershipId(club.id, director.id) },
+      director.cookie,
+    );
     expect(leave.status).toBe(302);
     expect(leave.location).toBe("/clubs");
-    const last = await post(club.id, { intent: "change-role", memberId: marshalId, role: "driver" }, marshal.cookie);
+    const last = await post(
+      club.id,
+      { intent: "change-role", memberId: marshalId, role: "driver" },
+      marshal.cookie,
+    );
     expect(last.status).toBe(409);
   });
 
@@ -165,7 +210,10 @@ describe("changing roles and removing members", () => {
     const b = await membershipId(club.id, marshal.id);
     await post(club.id, { intent: "change-role", memberId: b, role: "director" }, director.cookie);
     // Both changes start before either finishes; the rule is checked inside each transaction.
-    const results = await Promise.allSettled([changeMemberRole(club.id, a, "driver"), changeMemberRole(club.id, b, "driver")]);
+    const results = await Promise.allSettled([
+      changeMemberRole(club.id, a, "driver"),
+      changeMemberRole(club.id, b, "driver"),
+    ]);
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(1);
     const refused = results.find((r): r is PromiseRejectedResult => r.status === "rejected");
     expect(refused?.reason).toBeInstanceOf(RuleError);
@@ -182,7 +230,11 @@ describe("changing roles and removing members", () => {
     const r = await post(one.club.id, { intent: "remove", memberId: foreign }, one.director.cookie);
     expect(r.status).toBe(404);
     expect(errorsOf(r).memberId).toEqual(["No such member in this club."]);
-    const c = await post(one.club.id, { intent: "change-role", memberId: foreign, role: "director" }, one.director.cookie);
+    const c = await post(
+      one.club.id,
+      { intent: "change-role", memberId: foreign, role: "director" },
+      one.director.cookie,
+    );
     expect(c.status).toBe(404);
     expect(await membershipsOf(two.club.id)).toEqual(before);
   });
@@ -190,7 +242,11 @@ describe("changing roles and removing members", () => {
   it("answers 400 naming the field for a bad role or a missing intent", async () => {
     const { club, director, driver } = await makeClubWithRoles();
     const before = await membershipsOf(club.id);
-    const badRole = await post(club.id, { intent: "change-role", memberId: await membershipId(club.id, driver.id), role: "owner" }, director.cookie);
+    const badRole = await post(
+      club.id,
+      { intent: "change-role", memberId: await membershipId(club.id, driver.id), role: "owner" },
+      director.cookie,
+    );
     expect(badRole.status).toBe(400);
     expect(errorsOf(badRole).role).toEqual(["Choose a role: director, marshal or driver."]);
     const noIntent = await post(club.id, { memberId: "x" }, director.cookie);
@@ -203,9 +259,17 @@ describe("changing roles and removing members", () => {
 describe("director-only member actions", () => {
   it("answers 403 to a marshal, a driver and a non-member, sends a signed-out visitor to sign in, and changes nothing", async () => {
     const { club, director, marshal, driver, outsider } = await makeClubWithRoles();
-    const [invitation] = await (await db())
+    const [invitation] = await (
+      await db()
+    )
       .insert(invitations)
-      .values({ clubId: club.id, email: "waiting@members.example", role: "driver", tokenHash: hashLinkToken("w".repeat(43)), expiresAt: new Date(Date.now() + 60_000) })
+      .values({
+        clubId: club.id,
+        email: "waiting@members.example",
+        role: "driver",
+        tokenHash: hashLinkToken("w".repeat(43)),
+        expiresAt: new Date(Date.now() + 60_000),
+      })
       .returning();
     const directorMember = await membershipId(club.id, director.id);
     const driverMember = await membershipId(club.id, driver.id);
@@ -236,7 +300,11 @@ describe("director-only member actions", () => {
 
   it("answers 404 for a club id that does not exist", async () => {
     const { director } = await makeClubWithRoles();
-    const r = await post("no-such-club", { intent: "invite", email: "x@members.example", role: "driver" }, director.cookie);
+    const r = await post(
+      "no-such-club",
+      { intent: "invite", email: "x@members.example", role: "driver" },
+      director.cookie,
+    );
     expect(r.status).toBe(404);
   });
 });

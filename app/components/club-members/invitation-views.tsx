@@ -13,15 +13,27 @@ function roleWithArticle(role: Role): string {
 }
 
 /** The invitation's facts (club, role, who invited, to which address) around the next step. */
-export function InvitationCard({ invitation, formError, children }: { invitation: Shown; formError?: string; children: ReactNode }) {
+export function InvitationCard({
+  invitation,
+  formError,
+  children,
+}: {
+  invitation: Shown;
+  formError?: string;
+  children: ReactNode;
+}) {
   return (
-    <section aria-labelledby="invitation-heading" className="mx-auto max-w-md rounded-lg border border-sand-200 bg-white p-6">
+    <section
+      aria-labelledby="invitation-heading"
+      className="mx-auto max-w-md rounded-lg border border-sand-200 bg-white p-6"
+    >
       <p className="text-sm text-ink-500">Invitation</p>
       <h1 id="invitation-heading" className="mt-1 text-2xl font-semibold">
         Join {invitation.club.name}
       </h1>
       <p className="mt-3 text-ink-700">
-        {invitation.inviterName ?? "A race director"} invited <strong className="font-medium">{invitation.email}</strong> to join as{" "}
+        {invitation.inviterName ?? "A race director"} invited{" "}
+        <strong className="font-medium">{invitation.email}</strong> to join as{" "}
         {roleWithArticle(invitation.role)}.
       </p>
       <div className="mt-5 space-y-4">
@@ -42,7 +54,13 @@ export function JoinForm({ busy, clubName }: { busy: boolean; clubName: string }
   );
 }
 
-type SignUpProps = { email: string; errors?: FieldErrors; values?: Record<string, string>; busy: boolean; signInHref: string };
+type SignUpProps = {
+  email: string;
+  errors?: FieldErrors;
+  values?: Record<string, string>;
+  busy: boolean;
+  signInHref: string;
+};
 
 /** A signed-out visitor creates the account right here; the address is the invited one and cannot change. */
 export function SignUpToJoin({ email, errors, values, busy, signInHref }: SignUpProps) {
@@ -56,10 +74,39 @@ export function SignUpToJoin({ email, errors, values, busy, signInHref }: SignUp
         . Otherwise create one:
       </p>
       <Form method="post" className="space-y-4" noValidate>
-        <Field label="E-mail address" name="email-shown" value={email} readOnly disabled hint="The address the invitation was sent to." />
-        <Field label="Your name" name="name" autoComplete="name" required defaultValue={values?.name} errors={errors?.name} />
-        <Field label="Password" name="password" type="password" autoComplete="new-password" required errors={errors?.password} hint="At least 10 characters." />
-        <Field label="Password again" name="confirm" type="password" autoComplete="new-password" required errors={errors?.confirm} />
+        <Field
+          label="E-mail address"
+          name="email-shown"
+          value={email}
+          readOnly
+          disabled
+          hint="The address the invitation was sent to."
+        />
+        <Field
+          label="Your name"
+          name="name"
+          autoComplete="name"
+          required
+          defaultValue={values?.name}
+          errors={errors?.name}
+        />
+        <Field
+          label="Password"
+          name="password"
+          type="password"
+          autoComplete="new-password"
+          required
+          errors={errors?.password}
+          hint="At least 10 characters."
+        />
+        <Field
+          label="Password again"
+          name="confirm"
+          type="password"
+          autoComplete="new-password"
+          required
+          errors={errors?.confirm}
+        />
         <Button type="submit" name="intent" value="sign-up" disabled={busy}>
           Create my account and join
         </Button>

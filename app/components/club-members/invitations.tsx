@@ -13,12 +13,20 @@ export type InvitationView = {
   expired: boolean;
 };
 
-const day = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const day = new Intl.DateTimeFormat("en-GB", {
+  day: "numeric",
+  month: "short",
+  year: "numeric",
+  timeZone: "UTC",
+});
 
 /** Invite by e-mail with a role; the e-mail's link signs the person up or lets them join. */
 export function InviteForm({ errors, values }: { errors?: FieldErrors; values?: Record<string, string> }) {
   return (
-    <section aria-labelledby="invite-heading" className="max-w-xl rounded-lg border border-sand-200 bg-white p-4">
+    <section
+      aria-labelledby="invite-heading"
+      className="max-w-xl rounded-lg border border-sand-200 bg-white p-4"
+    >
       <h2 id="invite-heading" className="text-lg font-semibold">
         Invite someone
       </h2>
@@ -27,8 +35,23 @@ export function InviteForm({ errors, values }: { errors?: FieldErrors; values?: 
         directors can change everything, members included.
       </p>
       <Form method="post" className="mt-4 grid gap-4 sm:grid-cols-[1fr_12rem]" noValidate>
-        <Field label="E-mail address" id="invite-email" name="email" type="email" autoComplete="off" required defaultValue={values?.email} errors={errors?.email} />
-        <SelectField label="Role" id="invite-role" name="role" defaultValue={values?.role ?? "driver"} errors={errors?.role}>
+        <Field
+          label="E-mail address"
+          id="invite-email"
+          name="email"
+          type="email"
+          autoComplete="off"
+          required
+          defaultValue={values?.email}
+          errors={errors?.email}
+        />
+        <SelectField
+          label="Role"
+          id="invite-role"
+          name="role"
+          defaultValue={values?.role ?? "driver"}
+          errors={errors?.role}
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}
@@ -65,19 +88,26 @@ export function PendingInvitations({ invitations, rowError }: ListProps) {
           {invitations.map((inv) => {
             const errors = rowError?.invitationId === inv.id ? rowError.errors : undefined;
             return (
-              <li key={inv.id} className="flex flex-wrap items-center justify-between gap-3 px-4 py-3 text-sm">
+              <li
+                key={inv.id}
+                className="flex flex-wrap items-center justify-between gap-3 px-4 py-3 text-sm"
+              >
                 <div>
                   <p className="font-medium">{inv.email}</p>
                   <p className="text-ink-500">
                     {ROLE_LABELS[inv.role]}
                     {inv.invitedByName ? ` · invited by ${inv.invitedByName}` : ""} ·{" "}
                     {inv.expired ? (
-                      <strong className="font-medium text-danger-700">expired {day.format(new Date(inv.expiresAt))}</strong>
+                      <strong className="font-medium text-danger-700">
+                        expired {day.format(new Date(inv.expiresAt))}
+                      </strong>
                     ) : (
                       `link works until ${day.format(new Date(inv.expiresAt))}`
                     )}
                   </p>
-                  <FieldError errors={errors ? [...(errors.invitationId ?? []), ...(errors.form ?? [])] : undefined} />
+                  <FieldError
+                    errors={errors ? [...(errors.invitationId ?? []), ...(errors.form ?? [])] : undefined}
+                  />
                 </div>
                 <Form method="post" className="flex gap-2">
                   <input type="hidden" name="invitationId" value={inv.id} />

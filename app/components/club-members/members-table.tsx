@@ -14,7 +14,12 @@ export type MemberView = {
   joinedAt: Date | string;
 };
 
-const joined = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const joined = new Intl.DateTimeFormat("en-GB", {
+  day: "numeric",
+  month: "short",
+  year: "numeric",
+  timeZone: "UTC",
+});
 
 /** The query string for the table with some parameters changed; defaults are left out. */
 export function memberQueryString(query: MemberQuery, change: Partial<MemberQuery> = {}): string {
@@ -29,11 +34,31 @@ export function memberQueryString(query: MemberQuery, change: Partial<MemberQuer
 }
 
 /** The search and role filter: a GET form, so it works without JavaScript and the URL can be shared. */
-export function MemberFilters({ query, errors, withEmail }: { query: MemberQuery; errors: FieldErrors; withEmail: boolean }) {
+export function MemberFilters({
+  query,
+  errors,
+  withEmail,
+}: {
+  query: MemberQuery;
+  errors: FieldErrors;
+  withEmail: boolean;
+}) {
   return (
-    <Form method="get" className="mt-3 flex flex-wrap items-end gap-3" role="search" aria-label="Filter members">
+    <Form
+      method="get"
+      className="mt-3 flex flex-wrap items-end gap-3"
+      role="search"
+      aria-label="Filter members"
+    >
       <div className="w-full sm:w-64">
-        <Field label={withEmail ? "Search by name or e-mail" : "Search by name"} id="filter-q" name="q" type="search" defaultValue={query.q} errors={errors.q} />
+        <Field
+          label={withEmail ? "Search by name or e-mail" : "Search by name"}
+          id="filter-q"
+          name="q"
+          type="search"
+          defaultValue={query.q}
+          errors={errors.q}
+        />
       </div>
       <div className="w-44">
         <SelectField label="Role" id="filter-role" name="role" defaultValue={query.role} errors={errors.role}>
@@ -51,7 +76,10 @@ export function MemberFilters({ query, errors, withEmail }: { query: MemberQuery
         Filter
       </Button>
       {query.q || query.role !== "all" ? (
-        <Link to={memberQueryString(query, { q: "", role: "all" })} className="py-2 text-sm text-pine-700 hover:underline">
+        <Link
+          to={memberQueryString(query, { q: "", role: "all" })}
+          className="py-2 text-sm text-pine-700 hover:underline"
+        >
           Show everyone
         </Link>
       ) : null}
@@ -66,7 +94,10 @@ function SortHeader({ label, sort, query }: { label: string; sort: MemberSort; q
   const ariaSort = active ? (query.dir === "asc" ? "ascending" : "descending") : "none";
   return (
     <th scope="col" aria-sort={ariaSort} className="px-3 py-2 text-left font-medium">
-      <Link to={memberQueryString(query, { sort, dir: nextDir })} className="inline-flex items-center gap-1 hover:underline">
+      <Link
+        to={memberQueryString(query, { sort, dir: nextDir })}
+        className="inline-flex items-center gap-1 hover:underline"
+      >
         {label}
         <span aria-hidden="true" className="text-ink-500">
           {active ? (query.dir === "asc" ? "▲" : "▼") : "↕"}
@@ -119,11 +150,19 @@ export function MembersTable({ members, query, isDirector, me, rowError }: Table
                 </td>
                 {isDirector ? <td className="px-3 py-2 text-ink-700">{m.email}</td> : null}
                 <td className="px-3 py-2">{ROLE_LABELS[m.role]}</td>
-                <td className="px-3 py-2 whitespace-nowrap text-ink-700">{joined.format(new Date(m.joinedAt))}</td>
+                <td className="px-3 py-2 whitespace-nowrap text-ink-700">
+                  {joined.format(new Date(m.joinedAt))}
+                </td>
                 {isDirector ? (
                   <td className="px-3 py-2">
                     <RowActions member={m} isMe={m.userId === me} />
-                    <FieldError errors={errors ? [...(errors.role ?? []), ...(errors.memberId ?? []), ...(errors.form ?? [])] : undefined} />
+                    <FieldError
+                      errors={
+                        errors
+                          ? [...(errors.role ?? []), ...(errors.memberId ?? []), ...(errors.form ?? [])]
+                          : undefined
+                      }
+                    />
                   </td>
                 ) : null}
               </tr>
@@ -144,7 +183,12 @@ function RowActions({ member, isMe }: { member: MemberView; isMe: boolean }) {
         <label htmlFor={selectId} className="sr-only">
           Role of {member.name}
         </label>
-        <select id={selectId} name="role" defaultValue={member.role} className="rounded-md border border-ink-300 bg-white px-2 py-1 text-sm">
+        <select
+          id={selectId}
+          name="role"
+          defaultValue={member.role}
+          className="rounded-md border border-ink-300 bg-white px-2 py-1 text-sm"
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}
@@ -156,7 +200,9 @@ function RowActions({ member, isMe }: { member: MemberView; isMe: boolean }) {
         </button>
       </Form>
       <details>
-        <summary className="cursor-pointer text-sm text-danger-700">{isMe ? "Leave the club" : "Remove"}</summary>
+        <summary className="cursor-pointer text-sm text-danger-700">
+          {isMe ? "Leave the club" : "Remove"}
+        </summary>
         <Form method="post" className="mt-2 space-y-2">
           <input type="hidden" name="memberId" value={member.id} />
           <p className="text-xs text-ink-700">

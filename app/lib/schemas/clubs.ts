@@ -43,11 +43,25 @@ export const personNameField = z
 export const createClubSchema = z.object({ name: clubNameField });
 
 /** The members page's forms, told apart by their `intent` button. */
-export const inviteSchema = z.object({ intent: z.literal("invite"), email: inviteEmailField, role: roleField });
-export const changeRoleSchema = z.object({ intent: z.literal("change-role"), memberId: idField("member"), role: roleField });
+export const inviteSchema = z.object({
+  intent: z.literal("invite"),
+  email: inviteEmailField,
+  role: roleField,
+});
+export const changeRoleSchema = z.object({
+  intent: z.literal("change-role"),
+  memberId: idField("member"),
+  role: roleField,
+});
 export const removeMemberSchema = z.object({ intent: z.literal("remove"), memberId: idField("member") });
-export const resendInvitationSchema = z.object({ intent: z.literal("resend"), invitationId: idField("invitation") });
-export const revokeInvitationSchema = z.object({ intent: z.literal("revoke"), invitationId: idField("invitation") });
+export const resendInvitationSchema = z.object({
+  intent: z.literal("resend"),
+  invitationId: idField("invitation"),
+});
+export const revokeInvitationSchema = z.object({
+  intent: z.literal("revoke"),
+  invitationId: idField("invitation"),
+});
 
 export const memberActionSchema = z.discriminatedUnion(
   "intent",
@@ -66,9 +80,13 @@ export const acceptWithSignUpSchema = z
     confirm: z.string({ error: "Type the password again." }).min(1, { error: "Type the password again." }),
   })
   .refine((v) => v.password === v.confirm, { error: "The two passwords do not match.", path: ["confirm"] });
-export const invitationActionSchema = z.discriminatedUnion("intent", [acceptInvitationSchema, acceptWithSignUpSchema], {
-  error: "This form does not say what to do (intent): join or sign-up.",
-});
+export const invitationActionSchema = z.discriminatedUnion(
+  "intent",
+  [acceptInvitationSchema, acceptWithSignUpSchema],
+  {
+    error: "This form does not say what to do (intent): join or sign-up.",
+  },
+);
 
 export const MEMBER_SORTS = ["name", "email", "role", "joined"] as const;
 export type MemberSort = (typeof MEMBER_SORTS)[number];
@@ -78,9 +96,7 @@ export type MemberSort = (typeof MEMBER_SORTS)[number];
  * JavaScript. Empty parameters take their defaults.
  */
 export const memberQuerySchema = z.object({
-  sort: z
-    .enum(MEMBER_SORTS, { error: "Sort by name, email, role or joined." })
-    .default("name"),
+  sort: z.enum(MEMBER_SORTS, { error: "Sort by name, email, role or joined." }).default("name"),
   dir: z.enum(["asc", "desc"], { error: "Sort direction must be asc or desc." }).default("asc"),
   role: z.enum(["all", ...ROLES], { error: `Filter by role: all, ${ROLE_LIST}.` }).default("all"),
   q: z.string().trim().max(100, { error: "Keep the search text to 100 characters or fewer." }).default(""),

@@ -48,19 +48,27 @@ export const createLayoutSchema = z.object({
 });
 
 /** The layout page's forms, told apart by their `intent` button. */
-export const updateLayoutSchema = createLayoutSchema.extend({ intent: z.literal("update"), version: versionField });
+export const updateLayoutSchema = createLayoutSchema.extend({
+  intent: z.literal("update"),
+  version: versionField,
+});
 export const statusChangeSchema = z.object({
   intent: z.enum(["publish", "unpublish", "archive", "unarchive"]),
   version: versionField,
 });
 export const deleteLayoutSchema = z.object({
   intent: z.literal("delete"),
-  confirm: z.literal("yes", { error: "Tick the box to confirm that the layout and all its versions go for good." }),
+  confirm: z.literal("yes", {
+    error: "Tick the box to confirm that the layout and all its versions go for good.",
+  }),
 });
 
 export const layoutActionSchema = z.discriminatedUnion(
   "intent",
   [updateLayoutSchema, statusChangeSchema, deleteLayoutSchema],
-  { error: "This form does not say what to do (intent): update, publish, unpublish, archive, unarchive or delete." },
+  {
+    error:
+      "This form does not say what to do (intent): update, publish, unpublish, archive, unarchive or delete.",
+  },
 );
 export type LayoutAction = z.infer<typeof layoutActionSchema>;

@@ -11,7 +11,9 @@ describe("roleAllows", () => {
 
 describe("canSeeLayout", () => {
   it("shows directors every status and marshals and drivers only published layouts", () => {
-    const seen = Object.fromEntries(ROLES.map((role) => [role, LAYOUT_STATUSES.filter((s) => canSeeLayout(role, s))]));
+    const seen = Object.fromEntries(
+      ROLES.map((role) => [role, LAYOUT_STATUSES.filter((s) => canSeeLayout(role, s))]),
+    );
     expect(seen).toEqual({
       director: ["draft", "published", "archived"],
       marshal: ["published"],

@@ -16,7 +16,10 @@ const form = (fields: Record<string, string>) => {
 describe("createClubSchema", () => {
   it("trims the name and keeps it between 2 and 80 characters", () => {
     expect(createClubSchema.parse({ name: "  Kestrel Valley  " })).toEqual({ name: "Kestrel Valley" });
-    expect(parseForm(createClubSchema, form({ name: "K" }))).toEqual({ ok: false, errors: { name: ["Enter the club's name (at least 2 characters)."] } });
+    expect(parseForm(createClubSchema, form({ name: "K" }))).toEqual({
+      ok: false,
+      errors: { name: ["Enter the club's name (at least 2 characters)."] },
+    });
     expect(parseForm(createClubSchema, form({ name: "x".repeat(80) })).ok).toBe(true);
     expect(parseForm(createClubSchema, form({ name: "x".repeat(81) })).ok).toBe(false);
   });
@@ -24,7 +27,10 @@ describe("createClubSchema", () => {
 
 describe("memberActionSchema", () => {
   it("reads an invitation with a lower-cased, trimmed address and a role", () => {
-    const r = parseForm(memberActionSchema, form({ intent: "invite", email: "  Rae@Track.Example ", role: "marshal" }));
+    const r = parseForm(
+      memberActionSchema,
+      form({ intent: "invite", email: "  Rae@Track.Example ", role: "marshal" }),
+    );
     expect(r).toEqual({ ok: true, data: { intent: "invite", email: "rae@track.example", role: "marshal" } });
   });
 
@@ -37,7 +43,10 @@ describe("memberActionSchema", () => {
         role: ["Choose a role: director, marshal or driver."],
       },
     });
-    const change = parseForm(memberActionSchema, form({ intent: "change-role", memberId: " ", role: "driver" }));
+    const change = parseForm(
+      memberActionSchema,
+      form({ intent: "change-role", memberId: " ", role: "driver" }),
+    );
     expect(change).toEqual({ ok: false, errors: { memberId: ["Say which member this is about."] } });
     const missing = parseForm(memberActionSchema, form({ intent: "invite", role: "driver" }));
     expect(missing).toEqual({ ok: false, errors: { email: ["Enter the e-mail address to invite."] } });
@@ -64,26 +73,44 @@ describe("memberActionSchema", () => {
 
 describe("invitationActionSchema", () => {
   it("signs up with a name and a confirmed password of at least 10 characters", () => {
-    const ok = parseForm(invitationActionSchema, form({ intent: "sign-up", name: " Ana ", password: "ten chars!", confirm: "ten chars!" }));
-    expect(ok).toEqual({ ok: true, data: { intent: "sign-up", name: "Ana", password: "ten chars!", confirm: "ten chars!" } });
-    const bad = parseForm(invitationActionSchema, form({ intent: "sign-up", name: "", password: "short", confirm: "short" }));
+    const ok = parseForm(
+      invitationActionSchema,
+      form({ intent: "sign-up", name: " Ana ", password: "ten chars!", confirm: "ten chars!" }),
+    );
+    expect(ok).toEqual({
+      ok: true,
+      data: { intent: "sign-up", name: "Ana", password: "ten chars!", confirm: "ten chars!" },
+    });
+    const bad = parseForm(
+      invitationActionSchema,
+      form({ intent: "sign-up", name: "", password: "short", confirm: "short" }),
+    );
     expect(bad.ok).toBe(false);
     if (!bad.ok) {
       expect(bad.errors.name).toEqual(["Enter your name."]);
       expect(bad.errors.password?.[0]).toMatch(/at least 10 characters/);
     }
-    const mismatch = parseForm(invitationActionSchema, form({ intent: "sign-up", name: "Ana", password: "ten chars!", confirm: "ten chars?" }));
+    const mismatch = parseForm(
+      invitationActionSchema,
+      form({ intent: "sign-up", name: "Ana", password: "ten chars!", confirm: "ten chars?" }),
+    );
     expect(mismatch).toEqual({ ok: false, errors: { confirm: ["The two passwords do not match."] } });
   });
 
   it("joins with nothing but the intent", () => {
-    expect(parseForm(invitationActionSchema, form({ intent: "join" }))).toEqual({ ok: true, data: { intent: "join" } });
+    expect(parseForm(invitationActionSchema, form({ intent: "join" }))).toEqual({
+      ok: true,
+      data: { intent: "join" },
+    });
   });
 });
 
 describe("parseMemberQuery", () => {
   it("takes defaults for absent or empty parameters", () => {
-    expect(parseMemberQuery(new URLSearchParams("q=&role="))).toEqual({ ok: true, query: { sort: "name", dir: "asc", role: "all", q: "" } });
+    expect(parseMemberQuery(new URLSearchParams("q=&role="))).toEqual({
+      ok: true,
+      query: { sort: "name", dir: "asc", role: "all", q: "" },
+    });
   });
 
   it("reads every parameter and trims the search text", () => {
@@ -98,7 +125,10 @@ describe("parseMemberQuery", () => {
     expect(r).toEqual({
       ok: false,
       query: { sort: "name", dir: "asc", role: "marshal", q: "x" },
-      errors: { sort: ["Sort by name, email, role or joined."], dir: ["Sort direction must be asc or desc."] },
+      errors: {
+        sort: ["Sort by name, email, role or joined."],
+        dir: ["Sort direction must be asc or desc."],
+      },
     });
   });
 });

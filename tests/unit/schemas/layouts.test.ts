@@ -1,13 +1,19 @@
 import { describe, expect, it } from "vitest";
 import { parseForm } from "~/lib/forms";
-import { createLayoutSchema, layoutActionSchema, TRACK_WIDTH_MAX_M, TRACK_WIDTH_MIN_M } from "~/lib/schemas/layouts";
+import {
+  createLayoutSchema,
+  layoutActionSchema,
+  TRACK_WIDTH_MAX_M,
+  TRACK_WIDTH_MIN_M,
+} from "~/lib/schemas/layouts";
 
 const form = (fields: Record<string, string>) => {
   const fd = new FormData();
   for (const [k, v] of Object.entries(fields)) fd.set(k, v);
   return fd;
 };
-const width = (trackWidth: string) => parseForm(createLayoutSchema, form({ name: "Loop", surface: "dirt", trackWidth }));
+const width = (trackWidth: string) =>
+  parseForm(createLayoutSchema, form({ name: "Loop", surface: "dirt", trackWidth }));
 
 describe("createLayoutSchema", () => {
   it("reads the track width in metres, with a decimal point or comma, within 1.5 to 10 m", () => {
@@ -15,10 +21,19 @@ describe("createLayoutSchema", () => {
     expect(width(" 2,75 ")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 2.75 } });
     expect(width(String(TRACK_WIDTH_MIN_M)).ok).toBe(true);
     expect(width(String(TRACK_WIDTH_MAX_M)).ok).toBe(true);
-    expect(width("1.49")).toEqual({ ok: false, errors: { trackWidth: ["Track width must be at least 1.5 m."] } });
-    expect(width("10.01")).toEqual({ ok: false, errors: { trackWidth: ["Track width must be at most 10 m."] } });
+    expect(width("1.49")).toEqual({
+      ok: false,
+      errors: { trackWidth: ["Track width must be at least 1.5 m."] },
+    });
+    expect(width("10.01")).toEqual({
+      ok: false,
+      errors: { trackWidth: ["Track width must be at most 10 m."] },
+    });
     expect(width("")).toEqual({ ok: false, errors: { trackWidth: ["Enter the track width in metres."] } });
-    expect(width("three")).toEqual({ ok: false, errors: { trackWidth: ["Enter the track width as a number of metres, like 3.5."] } });
+    expect(width("three")).toEqual({
+      ok: false,
+      errors: { trackWidth: ["Enter the track width as a number of metres, like 3.5."] },
+    });
   });
 
   it("accepts the four surfaces only and needs a name", () => {
@@ -27,16 +42,25 @@ describe("createLayoutSchema", () => {
     }
     expect(parseForm(createLayoutSchema, form({ name: "  ", surface: "sand", trackWidth: "3" }))).toEqual({
       ok: false,
-      errors: { name: ["Enter a name for the layout."], surface: ["Choose a surface: dirt, clay, turf or carpet."] },
+      errors: {
+        name: ["Enter a name for the layout."],
+        surface: ["Choose a surface: dirt, clay, turf or carpet."],
+      },
     });
   });
 });
 
 describe("layoutActionSchema", () => {
   it("needs the version a change started from, as a whole number", () => {
-    expect(parseForm(layoutActionSchema, form({ intent: "archive", version: "7" }))).toEqual({ ok: true, data: { intent: "archive", version: 7 } });
+    expect(parseForm(layoutActionSchema, form({ intent: "archive", version: "7" }))).toEqual({
+      ok: true,
+      data: { intent: "archive", version: 7 },
+    });
     const bad = parseForm(layoutActionSchema, form({ intent: "publish", version: "7.5" }));
-    expect(bad).toEqual({ ok: false, errors: { version: ["The form's layout version is not valid; reload the page."] } });
+    expect(bad).toEqual({
+      ok: false,
+      errors: { version: ["The form's layout version is not valid; reload the page."] },
+    });
   });
 
   it("deletes only when the confirmation is ticked", () => {
