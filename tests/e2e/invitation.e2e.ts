@@ -34,7 +34,7 @@ describe("invitation by e-mail", () => {
     await newcomer.getByLabel("Password again").fill("a long enough secret");
     await newcomer.getByRole("button", { name: "Create my account and join" }).click();
 
-    await newcomer.getByRole("heading", { level: 1, name: DEMO_CLUB }).waitFor();
+    await newcomer.getByRole("heading", { level: 1, name: DEMO_CLUB, exact: true }).waitFor();
     expect(new URL(newcomer.url()).pathname).toMatch(/^\/clubs\/[^/]+$/);
     expect(await newcomer.getByText("you are a marshal").count()).toBe(1);
     // A marshal sees the published layout only.

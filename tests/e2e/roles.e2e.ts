@@ -35,7 +35,7 @@ async function openClub(page: Page, role: Role) {
   expect(await row.textContent()).toContain(ROLE_LABEL[role]);
   if (role === "director") await screenshot(page, "03-clubs");
   await row.getByRole("link", { name: DEMO_CLUB }).click();
-  await page.getByRole("heading", { level: 1, name: DEMO_CLUB }).waitFor();
+  await page.getByRole("heading", { level: 1, name: DEMO_CLUB, exact: true }).waitFor();
 }
 
 describe("what each demo role sees", () => {
