@@ -8,11 +8,13 @@
  * takeoff speed: the sweet-spot speed, or the highest the approach allows if that is lower.
  * Speeds are along the ground; while airborne the stored speed is the horizontal speed, so that
  * lap time = sum of ds / v over the plan distance holds in the air too. Slopes on the ground are
- * not modelled (plan distances).
+ * not modelled (plan distances). A flight meets the ground of its own jump or the flat beyond it
+ * (a next jump's ground is not seen from the air).
  */
 import type { CarParams } from "./cars";
 import type { CentreLine, ResolvedSection } from "./geometry";
 import type { JumpProfile } from "./jump-profile";
+import { assertFinite } from "./vec";
 import { ballisticJumpWindow, ballisticTouchdown, STANDARD_GRAVITY, type JumpWindow } from "./lap-jumps";
 
 /**
@@ -50,6 +52,11 @@ export interface JumpLap {
   landingOverspeed: number;
   /** True when the approach is too short to reach the landing (approach maximum < window minimum). */
   cannotClear: boolean;
+  /**
+   * Id of the jump whose flight passes over this jump's lip (the car never touches this one;
+   * its speeds are then the speed in the air there), else null.
+   */
+  flownOverBy: string | null;
 }
 
 export interface LapSpeed {
@@ -73,6 +80,10 @@ export interface LapOptions {
   jumpWindow?: (section: ResolvedSection, profile: JumpProfile) => JumpWindow;
 }
 
+function profileLip(p: JumpProfile): number {
+  return p.d[p.lipIndex];
+}
+
 /** Geometric minimum turning radius of the kinematic bicycle model, R = L / tan(lock), m. */
 export function minimumTurnRadius(car: Pick<LapCar, "wheelbase" | "steeringLockRad">): number {
   return car.wheelbase / Math.tan(car.steeringLockRad);
@@ -87,6 +98,15 @@ export function cornerSpeed(car: LapCar, radius: number, g = STANDARD_GRAVITY): 
   return Math.min(car.topSpeed, Math.sqrt(car.mu * g * r));
 }
 
+/** Checks the car's numbers at the module boundary; throws a RangeError naming the field. */
+function checkCar(car: LapCar): void {
+  for (const key of ["topSpeed", "accel0", "brakeDecel", "mu", "wheelbase", "steeringLockRad"] as const) {
+    assertFinite(car[key], `car.${key}`);
+    if (car[key] <= 0) throw new RangeError(`car.${key} must be greater than 0 (got ${car[key]})`);
+  }
+  if (car.steeringLockRad >= Math.PI / 2) throw new RangeError("car.steeringLockRad must be less than pi/2");
+}
+
 /** Speed around the lap for one car; the layout is treated as a closed loop. */
 export function lapSpeed(
   geo: { sections: readonly ResolvedSection[]; line: CentreLine },
@@ -94,6 +114,7 @@ export function lapSpeed(
   options: LapOptions = {},
 ): LapSpeed {
   const g = options.g ?? STANDARD_GRAVITY;
+  checkCar(car);
   const { line, sections } = geo;
   const N = line.count - 1;
   const cap = new Float64Array(N);
@@ -155,7 +176,7 @@ export function lapSpeed(
     else vb = Math.min(fwd[i], Math.sqrt(vb * vb + 2 * car.brakeDecel * ds(i)));
     speed[i] = vb;
     const landed = tdOf[i] >= 0 ? bySection.get(tdOf[i])! : null;
-    if (landed?.record) landed.record.landingOverspeed = Math.max(0, fwd[i] - vb);
+    if (landed?.record) landed.record.landingOverspeed = Math.max(0, landed.record.landingSpeed - vb);
   }
   for (let i = 0; i < N; i++) if (airborne[i]) speed[i] = fwd[i];
   speed[N] = speed[0];
@@ -173,7 +194,40 @@ export function lapSpeed(
   const tightTurns = sections
     .filter((s) => s.curvature !== 0 && 1 / Math.abs(s.curvature) < minRadius - 1e-9)
     .map((s) => ({ sectionId: s.id, radius: 1 / Math.abs(s.curvature), minRadius }));
-  return { speed, airborne, lapTime, jumps: jumpInfo.map((j) => j.record!), tightTurns, minSpeed, maxSpeed };
+  const jumps = jumpInfo.map((j) => j.record ?? flownOver(j));
+  return { speed, airborne, lapTime, jumps, tightTurns, minSpeed, maxSpeed };
+
+  /** A jump whose lip lies under another jump's flight: the car never touches it. */
+  function flownOver(jump: (typeof jumpInfo)[number]): JumpLap {
+    const { section, window, lip } = jump;
+    const under = (o: (typeof jumpInfo)[number]) => {
+      if (o === jump || !o.record) return false;
+      const from = o.record.lipIndex;
+      const to = o.record.touchdownIndex;
+      return from <= to ? lip > from && lip < to : lip > from || lip < to;
+    };
+    const by = jumpInfo.find(under);
+    const v = speed[lip];
+    return {
+      sectionIndex: section.index,
+      sectionId: section.id,
+      lipS: line.s[lip],
+      touchdownS: line.s[lip],
+      lipIndex: lip,
+      touchdownIndex: lip,
+      touchdownD: profileLip(jump.profile),
+      approachMaxSpeed: v,
+      windowMin: window.windowMin,
+      sweetSpotSpeed: window.sweetSpotSpeed,
+      windowMax: window.windowMax,
+      plannedTakeoffSpeed: v,
+      airtime: 0,
+      landingSpeed: v,
+      landingOverspeed: 0,
+      cannotClear: false,
+      flownOverBy: by ? by.section.id : null,
+    };
+  }
 
   /** Flies a jump from its lip; fills the airborne samples; returns the steps taken. */
   function takeOff(jump: (typeof jumpInfo)[number], approach: number): number {
@@ -214,6 +268,7 @@ export function lapSpeed(
       landingSpeed: td.rollOutSpeed,
       landingOverspeed: 0,
       cannotClear: window.windowMin === null || approach < window.windowMin,
+      flownOverBy: null,
     };
     return steps;
   }

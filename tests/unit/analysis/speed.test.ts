@@ -97,6 +97,11 @@ describe("forward and backward passes", () => {
     expect(Math.abs(t - expected) / expected).toBeLessThan(0.005);
   });
 
+  it("refuses a car with a missing or impossible number, naming it", () => {
+    expect(() => lapSpeed(g, { ...buggy, mu: Number.NaN })).toThrow("car.mu");
+    expect(() => lapSpeed(g, { ...buggy, brakeDecel: 0 })).toThrow("car.brakeDecel");
+  });
+
   it("every class gives finite speeds within its top speed", () => {
     for (const car of Object.values(CAR_PRESETS)) {
       const r = lapSpeed(g, car);
@@ -210,6 +215,35 @@ describe("jumps in the lap", () => {
     expect(j.cannotClear).toBe(true);
     expect(j.plannedTakeoffSpeed).toBe(j.approachMaxSpeed);
     expect(j.approachMaxSpeed).toBeLessThan(j.windowMin!);
+  });
+
+  it("a jump under another jump's flight is reported as flown over", () => {
+    const loop = oval(40, 6, [
+      { id: "run", kind: "straight", length: 30 },
+      table,
+      { id: "gap", kind: "straight", length: 1 },
+    ]);
+    loop.sections.splice(5, 0, {
+      id: "small",
+      kind: "jump",
+      preset: "whoops",
+      count: 2,
+      bumpHeight: 0.1,
+      spacing: 1,
+    });
+    // No speed window for the table: the car leaves it as fast as the approach allows and flies on.
+    const lap = lapSpeed(layoutGeometry(loop), buggy, {
+      jumpWindow: (s, p) =>
+        s.id === "table"
+          ? { windowMin: null, sweetSpotSpeed: null, windowMax: null }
+          : ballisticJumpWindow(p),
+    });
+    const [big, small] = lap.jumps;
+    expect(big.plannedTakeoffSpeed).toBe(big.approachMaxSpeed);
+    expect(big.touchdownS).toBeGreaterThan(small.lipS);
+    expect(small.flownOverBy).toBe("table");
+    expect(small.airtime).toBe(0);
+    expect(big.flownOverBy).toBeNull();
   });
 
   it("a landing too fast for the hairpin right after it is reported", () => {
