@@ -22,5 +22,9 @@ export default [
     ]),
     route("layouts/:layoutId", "routes/layout-page.tsx"),
     route("layouts/:layoutId/settings", "routes/layout-settings.tsx"),
+    route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
+    route("layouts/:layoutId/plan", "routes/layout-view.tsx"),
+    route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
+    route("files/:fileId", "routes/file.tsx"),
   ]),
 ] satisfies RouteConfig;

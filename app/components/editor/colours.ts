@@ -1,0 +1,22 @@
+/** Colours of the plan, from Loftline's palette (app/app.css) so canvas and page match. */
+export const PLAN = {
+  paper: "#fbf9f5",
+  gridMinor: "rgba(45, 56, 70, 0.08)",
+  gridMajor: "rgba(45, 56, 70, 0.2)",
+  band: "#ddd1b9",
+  bandEdge: "#8c7b5b",
+  centre: "#5a6776",
+  face: "#b0875a",
+  landing: "#c9a27a",
+  lip: "#9c4518",
+  selected: "#d2692f",
+  handleFill: "#ffffff",
+  handleStroke: "#1f5c4c",
+  marshal: "#d2692f",
+  stand: "#1f5c4c",
+  boundary: "#2d3846",
+  hidden: "#2d3846",
+  conflict: "#a3261b",
+  verdict: { "set-up": "#1f5c4c", straight: "#2d3846", "cannot-clear": "#a3261b" },
+  text: "#141b24",
+} as const;

@@ -1,0 +1,119 @@
+/**
+ * The read-only plan for marshals and drivers (and directors who only want to look): the same
+ * canvas without handles or editing panels, with the live analysis, its legend and the jump list.
+ */
+import { lazy, Suspense, useMemo, useState } from "react";
+import { Link } from "react-router";
+import { closureError, resolveSections, startPose } from "~/analysis/geometry";
+import type { Selection } from "~/lib/editor/editor-state";
+import { DEFAULT_SNAP } from "~/lib/editor/snap";
+import type { LengthUnit } from "~/lib/editor/units";
+import type { LayoutDocument } from "~/lib/layout-document";
+import { AnalysisPanel } from "./analysis-panel";
+import { CanvasPlaceholder, ClientOnly } from "./client-only";
+import { ClosureBar } from "./closure-bar";
+import { Panel } from "./panel";
+import { describeSection } from "./sections-list";
+import { useAnalysis, type Skill } from "./use-analysis";
+
+const PlanCanvas = lazy(() => import("./plan-canvas"));
+const noop = () => {};
+
+export interface PlanViewerProps {
+  club: { id: string; name: string };
+  layout: { id: string; name: string; status: string };
+  document: LayoutDocument;
+  canEdit: boolean;
+}
+
+export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerProps) {
+  const sections = useMemo(() => resolveSections(doc), [doc]);
+  const closure = useMemo(() => closureError(sections, startPose(doc)), [sections, doc]);
+  const [selection, setSelection] = useState<Selection>(null);
+  const [units, setUnits] = useState<LengthUnit>("m");
+  const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
+  const [skill, setSkill] = useState<Skill>("club");
+  const [fitRequest, setFitRequest] = useState(0);
+  const analysis = useAnalysis(doc, classId, skill);
+  const selected = selection?.kind === "section" ? selection.index : null;
+  return (
+    <div className="space-y-3">
+      <header className="flex flex-wrap items-end gap-x-4 gap-y-2">
+        <div className="min-w-0">
+          <p className="text-xs text-ink-500">
+            <Link to={`/clubs/${club.id}`} className="underline">
+              {club.name}
+            </Link>{" "}
+            · <Link to={`/layouts/${layout.id}`} className="underline">Layout page</Link>
+          </p>
+          <h1 className="truncate text-xl font-semibold">Plan of {doc.name}</h1>
+        </div>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <label className="inline-flex items-center gap-1.5">
+            Plan in
+            <select className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm" value={units} onChange={(e) => setUnits(e.target.value as LengthUnit)}>
+              <option value="m">metres</option>
+              <option value="ft">feet</option>
+            </select>
+          </label>
+          <button type="button" className="rounded-md border border-ink-300 bg-white px-2.5 py-1.5 font-medium hover:bg-sand-100" onClick={() => setFitRequest((n) => n + 1)}>
+            Fit
+          </button>
+          {canEdit ? (
+            <Link to={`/layouts/${layout.id}/edit`} className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800">
+              Edit the layout
+            </Link>
+          ) : null}
+        </div>
+      </header>
+      <ClosureBar closure={closure} units={units} editable={false} message={null} />
+      <div className="flex flex-col gap-3 lg:flex-row">
+        <div className="h-[62vh] min-h-[360px] flex-1 overflow-hidden rounded-md border border-ink-300" role="img" aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}>
+          <ClientOnly fallback={<CanvasPlaceholder />}>
+            {() => (
+              <Suspense fallback={<CanvasPlaceholder />}>
+                <PlanCanvas
+                  doc={doc}
+                  sections={sections}
+                  selection={selection}
+                  editable={false}
+                  mode="select"
+                  snap={DEFAULT_SNAP}
+                  units={units}
+                  overlay={analysis.overlay}
+                  overlayStale={false}
+                  photoUrl={doc.background ? `/files/${doc.background.fileId}` : null}
+                  fitRequest={fitRequest}
+                  calibrationPoints={[]}
+                  onSelect={setSelection}
+                  onChange={noop}
+                  onGestureEnd={noop}
+                  onPlanClick={noop}
+                />
+              </Suspense>
+            )}
+          </ClientOnly>
+        </div>
+        <aside className="space-y-2 lg:w-[22rem]" aria-label="About this plan">
+          <Panel title="Jumps and verdicts" open>
+            <AnalysisPanel overlay={analysis.overlay} status={analysis.status} stale={false} sections={doc.sections} classIds={doc.carClasses} classId={classId} skill={skill} selected={selected} onClass={setClassId} onSkill={setSkill} onSelect={(index) => setSelection({ kind: "section", index })} />
+          </Panel>
+          <Panel title={`Sections (${doc.sections.length})`} open={selected !== null}>
+            <ol className="max-h-64 space-y-0.5 overflow-y-auto text-sm">
+              {doc.sections.map((s, i) => (
+                <li key={s.id} className={`rounded px-2 py-0.5 tabular-nums ${selected === i ? "bg-clay-100 font-semibold text-clay-700" : ""}`}>
+                  {i + 1}. {describeSection(s, sections[i])}
+                </li>
+              ))}
+            </ol>
+          </Panel>
+          {doc.marshalPoints.length ? (
+            <Panel title={`Marshal points (${doc.marshalPoints.length})`}>
+              <p className="text-sm text-ink-700">Numbered on the plan. Stand out of the overshoot zone beyond landings and the outside of fast turns, stay low and face the traffic; closed shoes, eye protection and hi-vis.</p>
+            </Panel>
+          ) : null}
+        </aside>
+      </div>
+    </div>
+  );
+}
