@@ -1,0 +1,201 @@
+/**
+ * Result types of the whole-layout analysis (`analyseLayout`, layout-analysis.ts) and of the
+ * per-jump analysis (jump-analysis.ts).
+ *
+ * The result is a report for people (API responses, pages, the command line): plain
+ * JSON-serialisable data, no typed arrays. Units: SI (m, s, m/s, kg) everywhere; angles are in
+ * degrees and every angle field ends in `Deg` (docs/decisions/0400). Every number is a model
+ * estimate, not a safety certification.
+ */
+import type { JumpPreset } from "~/lib/layout-document";
+import type { PlanInfeasibleReason } from "./air-plan";
+import type { PitchPulse } from "./air-plan-pulse";
+import type { SwitchWindow } from "./air-plan-robustness";
+import type { RuleReport } from "./rules";
+
+/** Driver skill levels the verdicts are given for. */
+export const SKILL_LEVELS = ["novice", "club", "expert"] as const;
+export type SkillLevel = (typeof SKILL_LEVELS)[number];
+
+/**
+ * Why a jump is best taken straight:
+ * - "no-turn": no turn starts close enough to the landing;
+ * - "turn-too-gentle": the turn after the landing is too gentle to gain anything;
+ * - "not-enough-airtime": the car is not in the air long enough to turn it;
+ * - "too-risky": at this skill level a set-up costs more than it saves;
+ * - "cannot-clear": the approach is too short to reach the landing;
+ * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it).
+ */
+export type JumpReason =
+  | "no-turn"
+  | "turn-too-gentle"
+  | "not-enough-airtime"
+  | "too-risky"
+  | "cannot-clear"
+  | "flown-over";
+
+/** The verdict for one jump, one car class and one skill level. */
+export interface SkillVerdict {
+  skill: SkillLevel;
+  verdict: "set-up" | "straight";
+  /** Null for "set-up". */
+  reason: JumpReason | null;
+  /** Short reason in plain words, e.g. "no turn at the landing"; for a set-up, what to do. */
+  reasonText: string;
+  /** One plain sentence for drivers. */
+  text: string;
+  /** Share of clean landings when trying the set-up at this skill's timing error, 0..1 (0 without a plan). */
+  successRate: number;
+  /** Track length saved by a clean set-up, m (0 without a plan). */
+  trackLengthSaved: number;
+  /** Time saved by a clean set-up, s. */
+  timeSaved: number;
+  /** successRate x timeSaved - (1 - successRate) x time lost to a failed landing, s per pass. */
+  expectedGain: number;
+}
+
+/** The turn a jump lands into: the next turn after touchdown, within the look-ahead distance. */
+export interface LandingTurn {
+  /** Id and index of the turn's first section. */
+  sectionId: string;
+  sectionIndex: number;
+  /** Along the lap from touchdown to the turn's start, m (0 when the car touches down in the turn). */
+  distance: number;
+  /** Look-ahead distance used: landing speed x look-ahead time, m. */
+  lookahead: number;
+  side: "left" | "right";
+  /** Angle of the corner, deg (consecutive turn sections to the same side count as one corner). */
+  angleDeg: number;
+  /** Centre-line radius of the turn's first section, m. */
+  radius: number;
+  /** Lap-model speed at the turn's entry, m/s. */
+  entrySpeed: number;
+}
+
+/** The mid-air set-up plan for a jump that lands into a turn (shared by the skill levels). */
+export interface JumpPlan {
+  feasible: boolean;
+  reason: PlanInfeasibleReason | null;
+  /** Steering targets [t s, angle deg], positive = wheels left. */
+  steering: [number, number][];
+  /** Driven-wheel angular acceleration [t s, rad/s^2] (the pitch pulse). */
+  rearWheelAccel: [number, number][];
+  /** Landing attitude the plan gives, deg (yaw positive = nose left, pitch positive = nose up, roll positive = right side down). */
+  yawDeg: number;
+  pitchDeg: number;
+  rollDeg: number;
+  targetYawDeg: number;
+  /** Pitch change the flight should supply (landing slope minus face angle), deg. */
+  pitchChangeDeg: number;
+  pitchPulse: PitchPulse;
+  switches: SwitchWindow[];
+  /** Tightest switch's whole timing window, ms. */
+  timingWindowMs: number;
+  successRate: Record<SkillLevel, number>;
+  rollToleranceDeg: number;
+}
+
+/** Touchdown of the flight at the planned takeoff speed. */
+export interface JumpLanding {
+  /** Along the jump section, m (may pass the section's end), and along the lap, m. */
+  d: number;
+  s: number;
+  /** Plan position, m. */
+  x: number;
+  y: number;
+  /** Height of the ground there, m. */
+  z: number;
+  /** Speed at touchdown, m/s. */
+  speed: number;
+  /** Speed along the ground just after touchdown (the lap model's), m/s. */
+  rollOutSpeed: number;
+  flightPathDeg: number;
+  surfaceSlopeDeg: number;
+  /** Speed normal to the ground, m/s. */
+  normalSpeed: number;
+  /** Where it lands relative to the landing ramp. */
+  landedOn: "short" | "ramp" | "overshoot";
+}
+
+/** One jump analysed for one car class. */
+export interface JumpAnalysis {
+  sectionId: string;
+  sectionIndex: number;
+  name: string | null;
+  preset: JumpPreset;
+  /** The lip: along the section (d) and the lap (s), plan position and height, m. */
+  lip: { d: number; s: number; x: number; y: number; z: number };
+  /** Face angle at the lip, deg. */
+  faceAngleDeg: number;
+  /** Planned takeoff speed: the sweet-spot speed, or the most the approach allows (rounded to 0.01 m/s), m/s. */
+  takeoffSpeed: number;
+  /** Highest takeoff speed the approach allows, m/s. */
+  approachMaxSpeed: number;
+  /** Speed window with air drag: lowest speed that reaches the landing ramp, highest that stays on it, m/s. */
+  window: { min: number; max: number; maxIsSearchLimit: boolean } | null;
+  /** Takeoff speed that lands on the sweet spot (a third of the way down the ramp), with drag, m/s. */
+  sweetSpotSpeed: number | null;
+  /** True when the approach is too short to reach the landing. */
+  cannotClear: boolean;
+  /** Id of the jump whose flight passes over this one's lip, else null. */
+  flownOverBy: string | null;
+  /** Time in the air at the planned speed, s (0 when flown over). */
+  airtime: number;
+  /** Highest point of the flight: along the section and height, m; time s. */
+  apex: { d: number; z: number; t: number } | null;
+  landing: JumpLanding | null;
+  /** Equivalent fall height of the landing, m (Levy et al. 2015 measure). */
+  equivalentFallHeight: number;
+  /** The turn it lands into, or null. */
+  turn: LandingTurn | null;
+  /** Along the lap from touchdown to the next turn's start, m, whether or not it lands into it; null on a lap without turns. */
+  nextTurnDistance: number | null;
+  /** The set-up plan (only for a jump that lands into a turn sharp enough, with airtime to spare). */
+  plan: JumpPlan | null;
+  /** Verdict per skill level. */
+  verdicts: Record<SkillLevel, SkillVerdict>;
+  /** Verdict at the analysis's chosen skill level. */
+  verdict: SkillVerdict;
+}
+
+/** The lap for one car class. */
+export interface ClassAnalysis {
+  classId: string;
+  label: string;
+  /** Lap time, s. */
+  lapTime: number;
+  speed: { min: number; max: number; mean: number };
+  /** Speed at each point of `LayoutAnalysis.line`, m/s. */
+  lineSpeed: number[];
+  /** Turns tighter than the car can steer: radius and the car's minimum radius, m. */
+  tightTurns: { sectionId: string; radius: number; minRadius: number }[];
+  jumps: JumpAnalysis[];
+  /** Jumps whose approach is too short to clear them. */
+  cannotClear: string[];
+}
+
+export interface LayoutAnalysis {
+  name: string;
+  /** Lap length along the centre line in plan, m. */
+  lapLength: number;
+  /** How far the last section misses the start: gap m, heading deg. */
+  closure: { gap: number; headingDeg: number };
+  trackWidth: number;
+  /** Chosen skill level for `JumpAnalysis.verdict`. */
+  skill: SkillLevel;
+  /** The centre line downsampled to about every 0.5 m (flat arrays of equal length). */
+  line: { x: number[]; y: number[]; s: number[]; sectionIndex: number[] };
+  /** Lanes closer than the track width plus the margin: this lane's closest point a, the other lane's b, m. */
+  laneConflicts: { fromS: number; toS: number; a: [number, number]; b: [number, number]; distance: number }[];
+  /** Stretches with an edge outside the site boundary (null without a boundary). */
+  outsideBoundary: { fromS: number; toS: number; worstDistance: number }[] | null;
+  /** Farthest track edge point from the driver stand (null without a stand). */
+  farthestFromStand: { distance: number; s: number; x: number; y: number } | null;
+  /** Stretches hidden from the driver stand (null without a stand). */
+  hiddenFromStand: { fromS: number; toS: number; length: number; blockedBy: string }[] | null;
+  startStraight: { length: number; sectionIds: string[] };
+  rules: RuleReport;
+  classes: ClassAnalysis[];
+  /** Plain-words caveat shown with every analysis. */
+  note: string;
+}
