@@ -118,12 +118,25 @@ function normals(seed: number, count: number): Float64Array {
  */
 export function successRates(model: RollModel, tolerance: number, sigmas: SkillSigmas, seed: number, samples = 4000): SkillSigmas {
   const n = model.change.length;
+  // Each switch's curve resampled every millisecond, so a sample costs one lookup.
+  const first = model.shifts[0];
+  const span = model.shifts[model.shifts.length - 1] - first;
+  const cells = Math.round(span * 1000);
+  const table = new Float64Array(n * (cells + 1));
+  for (let i = 0; i < n; i++) for (let c = 0; c <= cells; c++) table[i * (cells + 1) + c] = changeAt(model, i, first + (c * span) / cells);
   const rate = (sigma: number, levelSeed: number) => {
     const z = normals(levelSeed, samples * n);
+    const scale = (sigma * cells) / span;
+    const offset = -first * (cells / span);
     let ok = 0;
     for (let s = 0, j = 0; s < samples; s++) {
       let roll = model.roll0;
-      for (let i = 0; i < n; i++, j++) roll += changeAt(model, i, sigma * z[j]);
+      for (let i = 0; i < n; i++, j++) {
+        const x = Math.min(cells, Math.max(0, z[j] * scale + offset));
+        const c = Math.min(cells - 1, Math.floor(x));
+        const base = i * (cells + 1) + c;
+        roll += table[base] + (x - c) * (table[base + 1] - table[base]);
+      }
       if (Math.abs(roll) <= tolerance) ok++;
     }
     return ok / samples;

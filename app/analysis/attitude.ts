@@ -86,15 +86,19 @@ const EX = new Float64Array(18);
 const EUL = new Float64Array(3);
 
 // Car constants for the input terms: kf, kr, cos(caster), sin(caster), front/rear spin ratio
-// (4wd; 0 for 2wd), front spin at takeoff, body torque (3). Trig of a held steering angle is cached per piece.
-const C = new Float64Array(9);
+// (4wd; 0 for 2wd), front spin at takeoff, body torque (3), Ixx, Iyy, Izz. Trig of a held steering angle is cached per piece.
+const C = new Float64Array(12);
+// Doubles handed to the step functions go through this array, not as arguments, so that calls
+// that are not inlined box nothing: [step length h, input time tt].
+const ARG = new Float64Array(2);
 let heldServo: PiecewiseLinear | null = null;
 let heldPiece = -1;
 let heldCos = 1;
 let heldSin = 0;
 
-/** Writes h and dh/dt at time tt (inside pieces js, jr) to EX[o..o+5]. */
-function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, jr: number, tt: number, o: number): void {
+/** Writes h and dh/dt at time ARG[1] (inside pieces js, jr) to EX[o..o+5]. */
+function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, jr: number, o: number): void {
+  const tt = ARG[1];
   const kf = C[0], kr = C[1], cc = C[2], sc = C[3], frontRatio = C[4];
   const sdot = servo.s[js];
   const delta = servo.v[js] + sdot * (tt - servo.t[js]);
@@ -127,10 +131,12 @@ function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, j
 }
 
 /**
- * One RK4 step of length h on the state Y, with input terms EX at offsets 0 (start), oMid and
+ * One RK4 step of length ARG[0] on the state Y, with input terms EX at offsets 0 (start), oMid and
  * oEnd. Scalar code: no arrays are created.
  */
-function rk4Step(h: number, oMid: number, oEnd: number, ixx: number, iyy: number, izz: number): void {
+function rk4Step(oMid: number, oEnd: number): void {
+  const h = ARG[0];
+  const ixx = C[9], iyy = C[10], izz = C[11];
   const q0 = Y[0], q1 = Y[1], q2 = Y[2], q3 = Y[3], wx = Y[4], wy = Y[5], wz = Y[6];
   const hh = 0.5 * h;
   // Stage 1
@@ -259,7 +265,11 @@ export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options
   C[6] = torque[0];
   C[7] = torque[1];
   C[8] = torque[2];
-  fillInputs(servo, rear, 0, 0, 0, 0);
+  C[9] = ixx;
+  C[10] = iyy;
+  C[11] = izz;
+  ARG[1] = 0;
+  fillInputs(servo, rear, 0, 0, 0);
   let constJs = -1;
   let constJr = -1;
   let lastEnd = 0;
@@ -268,8 +278,9 @@ export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options
   if (series) sample = record(series, sample, 0, Y, servo, rear, js, jr);
 
   while (t < T - 1e-12) {
-    let tEnd = t + dt;
-    if (tEnd > T) tEnd = T;
+    // Math.min keeps tEnd an unboxed double (a plain "if" would merge it with the tagged T and
+    // allocate a heap number every step).
+    let tEnd = Math.min(t + dt, T);
     while (kc < kinks.length && kinks[kc] <= t + 1e-12) kc++;
     if (kc < kinks.length && kinks[kc] < tEnd + 1e-9) tEnd = kinks[kc];
     const h = tEnd - t;
@@ -284,18 +295,23 @@ export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options
       oMid = 0;
       oEnd = 0;
       if (constJs !== js || constJr !== jr) {
-        fillInputs(servo, rear, js, jr, t, 0);
+        ARG[1] = t;
+        fillInputs(servo, rear, js, jr, 0);
         constJs = js;
         constJr = jr;
       }
     } else {
       constJs = -1;
-      fillInputs(servo, rear, js, jr, t, 0);
-      fillInputs(servo, rear, js, jr, tm, 6);
-      fillInputs(servo, rear, js, jr, tEnd, 12);
+      ARG[1] = t;
+      fillInputs(servo, rear, js, jr, 0);
+      ARG[1] = tm;
+      fillInputs(servo, rear, js, jr, 6);
+      ARG[1] = tEnd;
+      fillInputs(servo, rear, js, jr, 12);
     }
 
-    rk4Step(h, oMid, oEnd, ixx, iyy, izz);
+    ARG[0] = h;
+    rk4Step(oMid, oEnd);
     lastEnd = oEnd;
     t = tEnd;
     step++;

@@ -24,7 +24,7 @@ export interface SpeedWindow {
   maxIsSearchLimit: boolean;
 }
 
-const SCAN_STEP = 0.25;
+const SCAN_STEP = 0.5;
 const TOLERANCE = 1e-9;
 
 function landingX(input: JumpSpeedInput, speed: number): number {
@@ -32,28 +32,48 @@ function landingX(input: JumpSpeedInput, speed: number): number {
 }
 
 /**
- * Lowest speed in [lo, hi] at which `landingX(speed) >= target` holds, scanning upward in
- * 0.25 m/s steps and then bisecting to 1e-9 m/s. Null when no scanned speed qualifies.
+ * Lowest speed in [lo, hi] at which the touchdown reaches `target` (x >= target, or x > target
+ * when `strict`), scanning upward in 0.5 m/s steps and then closing in with the Illinois method
+ * (regula falsi that halves a stale end) to 1e-9 m/s. Null when no scanned speed qualifies.
  */
 function firstSpeedReaching(input: JumpSpeedInput, target: number, lo: number, hi: number, strict: boolean): number | null {
-  const reaches = (v: number) => (strict ? landingX(input, v) > target : landingX(input, v) >= target);
-  if (reaches(lo)) return lo;
+  const gap = (v: number) => landingX(input, v) - target;
+  const reaches = (g: number) => (strict ? g > 0 : g >= 0);
+  let g0 = gap(lo);
+  if (reaches(g0)) return lo;
   let prev = lo;
   for (let v = lo + SCAN_STEP; prev < hi; v += SCAN_STEP) {
     const cur = Math.min(v, hi);
-    if (reaches(cur)) {
-      let a = prev;
-      let b = cur;
-      while (b - a > TOLERANCE) {
-        const m = 0.5 * (a + b);
-        if (reaches(m)) b = m;
-        else a = m;
-      }
-      return b;
-    }
+    const g1 = gap(cur);
+    if (reaches(g1)) return closeIn(gap, reaches, prev, g0, cur, g1);
     prev = cur;
+    g0 = g1;
   }
   return null;
+}
+
+/** Illinois iterations on a bracket [a, b] with `reaches` false at a and true at b; returns b. */
+function closeIn(gap: (v: number) => number, reaches: (g: number) => boolean, a: number, ga: number, b: number, gb: number): number {
+  let side = 0;
+  for (let k = 0; k < 200 && b - a > TOLERANCE; k++) {
+    let m = b - (gb * (b - a)) / (gb - ga);
+    // Keep the trial strictly inside and never too close to one end (falls back to bisection).
+    const w = b - a;
+    if (!(m > a + 0.01 * w && m < b - 0.01 * w)) m = 0.5 * (a + b);
+    const gm = gap(m);
+    if (reaches(gm)) {
+      b = m;
+      gb = gm;
+      if (side === 1) ga /= 2;
+      side = 1;
+    } else {
+      a = m;
+      ga = gm;
+      if (side === -1) gb /= 2;
+      side = -1;
+    }
+  }
+  return b;
 }
 
 function checkRamp(input: JumpSpeedInput): void {

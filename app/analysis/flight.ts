@@ -242,7 +242,7 @@ function flyWithDrag(input: FlightInput, g: number): RawFlight {
   throw new RangeError("flight did not land within 60 s");
 }
 
-/** Smallest tau in (0, h] where f(state after tau) <= 0, to 1e-12 s, given f(start) > 0. */
+/** Smallest tau in (0, h] where f(state after tau) <= 0, to about 1e-12 s, given f(start) > 0. */
 function bisectStep(
   start: Float64Array,
   tmp: Float64Array,
@@ -253,7 +253,7 @@ function bisectStep(
 ): number {
   let lo = 0;
   let hi = h;
-  for (let i = 0; i < 45; i++) {
+  for (let i = 0; i < 32; i++) {
     const mid = 0.5 * (lo + hi);
     rk4Drag(start, tmp, mid, g, k);
     if (f(tmp) > 0) lo = mid;
