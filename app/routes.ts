@@ -10,6 +10,11 @@ export default [
   route("invitations/:token", "routes/invitation.tsx"),
   route("outbox", "routes/outbox.tsx"),
 
+  // JSON API (401/403/404 as JSON) and file downloads: resource routes that check the session themselves.
+  route("api/health", "routes/api-health.ts"),
+  route("api/layouts/:layoutId", "routes/api-layout.ts"),
+  route("layouts/:layoutId/export", "routes/layout-export.ts"),
+
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
   layout("routes/signed-in-layout.tsx", [
     route("clubs", "routes/clubs.tsx"),
@@ -18,6 +23,8 @@ export default [
         index("routes/club-home.tsx"),
         route("members", "routes/club-members.tsx"),
         route("layouts/new", "routes/layout-new.tsx"),
+        route("layouts/import", "routes/layout-import.tsx"),
+        route("settings", "routes/club-settings.tsx"),
       ]),
     ]),
     route("layouts/:layoutId", "routes/layout-page.tsx"),

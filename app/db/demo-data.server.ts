@@ -5,10 +5,12 @@
  */
 import bcrypt from "bcryptjs";
 import { and, eq } from "drizzle-orm";
+import { DEMO_LAYOUTS as DEMO_LAYOUT_DOCUMENTS } from "~/analysis/demo-layouts";
 import { hashPassword, normaliseEmail } from "~/auth/users.server";
+import type { LayoutDocument } from "~/lib/layout-document";
 import type { Database } from "./client.server";
 import { DEMO_ACCOUNTS, DEMO_CLUB_NAME } from "./demo-accounts";
-import { clubs, layouts, memberships, users, type LayoutStatus, type Role } from "./schema";
+import { clubs, layouts, layoutVersions, memberships, users, type LayoutStatus, type Role } from "./schema";
 
 export { DEMO_CLUB_NAME };
 
@@ -26,13 +28,29 @@ export const DEMO_EXTRA_MEMBERS: ReadonlyArray<{ email: string; name: string; ro
   { email: "sofia@kestrel.example", name: "Sofia Brandt", role: "driver" },
 ];
 
-export type DemoLayout = { name: string; status: LayoutStatus; surface: string; trackWidth: number };
+export type DemoLayout = {
+  name: string;
+  status: LayoutStatus;
+  surface: string;
+  trackWidth: number;
+  /** The full drawing, stored as the layout's first version. */
+  document: LayoutDocument;
+};
 
-/** The club's layouts (metadata; full layout documents are attached by a later step). */
-export const DEMO_LAYOUTS: ReadonlyArray<DemoLayout> = [
-  { name: "Summer layout", status: "published", surface: "clay", trackWidth: 3.5 },
-  { name: "Wet-weather layout", status: "draft", surface: "dirt", trackWidth: 4 },
-];
+/** Which demo layout is published for race day and which is still a draft. */
+const DEMO_LAYOUT_STATUS: Record<string, LayoutStatus> = {
+  "Summer layout": "published",
+  "Wet-weather layout": "draft",
+};
+
+/** The club's layouts, metadata taken from their documents (app/analysis/demo-layouts.ts). */
+export const DEMO_LAYOUTS: ReadonlyArray<DemoLayout> = DEMO_LAYOUT_DOCUMENTS.map((document) => ({
+  name: document.name,
+  status: DEMO_LAYOUT_STATUS[document.name] ?? "draft",
+  surface: document.surface,
+  trackWidth: document.trackWidth,
+  document,
+}));
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 type Person = { email: string; name: string; role: Role; password: string; restorePassword: boolean };
@@ -114,19 +132,42 @@ export async function seedDemoData(db: Database): Promise<DemoSummary> {
 }
 
 /**
- * Creates the club's demo layouts that are missing (matched by name); returns how many it created.
- * The one place to extend when layouts carry full documents.
+ * Creates the club's demo layouts that are missing (matched by name), each with its full document
+ * as the first stored version; returns how many layouts it created. A demo layout found without
+ * any stored document (from before documents were stored) gets its document, and the surface and
+ * width that go with it, as the version its counter has reached. Nothing is duplicated.
  */
 export async function seedDemoLayouts(tx: Tx, clubId: string, createdBy: string): Promise<number> {
   let count = 0;
-  for (const demo of DEMO_LAYOUTS) {
-    const [found] = await tx
-      .select({ id: layouts.id })
+  for (const { document, ...demo } of DEMO_LAYOUTS) {
+    let [found] = await tx
+      .select({ id: layouts.id, version: layouts.version })
       .from(layouts)
       .where(and(eq(layouts.clubId, clubId), eq(layouts.name, demo.name)));
-    if (found) continue;
-    await tx.insert(layouts).values({ clubId, createdBy, ...demo });
-    count += 1;
+    if (!found) {
+      [found] = await tx
+        .insert(layouts)
+        .values({ clubId, createdBy, ...demo, version: 1 })
+        .returning({ id: layouts.id, version: layouts.version });
+      count += 1;
+    }
+    const [stored] = await tx
+      .select({ id: layoutVersions.id })
+      .from(layoutVersions)
+      .where(eq(layoutVersions.layoutId, found.id))
+      .limit(1);
+    if (stored) continue;
+    await tx
+      .update(layouts)
+      .set({ surface: document.surface, trackWidth: document.trackWidth })
+      .where(eq(layouts.id, found.id));
+    await tx.insert(layoutVersions).values({
+      layoutId: found.id,
+      number: found.version,
+      document: JSON.stringify(document),
+      note: "Demo layout",
+      createdBy,
+    });
   }
   return count;
 }

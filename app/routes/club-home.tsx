@@ -1,6 +1,7 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/club-home";
 import { requireClubRole } from "~/auth/permissions.server";
+import { ImportForm } from "~/components/analysis/import-form";
 import { StatusBadge, surfaceLabel } from "~/components/layout-meta";
 import { buttonClass } from "~/components/ui/button";
 import { listClubLayouts } from "~/layouts/layouts.server";
@@ -22,9 +23,14 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
           {isDirector ? "Layouts" : "Published layouts"}
         </h2>
         {isDirector ? (
-          <Link to={`/clubs/${club.id}/layouts/new`} className={buttonClass()}>
-            New layout
-          </Link>
+          <div className="flex flex-wrap items-center gap-3">
+            <Link to={`/clubs/${club.id}/settings`} className="text-sm text-pine-700 hover:underline">
+              Track guidance
+            </Link>
+            <Link to={`/clubs/${club.id}/layouts/new`} className={buttonClass()}>
+              New layout
+            </Link>
+          </div>
         ) : null}
       </div>
       {layouts.length === 0 ? (
@@ -50,6 +56,15 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
           ))}
         </ul>
       )}
+      {isDirector ? (
+        <details className="mt-6 max-w-2xl rounded-lg border border-sand-200 bg-white p-4">
+          <summary className="cursor-pointer font-medium">Import a layout file</summary>
+          <p className="mt-2 text-sm text-ink-700">
+            A .json file exported from a Loftline layout page becomes a new draft here.
+          </p>
+          <ImportForm clubId={club.id} />
+        </details>
+      ) : null}
     </section>
   );
 }

@@ -1,0 +1,143 @@
+/**
+ * Memo of whole layout analyses, keyed by a SHA-256 of their canonical inputs (the layout
+ * document, the car classes, the skill level, the guidance set and the club's overrides). A repeat
+ * of the same inputs returns the stored result, and the JSON text already made from it, without
+ * running the engine again. Bounded: the least recently used entries go first.
+ *
+ * Stored layouts also get an alias (layout id, layout version, guidance, classes, skill) -> key, so
+ * a warm request for a saved layout skips reading and checking its document as well.
+ */
+import { createHash } from "node:crypto";
+import type { GuidanceOverrides, GuidanceSetId } from "~/analysis/rules";
+import type { SkillLevel } from "~/analysis/layout-analysis-types";
+import type { LayoutDocument } from "~/lib/layout-document";
+
+/** Everything an analysis depends on. */
+export interface AnalysisInputs {
+  document: LayoutDocument;
+  classIds: readonly string[];
+  skill: SkillLevel;
+  guidance: GuidanceSetId;
+  overrides: GuidanceOverrides;
+}
+
+/** JSON with object keys sorted at every level, so equal inputs give equal text. */
+export function canonicalJson(value: unknown): string {
+  if (value === null || typeof value !== "object") return JSON.stringify(value) ?? "null";
+  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(",")}]`;
+  const entries = Object.entries(value as Record<string, unknown>)
+    .filter(([, v]) => v !== undefined)
+    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(",")}}`;
+}
+
+/** SHA-256 (hex) of the canonical inputs. */
+export function analysisKey(inputs: AnalysisInputs): string {
+  const text = canonicalJson({
+    v: 1,
+    document: inputs.document,
+    classIds: inputs.classIds,
+    skill: inputs.skill,
+    guidance: inputs.guidance,
+    overrides: inputs.overrides,
+  });
+  return createHash("sha256").update(text).digest("hex");
+}
+
+/** A Map that forgets its least recently used entries beyond `max`. */
+export class LruMap<K, V> {
+  private readonly map = new Map<K, V>();
+  constructor(readonly max: number) {}
+
+  get(key: K): V | undefined {
+    const value = this.map.get(key);
+    if (value === undefined) return undefined;
+    this.map.delete(key);
+    this.map.set(key, value);
+    return value;
+  }
+
+  set(key: K, value: V): void {
+    this.map.delete(key);
+    this.map.set(key, value);
+    while (this.map.size > this.max) this.map.delete(this.map.keys().next().value as K);
+  }
+
+  get size(): number {
+    return this.map.size;
+  }
+
+  clear(): void {
+    this.map.clear();
+  }
+}
+
+/** One remembered analysis and the JSON bodies already made from it (by what they hold). */
+export interface CacheEntry<T> {
+  key: string;
+  value: T;
+  bodies: Map<string, string>;
+}
+
+/** Most analyses kept; a full analysis of a large layout is some tens of kilobytes. */
+export const ANALYSIS_CACHE_SIZE = 200;
+
+const entries = new LruMap<string, CacheEntry<unknown>>(ANALYSIS_CACHE_SIZE);
+const aliases = new LruMap<string, string>(ANALYSIS_CACHE_SIZE * 4);
+const stats = { hits: 0, misses: 0 };
+
+/**
+ * The remembered result for these inputs, or `compute()`'s result, remembered.
+ * @returns the entry and whether it was a hit.
+ */
+export function memoAnalysis<T>(
+  inputs: AnalysisInputs,
+  compute: () => T,
+): { entry: CacheEntry<T>; hit: boolean } {
+  const key = analysisKey(inputs);
+  const found = entries.get(key) as CacheEntry<T> | undefined;
+  if (found) {
+    stats.hits += 1;
+    return { entry: found, hit: true };
+  }
+  stats.misses += 1;
+  const entry: CacheEntry<T> = { key, value: compute(), bodies: new Map() };
+  entries.set(key, entry as CacheEntry<unknown>);
+  return { entry, hit: false };
+}
+
+/** The entry an alias points at, if both are still remembered (counts as a hit). */
+export function entryByAlias<T>(alias: string): CacheEntry<T> | undefined {
+  const key = aliases.get(alias);
+  const entry = key ? (entries.get(key) as CacheEntry<T> | undefined) : undefined;
+  if (entry) stats.hits += 1;
+  return entry;
+}
+
+/** Remembers that `alias` (a stored layout at one version with its settings) means entry `key`. */
+export function setAlias(alias: string, key: string): void {
+  aliases.set(alias, key);
+}
+
+/** A JSON body made once per entry and purpose. */
+export function cachedBody<T>(entry: CacheEntry<T>, purpose: string, make: () => unknown): string {
+  let body = entry.bodies.get(purpose);
+  if (body === undefined) {
+    body = JSON.stringify(make());
+    entry.bodies.set(purpose, body);
+  }
+  return body;
+}
+
+/** Hit and miss counts since start (or the last reset), and the entries held. */
+export function analysisCacheStats() {
+  return { ...stats, size: entries.size };
+}
+
+/** Forgets everything (tests and benchmarks measuring a cold start). */
+export function clearAnalysisCache(): void {
+  entries.clear();
+  aliases.clear();
+  stats.hits = 0;
+  stats.misses = 0;
+}

@@ -1,0 +1,121 @@
+/**
+ * Reading a layout file a director imports: an uploaded .json file (form field "file") or JSON
+ * pasted into the form (field "json"), at most 1 MB. The file is checked against the layout
+ * document schema; every problem is reported with the field it concerns, and nothing is created
+ * unless the whole file is valid.
+ */
+import {
+  MaxFileSizeExceededError,
+  MaxTotalSizeExceededError,
+  parseFormData,
+  type FileUpload,
+} from "@remix-run/form-data-parser";
+import { and, eq } from "drizzle-orm";
+import { getDb } from "~/db/client.server";
+import { files } from "~/db/schema";
+import { ONE_MEGABYTE, readLimitedText } from "~/lib/json-body.server";
+import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/lib/layout-document";
+
+/** Largest layout file accepted, bytes. */
+export const MAX_LAYOUT_FILE_BYTES = ONE_MEGABYTE;
+
+export type ImportField = "file" | "json";
+
+export type ImportReading =
+  | { ok: true; document: LayoutDocument; source: ImportField; notes: string[] }
+  | { ok: false; status: 400 | 413; field: ImportField; message: string; issues: LayoutIssue[] };
+
+const TOO_LARGE = `The file is too large: a layout file is at most ${MAX_LAYOUT_FILE_BYTES / ONE_MEGABYTE} MB.`;
+
+function refuse(
+  status: 400 | 413,
+  field: ImportField,
+  message: string,
+  issues: LayoutIssue[] = [],
+): ImportReading {
+  return { ok: false, status, field, message, issues };
+}
+
+/** Reads the uploaded or pasted text from a multipart or urlencoded form. */
+async function readText(request: Request): Promise<{ field: ImportField; text: string } | ImportReading> {
+  const type = request.headers.get("Content-Type") ?? "";
+  const declared = Number(request.headers.get("Content-Length") ?? "");
+  // A form adds a little around the file; anything far beyond the limit is refused unread.
+  if (Number.isFinite(declared) && declared > MAX_LAYOUT_FILE_BYTES + 64 * 1024) {
+    return refuse(413, type.startsWith("multipart/") ? "file" : "json", TOO_LARGE);
+  }
+  if (type.startsWith("multipart/form-data")) {
+    let upload: string | undefined;
+    let form: FormData;
+    try {
+      form = await parseFormData(
+        request,
+        { maxFileSize: MAX_LAYOUT_FILE_BYTES, maxTotalSize: MAX_LAYOUT_FILE_BYTES + 64 * 1024, maxFiles: 1 },
+        async (file: FileUpload) => {
+          if (file.fieldName === "file" && file.size > 0) upload = await file.text();
+          return null;
+        },
+      );
+    } catch (err) {
+      if (err instanceof MaxFileSizeExceededError || err instanceof MaxTotalSizeExceededError)
+        return refuse(413, "file", TOO_LARGE);
+      return refuse(400, "file", "The upload could not be read. Choose the file again.");
+    }
+    if (upload !== undefined) return { field: "file", text: upload };
+    const pasted = form.get("json");
+    if (typeof pasted === "string" && pasted.trim() !== "") return { field: "json", text: pasted };
+    return refuse(400, "file", "Choose a layout file (.json) or paste its text.");
+  }
+  if (type.startsWith("application/x-www-form-urlencoded")) {
+    let text: string;
+    try {
+      text = await readLimitedText(request, MAX_LAYOUT_FILE_BYTES + 64 * 1024);
+    } catch (err) {
+      if (err instanceof Response && err.status === 413) return refuse(413, "json", TOO_LARGE);
+      throw err;
+    }
+    const pasted = new URLSearchParams(text).get("json") ?? "";
+    if (pasted.trim() === "") return refuse(400, "json", "Paste the layout file's text, or choose the file.");
+    if (new TextEncoder().encode(pasted).byteLength > MAX_LAYOUT_FILE_BYTES)
+      return refuse(413, "json", TOO_LARGE);
+    return { field: "json", text: pasted };
+  }
+  return refuse(400, "file", "Send the layout file from the import form.");
+}
+
+/**
+ * Reads and checks a layout file from the import form of a club.
+ * @returns the document (with notes on anything left out) or the refusal with every issue.
+ */
+export async function readLayoutImport(request: Request, clubId: string): Promise<ImportReading> {
+  const read = await readText(request);
+  if ("ok" in read) return read;
+  const parsed = parseLayoutDocument(read.text.replace(/^\uFEFF/, ""));
+  if (!parsed.ok) {
+    const n = parsed.issues.length;
+    return refuse(
+      400,
+      read.field,
+      `The file is not a valid Loftline layout: ${n} problem${n === 1 ? "" : "s"} found. Nothing was imported.`,
+      parsed.issues,
+    );
+  }
+  const notes: string[] = [];
+  let document = parsed.document;
+  // A background photo is a file of one club: from another club (or gone) it is left out.
+  if (document.background && !(await clubOwnsFile(clubId, document.background.fileId))) {
+    const { background: _dropped, ...rest } = document;
+    document = rest;
+    notes.push("The file's background photo is not one of this club's files, so it was left out.");
+  }
+  return { ok: true, document, source: read.field, notes };
+}
+
+async function clubOwnsFile(clubId: string, fileId: string): Promise<boolean> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ id: files.id })
+    .from(files)
+    .where(and(eq(files.id, fileId), eq(files.clubId, clubId)));
+  return Boolean(row);
+}
