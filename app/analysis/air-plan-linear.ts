@@ -14,6 +14,17 @@
 import type { AttitudeCar } from "./attitude";
 import type { PiecewiseLinear } from "./attitude-inputs";
 
+/**
+ * Period of the nutation that the wheels' spin gives the chassis in roll and yaw,
+ * 2 pi sqrt(Ixx Izz) / H with H the four wheels' spin momentum at takeoff speed (s). The shape of
+ * the best set-up plan depends on the airtime as a fraction of it (docs/decisions/0103).
+ * @param speed takeoff speed, m/s
+ */
+export function nutationPeriod(car: AttitudeCar, speed: number): number {
+  const H = 2 * speed * (car.rearWheel.spinInertia / car.rearWheel.radius + car.frontWheel.spinInertia / car.frontWheel.radius);
+  return H > 0 ? (2 * Math.PI * Math.sqrt(car.inertia[0] * car.inertia[2])) / H : Infinity;
+}
+
 export interface LinearGuide {
   /** Grid step of the table, s. */
   step: number;

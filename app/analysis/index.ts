@@ -24,7 +24,8 @@
  *   [t, rad][], rearWheelAccel: [t, rad/s^2][], yawRad, pitchRad, rollRad, targetYawRad,
  *   pitchPulse: { kind: "brake" | "throttle" | "none", start, duration, wheelAccel, limited },
  *   switches: [{ t, earlyMs, lateMs }], timingWindowMs, successRate: { novice, club, expert } }`.
- *   Steering is in radians here; the command line prints degrees.
+ *   Steering is in radians here; the command line prints degrees. `nutationPeriod(car, speed)` s:
+ *   the plan starts away from the turn on flights shorter than about 0.6 of it.
  *
  * Track length saved and the verdict (verdict.ts)
  * - `landsIntoTurn(distanceToTurn, landingSpeed, lookaheadS = 0.5)`,
@@ -42,6 +43,7 @@ export * from "./flight-window";
 export * from "./attitude";
 export { compileServo, compileWheel, evaluate, type PiecewiseLinear, type TimedValue } from "./attitude-inputs";
 export * from "./air-plan";
+export { nutationPeriod } from "./air-plan-linear";
 export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
 export { pitchPulse, drivenSpinInertia, type PitchPulse, type PulseKind, type PulseLimits } from "./air-plan-pulse";
 export * from "./verdict";
@@ -57,3 +59,20 @@ export * from "./speed";
 export * from "./rules";
 export * from "./layout-measure";
 export * from "./demo-layouts";
+
+/*
+ * Layout analysis (layout-analysis.ts, jump-analysis.ts, overlay.ts, analysis-cache.ts)
+ * - `analyseLayout(doc, { classIds?, skill?, guidance?, overrides?, cache?, cars?, skillSigmas?,
+ *   lookaheadS?, failCost?, seed? })` -> `LayoutAnalysis` (plain JSON data: lap length, closure,
+ *   plan checks, rule report, per class: lap time, speed along the downsampled line, jumps with
+ *   flight, window, EFH, landing turn, set-up plan and a verdict per skill level; angles in deg).
+ * - `analyseJump(context, options)` -> `JumpAnalysis` for one jump and one car class.
+ * - `buildOverlay(analysis, classId, skill?)` -> `AnalysisOverlay` (app/lib/analysis-overlay.ts).
+ * - `createAnalysisCache(maxEntries?)` -> an LRU memo (`memo`, `stats`, `clear`); `cacheKey`,
+ *   `canonicalJson`, `fnv1a64`.
+ */
+export * from "./layout-analysis-types";
+export * from "./analysis-cache";
+export { analyseJump, TAKEOFF_SPEED_STEP, type JumpContext, type JumpAnalysisOptions } from "./jump-analysis";
+export * from "./layout-analysis";
+export { buildOverlay, jumpLabel } from "./overlay";

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { planAirSetup } from "~/analysis/air-plan";
+import { nutationPeriod } from "~/analysis/air-plan-linear";
 import { simulateAttitude } from "~/analysis/attitude";
 import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/cars";
 import { seededNormal } from "~/analysis/vec";
@@ -28,11 +29,20 @@ describe("mid-air set-up plan", () => {
     expect(last[0] + 0.5 / ((Math.PI / 3) / car.servoSecondsPer60)).toBeLessThan(0.7);
   });
 
-  it.each(CAR_PRESET_IDS)("%s: on a 0.5 s jump a right-hand turn is set up by steering left first (common practice, no source)", (id) => {
-    const plan = planAirSetup({ car: CAR_PRESETS[id], speed: 10, airtime: 0.5, turn: "right" });
-    expect(plan.feasible).toBe(true);
-    expect(plan.steering[0][1]).toBeGreaterThan(0);
-    expect(deg(plan.yawRad)).toBeLessThan(-5);
+  it.each(CAR_PRESET_IDS)("%s: a right-hand turn is set up by steering left first (common practice, no source)", (id) => {
+    // Holds in the model for flights shorter than about 0.6 of the wheels' nutation period
+    // (docs/decisions/0103); checked here at 0.45 and 0.55 of it, at two speeds. (Much shorter flights leave
+    // no room for a plan that lands flat: the planner then reports it as not feasible.)
+    const car = CAR_PRESETS[id];
+    for (const speed of [8, 13]) {
+      for (const share of [0.45, 0.55]) {
+        const airtime = share * nutationPeriod(car, speed);
+        const plan = planAirSetup({ car, speed, airtime, turn: "right" });
+        expect(plan.feasible).toBe(true);
+        expect(plan.steering[0][1]).toBeGreaterThan(0);
+        expect(deg(plan.yawRad)).toBeLessThan(-2);
+      }
+    }
   });
 
   it("a left-hand turn gets the mirror image of the right-hand plan", () => {
