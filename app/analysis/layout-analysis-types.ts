@@ -127,7 +127,11 @@ export interface JumpAnalysis {
   lip: { d: number; s: number; x: number; y: number; z: number };
   /** Face angle at the lip, deg. */
   faceAngleDeg: number;
-  /** Planned takeoff speed: the sweet-spot speed, or the most the approach allows (rounded to 0.01 m/s), m/s. */
+  /**
+   * Planned takeoff speed: the speed that lands on the sweet spot with air drag, or the most the
+   * approach allows if that is lower (rounded to 0.01 m/s; 0 when flown over), m/s. The lap time uses the lap
+   * model's drag-free speeds, a few percent lower (docs/decisions/0401).
+   */
   takeoffSpeed: number;
   /** Highest takeoff speed the approach allows, m/s. */
   approachMaxSpeed: number;
@@ -135,7 +139,7 @@ export interface JumpAnalysis {
   window: { min: number; max: number; maxIsSearchLimit: boolean } | null;
   /** Takeoff speed that lands on the sweet spot (a third of the way down the ramp), with drag, m/s. */
   sweetSpotSpeed: number | null;
-  /** True when the approach is too short to reach the landing. */
+  /** True when the approach is too short to reach the landing ramp (with drag). */
   cannotClear: boolean;
   /** Id of the jump whose flight passes over this one's lip, else null. */
   flownOverBy: string | null;

@@ -1,0 +1,231 @@
+/**
+ * One jump analysed for one car class (engine.md sections 3, 5 and 6): the flight at the lap's
+ * planned takeoff speed with air drag, the speed window, the equivalent fall height, where the
+ * car touches down in plan and along the lap, the turn it lands into (or none), the mid-air
+ * set-up plan (once per jump and class; the skill levels share it) and the verdict per skill
+ * level. The costly parts (window, flight, plan) go through the analysis cache when one is given.
+ * Results are estimates from a model, not a safety certification.
+ */
+import type { JumpSection } from "~/lib/layout-document";
+import { planAirSetup, type AirPlan } from "./air-plan";
+import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
+import { cacheKey, canonicalJson, fnv1a64, type AnalysisCache } from "./analysis-cache";
+import type { CarParams } from "./cars";
+import { flyJump, type FlightInput, type FlightResult } from "./flight";
+import { speedToLandAt, speedWindow, type SpeedWindow } from "./flight-window";
+import type { CentreLine, ResolvedSection } from "./geometry";
+import type { JumpProfile } from "./jump-profile";
+import { ballisticJumpWindow, STANDARD_GRAVITY } from "./lap-jumps";
+import { findLandingTurn, lineIndexAt, pointAt } from "./jump-turn";
+import { describeVerdicts, type VerdictInputs } from "./jump-verdicts";
+import type { JumpAnalysis, JumpPlan, SkillLevel } from "./layout-analysis-types";
+import type { JumpLap } from "./speed";
+import { DEFAULT_FAIL_COST_S, DEFAULT_MIN_AIRTIME_S, DEFAULT_MIN_TURN_ANGLE, DEFAULT_TURN_LOOKAHEAD_S } from "./verdict";
+
+/** The jump and its surroundings, as the lap model left them for one car class. */
+export interface JumpContext {
+  /** The jump's section in the layout document (name and preset). */
+  doc: JumpSection;
+  sections: readonly ResolvedSection[];
+  line: CentreLine;
+  /** Lap-model speed at each centre-line sample for this car, m/s. */
+  speed: ArrayLike<number>;
+  /** The lap model's record of this jump. */
+  lap: JumpLap;
+  car: CarParams;
+}
+
+export interface JumpAnalysisOptions {
+  /** Skill level for `verdict` (default "club"). */
+  skill?: SkillLevel;
+  /** Timing error per skill level, s (default 60 / 35 / 15 ms). */
+  skillSigmas?: SkillSigmas;
+  /** "Lands into a turn": the turn starts within the distance covered in this time at landing speed, s. */
+  lookaheadS?: number;
+  /** Time lost to a failed landing, s (default 3). */
+  failCost?: number;
+  /** Gravity, m/s^2. */
+  g?: number;
+  /** Monte Carlo seed of the plan's success rates. */
+  seed?: number;
+  cache?: AnalysisCache;
+}
+
+const DEG = 180 / Math.PI;
+/** Takeoff speeds are rounded to this before flying, m/s, so near-equal inputs share a cache entry. */
+export const TAKEOFF_SPEED_STEP = 0.01;
+
+/** Runs `compute` through the cache when there is one. */
+function memo<T>(cache: AnalysisCache | undefined, kind: string, inputs: () => unknown, compute: () => T): T {
+  return cache ? cache.memo(cacheKey(kind, inputs()), compute) : compute();
+}
+
+const hashes = new WeakMap<object, string>();
+/** Hash of an object that is shared and never changed (a profile, a car preset), remembered. */
+function objectHash(o: object): string {
+  let h = hashes.get(o);
+  if (h === undefined) {
+    h = fnv1a64(canonicalJson(o));
+    hashes.set(o, h);
+  }
+  return h;
+}
+
+function flightBase(profile: JumpProfile, car: CarParams, g: number): Omit<FlightInput, "speed"> {
+  return {
+    faceAngleRad: profile.faceAngle,
+    lip: { x: profile.d[profile.lipIndex], z: profile.h[profile.lipIndex] },
+    surface: profile.d.map((x, i) => ({ x, z: profile.h[i] })),
+    g,
+    drag: car.cdA > 0 ? { massKg: car.massKg, cdA: car.cdA } : undefined,
+    landingRamp: { start: profile.d[profile.landingStartIndex], end: profile.d[profile.landingEndIndex] },
+  };
+}
+
+/**
+ * Speed window and sweet-spot speed with drag. Drag only shortens a flight, so the drag-free
+ * speeds (lap-jumps.ts) are lower bounds and the search starts there.
+ */
+function dragWindow(profile: JumpProfile, car: CarParams, g: number): { window: SpeedWindow | null; sweetSpot: number | null } {
+  const free = ballisticJumpWindow(profile, g);
+  if (free.windowMin === null) return { window: null, sweetSpot: null };
+  const base = flightBase(profile, car, g);
+  const ramp = base.landingRamp!;
+  const window = speedWindow({ ...base, landingRamp: ramp, minSpeed: free.windowMin });
+  const sweetSpot = speedToLandAt({ ...base, minSpeed: free.sweetSpotSpeed ?? free.windowMin }, profile.sweetSpot);
+  return { window, sweetSpot };
+}
+
+function planSummary(p: AirPlan): JumpPlan {
+  return {
+    feasible: p.feasible,
+    reason: p.reason,
+    steering: p.steering.map(([t, a]) => [t, a * DEG]),
+    rearWheelAccel: p.rearWheelAccel.map(([t, a]) => [t, a]),
+    yawDeg: p.yawRad * DEG,
+    pitchDeg: p.pitchRad * DEG,
+    rollDeg: p.rollRad * DEG,
+    targetYawDeg: p.targetYawRad * DEG,
+    pitchChangeDeg: p.pitchChangeRad * DEG,
+    pitchPulse: { ...p.pitchPulse },
+    switches: p.switches.map((s) => ({ ...s })),
+    timingWindowMs: p.timingWindowMs,
+    successRate: { ...p.successRate },
+    rollToleranceDeg: p.rollToleranceRad * DEG,
+  };
+}
+
+/**
+ * Analyses one jump for one car class.
+ * @returns speeds m/s, distances m, times s, angles deg, the plan and a verdict per skill level.
+ */
+export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {}): JumpAnalysis {
+  const { doc, sections, line, lap, car } = ctx;
+  const section = sections[lap.sectionIndex];
+  const profile = section.profile;
+  if (!profile) throw new RangeError(`sections[${lap.sectionIndex}]: is not a jump`);
+  const g = options.g ?? STANDARD_GRAVITY;
+  const cache = options.cache;
+  const sigmas = options.skillSigmas ?? DEFAULT_SKILL_SIGMAS;
+  const lookaheadS = options.lookaheadS ?? DEFAULT_TURN_LOOKAHEAD_S;
+  const lipD = profile.d[profile.lipIndex];
+  const lipPoint = pointAt(line, lap.lipS);
+  const profileKey = objectHash(profile);
+  const drag = { massKg: car.massKg, cdA: car.cdA };
+  const result: JumpAnalysis = {
+    sectionId: section.id,
+    sectionIndex: section.index,
+    name: doc.name ?? null,
+    preset: doc.preset,
+    lip: { d: lipD, s: lap.lipS, x: lipPoint.x, y: lipPoint.y, z: profile.h[profile.lipIndex] },
+    faceAngleDeg: profile.faceAngle * DEG,
+    takeoffSpeed: 0,
+    approachMaxSpeed: lap.approachMaxSpeed,
+    window: null,
+    sweetSpotSpeed: null,
+    cannotClear: false,
+    flownOverBy: lap.flownOverBy,
+    airtime: 0,
+    apex: null,
+    landing: null,
+    equivalentFallHeight: 0,
+    turn: null,
+    nextTurnDistance: null,
+    plan: null,
+    verdicts: null!,
+    verdict: null!,
+  };
+  const w = memo(cache, "window", () => ({ profileKey, drag, g }), () => dragWindow(profile, car, g));
+  result.window = w.window ? { ...w.window } : null;
+  result.sweetSpotSpeed = w.sweetSpot;
+  // engine.md section 2 with the flight model's drag: the sweet-spot speed, or the most the approach allows.
+  const approach = lap.approachMaxSpeed;
+  const planned = w.sweetSpot === null ? approach : Math.min(w.sweetSpot, approach);
+  const takeoffSpeed = Math.round(planned / TAKEOFF_SPEED_STEP) * TAKEOFF_SPEED_STEP;
+  result.takeoffSpeed = lap.flownOverBy === null ? takeoffSpeed : 0;
+  result.cannotClear = lap.flownOverBy === null && (w.window === null || approach < w.window.min);
+
+  const inputs: VerdictInputs = { skill: options.skill ?? "club", failCost: options.failCost ?? DEFAULT_FAIL_COST_S, result };
+  if (lap.flownOverBy !== null || !(takeoffSpeed > 0)) return describeVerdicts(inputs);
+
+  const flight: FlightResult = memo(
+    cache,
+    "flight",
+    () => ({ profileKey, drag, g, speed: takeoffSpeed }),
+    () => flyJump({ ...flightBase(profile, car, g), speed: takeoffSpeed }),
+  );
+  const td = flight.landing;
+  const tdS = (section.startS + td.x) % line.length;
+  const tdPoint = pointAt(line, tdS);
+  const rollOutSpeed = td.speed * Math.max(0, Math.cos(td.flightPathRad - td.surfaceSlopeRad));
+  result.airtime = flight.airtime;
+  result.apex = { d: flight.apex.x, z: flight.apex.z, t: flight.apex.t };
+  result.landing = {
+    d: td.x,
+    s: tdS,
+    x: tdPoint.x,
+    y: tdPoint.y,
+    z: td.z,
+    speed: td.speed,
+    rollOutSpeed,
+    flightPathDeg: td.flightPathRad * DEG,
+    surfaceSlopeDeg: td.surfaceSlopeRad * DEG,
+    normalSpeed: td.normalSpeed,
+    landedOn: flight.landedOn ?? "ramp",
+  };
+  result.equivalentFallHeight = td.equivalentFallHeight;
+  const found = findLandingTurn(sections, line.length, tdS, rollOutSpeed, lookaheadS);
+  result.nextTurnDistance = found ? found.distance : null;
+  if (found?.landsInto) {
+    const entryS = (line.s[line.sectionStart[found.sectionIndex]] + found.passed) % line.length;
+    result.turn = {
+      sectionId: sections[found.sectionIndex].id,
+      sectionIndex: found.sectionIndex,
+      distance: found.distance,
+      lookahead: rollOutSpeed * lookaheadS,
+      side: found.side,
+      angleDeg: found.angle * DEG,
+      radius: found.radius,
+      entrySpeed: ctx.speed[lineIndexAt(line, entryS)],
+    };
+  }
+  const turn = result.turn;
+  const wantsPlan =
+    !result.cannotClear && turn !== null && turn.angleDeg / DEG >= DEFAULT_MIN_TURN_ANGLE && flight.airtime >= DEFAULT_MIN_AIRTIME_S;
+  if (wantsPlan) {
+    const turnAngleRad = Math.min(turn.angleDeg / DEG, Math.PI / 4);
+    const pitchChangeRad = td.surfaceSlopeRad - profile.faceAngle;
+    const seed = options.seed ?? 1;
+    const plan = memo(
+      cache,
+      "plan",
+      () => ({ car: objectHash(car), speed: takeoffSpeed, airtime: flight.airtime, side: turn.side, turnAngleRad, pitchChangeRad, sigmas, seed }),
+      () =>
+        planSummary(
+          planAirSetup({ car, speed: takeoffSpeed, airtime: flight.airtime, turn: turn.side, turnAngleRad, pitchChangeRad, skillSigmas: sigmas, seed }),
+        ),
+    );
+    result.plan = plan;
+  }
+  return describeVerdicts(inputs);
+}

@@ -1,0 +1,179 @@
+/**
+ * The whole analysis of a layout in one call (issue 4): geometry and plan checks, the rule
+ * report, and per car class the lap (speed along it, lap time) and every jump analysed with its
+ * verdict per skill level. The result is plain JSON-serialisable data (layout-analysis-types.ts);
+ * `buildOverlay` (overlay.ts) turns it into what the plan view and the editor draw.
+ *
+ * With a cache (analysis-cache.ts) a repeat of the same inputs returns the stored analysis, and
+ * an edited layout recomputes only the jumps whose own inputs changed.
+ */
+import type { JumpSection, LayoutDocument } from "~/lib/layout-document";
+import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
+import { cacheKey, canonicalJson, fnv1a64, type AnalysisCache } from "./analysis-cache";
+import { carPreset, type CarParams } from "./cars";
+import type { ResolvedSection } from "./geometry";
+import { analyseJump } from "./jump-analysis";
+import type { JumpProfile } from "./jump-profile";
+import { pointAt } from "./jump-turn";
+import { ballisticJumpWindow, STANDARD_GRAVITY } from "./lap-jumps";
+import { SKILL_LEVELS, type ClassAnalysis, type LayoutAnalysis, type SkillLevel } from "./layout-analysis-types";
+import { measureLayout, ruleMeasurements, type LayoutMeasures } from "./layout-measure";
+import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "./rules";
+import { lapSpeed } from "./speed";
+import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "./verdict";
+
+export interface AnalyseOptions {
+  /** Car classes to analyse (default: the layout's own `carClasses`). */
+  classIds?: readonly string[];
+  /** Skill level for each jump's `verdict` (default "club"); every level is in `verdicts`. */
+  skill?: SkillLevel;
+  /** Guidance set for the rule checks (default: the layout's own `guidance`). */
+  guidance?: GuidanceSetId;
+  /** A club's own values for the rule checks. */
+  overrides?: GuidanceOverrides;
+  /** Memo for repeats and edits; without one everything is computed. */
+  cache?: AnalysisCache;
+  /** A club's own car classes by id (checked before the presets). Do not change one after passing it. */
+  cars?: Readonly<Record<string, CarParams>>;
+  /** Timing error per skill level, s. */
+  skillSigmas?: SkillSigmas;
+  /** Look-ahead time for "lands into a turn", s (default 0.5). */
+  lookaheadS?: number;
+  /** Time lost to a failed landing, s (default 3). */
+  failCost?: number;
+  /** Monte Carlo seed of the plans' success rates (default 1). */
+  seed?: number;
+}
+
+/** Shown with every analysis. */
+export const ANALYSIS_NOTE =
+  "Model estimates from the drawing and the car class data, not measurements and not a safety certification. " +
+  "The sanctioning body's current rulebook and the club's own risk assessment decide.";
+
+/** Spacing of the downsampled centre line in the result, m. */
+export const LINE_SPACING = 0.5;
+
+function resolveClasses(doc: LayoutDocument, options: AnalyseOptions): { id: string; car: CarParams }[] {
+  const ids = options.classIds ?? doc.carClasses;
+  const field = options.classIds ? "classIds" : "carClasses";
+  if (ids.length === 0) throw new RangeError(`${field}: must name at least one car class`);
+  return ids.map((id, i) => {
+    const own = options.cars && Object.prototype.hasOwnProperty.call(options.cars, id) ? options.cars[id] : undefined;
+    const car = own ?? carPreset(id);
+    if (!car) throw new RangeError(`${field}[${i}]: unknown car class "${id}"`);
+    return { id, car };
+  });
+}
+
+/** Sample indices about LINE_SPACING apart, with the closing sample. */
+function downsample(count: number, s: Float64Array): number[] {
+  const out: number[] = [];
+  let next = 0;
+  for (let i = 0; i < count - 1; i++) {
+    if (s[i] >= next - 1e-9) {
+      out.push(i);
+      next = s[i] + LINE_SPACING;
+    }
+  }
+  out.push(count - 1);
+  return out;
+}
+
+function planSection(doc: LayoutDocument, m: LayoutMeasures, skill: SkillLevel, rules: LayoutAnalysis["rules"]) {
+  const { line } = m.geometry;
+  const keep = downsample(line.count, line.s);
+  const base: Omit<LayoutAnalysis, "classes"> = {
+    name: doc.name,
+    lapLength: m.geometry.lapLength,
+    closure: { gap: m.geometry.closure.gap, headingDeg: m.geometry.closure.headingDeg },
+    trackWidth: doc.trackWidth,
+    skill,
+    line: {
+      x: keep.map((i) => line.x[i]),
+      y: keep.map((i) => line.y[i]),
+      s: keep.map((i) => line.s[i]),
+      sectionIndex: keep.map((i) => line.section[i]),
+    },
+    laneConflicts: m.laneConflicts.map((c) => {
+      const b = pointAt(line, c.otherS);
+      return { fromS: c.fromS, toS: c.toS, a: [c.x, c.y], b: [b.x, b.y], distance: c.centreDistance };
+    }),
+    outsideBoundary: m.outsideBoundary ? m.outsideBoundary.map((o) => ({ ...o })) : null,
+    farthestFromStand: m.farthestFromStand ? { ...m.farthestFromStand } : null,
+    hiddenFromStand: m.hiddenFromStand ? m.hiddenFromStand.map((h) => ({ ...h })) : null,
+    startStraight: { length: m.startStraight.length, sectionIds: [...m.startStraight.sectionIds] },
+    rules,
+    note: ANALYSIS_NOTE,
+  };
+  return { base, keep };
+}
+
+/**
+ * Analyses a layout document for its car classes (or `options.classIds`).
+ * @returns lengths m, speeds m/s, times s, angles deg; plain data, shared with the cache (read-only).
+ * @throws RangeError naming the field for an unknown class, skill or rule override.
+ */
+export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {}): LayoutAnalysis {
+  const skill = options.skill ?? "club";
+  if (!SKILL_LEVELS.includes(skill)) throw new RangeError(`skill: must be one of ${SKILL_LEVELS.join(", ")}`);
+  const classes = resolveClasses(doc, options);
+  const cache = options.cache;
+  const settings = {
+    skillSigmas: options.skillSigmas ?? DEFAULT_SKILL_SIGMAS,
+    lookaheadS: options.lookaheadS ?? DEFAULT_TURN_LOOKAHEAD_S,
+    failCost: options.failCost ?? DEFAULT_FAIL_COST_S,
+    seed: options.seed ?? 1,
+  };
+  const guidance = options.guidance ?? doc.guidance;
+  if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance)) throw new RangeError('guidance: must be "club" or "national"');
+  const rulesFor = (m: LayoutMeasures) => checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
+  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
+  if (!cache) return compute();
+  const key = cacheKey("layout", {
+    doc,
+    classes: classes.map((c) => [c.id, fnv1a64(canonicalJson(c.car))]),
+    skill,
+    guidance,
+    overrides: options.overrides ?? {},
+    settings,
+  });
+  return cache.memo(key, compute);
+}
+
+function computeAnalysis(
+  doc: LayoutDocument,
+  classes: { id: string; car: CarParams }[],
+  skill: SkillLevel,
+  rulesFor: (m: LayoutMeasures) => LayoutAnalysis["rules"],
+  settings: { skillSigmas: SkillSigmas; lookaheadS: number; failCost: number; seed: number },
+  cache: AnalysisCache | undefined,
+): LayoutAnalysis {
+  const m = measureLayout(doc);
+  const rules = rulesFor(m);
+  const { base, keep } = planSection(doc, m, skill, rules);
+  const { sections, line } = m.geometry;
+  const g = STANDARD_GRAVITY;
+  const jumpWindow = cache
+    ? (_s: ResolvedSection, p: JumpProfile) => cache.memo(cacheKey("lap-window", { p, g }), () => ballisticJumpWindow(p, g))
+    : undefined;
+  const result: ClassAnalysis[] = classes.map(({ id, car }) => {
+    const lap = lapSpeed(m.geometry, car, { g, jumpWindow });
+    const jumps = lap.jumps.map((j) =>
+      analyseJump(
+        { doc: doc.sections[j.sectionIndex] as JumpSection, sections, line, speed: lap.speed, lap: j, car },
+        { skill, cache, g, ...settings },
+      ),
+    );
+    return {
+      classId: id,
+      label: car.label,
+      lapTime: lap.lapTime,
+      speed: { min: lap.minSpeed, max: lap.maxSpeed, mean: line.length / lap.lapTime },
+      lineSpeed: keep.map((i) => lap.speed[i]),
+      tightTurns: lap.tightTurns.map((t) => ({ ...t })),
+      jumps,
+      cannotClear: jumps.filter((j) => j.cannotClear).map((j) => j.sectionId),
+    };
+  });
+  return { ...base, classes: result };
+}

@@ -1,0 +1,93 @@
+/**
+ * The overlay the plan view and the editor draw (app/lib/analysis-overlay.ts), built from a
+ * layout analysis for one car class and one skill level: the centre line with speeds, the jumps
+ * with short verdict labels, hidden stretches as polylines, lane conflicts and failed rules.
+ */
+import type { AnalysisOverlay, OverlayJump } from "~/lib/analysis-overlay";
+import type { JumpAnalysis, LayoutAnalysis, SkillLevel } from "./layout-analysis-types";
+import { SKILL_LEVELS } from "./layout-analysis-types";
+import type { RuleCheck } from "./rules";
+
+/** Short label beside a jump's marker, e.g. "Set up: turn 25° left in the air". */
+export function jumpLabel(j: JumpAnalysis, skill: SkillLevel): string {
+  const v = j.verdicts[skill];
+  if (v.reason === "cannot-clear") return "Cannot clear: approach too short";
+  if (v.verdict === "set-up" && j.plan && j.turn)
+    return `Set up: turn ${Math.round(Math.abs(j.plan.yawDeg))}\u00b0 ${j.turn.side} in the air`;
+  return `Straight: ${v.reasonText}`;
+}
+
+function overlayJump(j: JumpAnalysis, skill: SkillLevel): OverlayJump {
+  const v = j.verdicts[skill];
+  return {
+    sectionId: j.sectionId,
+    lip: [j.lip.x, j.lip.y],
+    landing: j.landing ? [j.landing.x, j.landing.y] : null,
+    verdict: v.reason === "cannot-clear" ? "cannot-clear" : v.verdict,
+    label: jumpLabel(j, skill),
+    takeoffSpeed: j.takeoffSpeed,
+    airtime: j.airtime,
+  };
+}
+
+const fmt = (x: number) => (Math.abs(x) >= 10 ? x.toFixed(0) : x.toFixed(2).replace(/\.?0+$/, ""));
+
+function ruleFailure(c: RuleCheck): AnalysisOverlay["ruleFailures"][number] {
+  return {
+    id: c.id,
+    label: c.label,
+    measured: c.measured === null ? c.detail : `${fmt(c.measured)} ${c.unit}`,
+    required: `${c.comparison} ${fmt(c.value)} ${c.unit}`,
+  };
+}
+
+/**
+ * The points of the downsampled line from lap distance `from` to `to` (m), going forward and
+ * crossing the start line when `to` < `from`.
+ */
+function stretch(line: LayoutAnalysis["line"], from: number, to: number): [number, number][] {
+  const pts: [number, number][] = [];
+  const n = line.s.length;
+  const inside = (s: number) => (from <= to ? s >= from && s <= to : s >= from || s <= to);
+  // Start at the first point inside after the start line is crossed, so that pieces join up.
+  let first = 0;
+  if (from > to) while (first < n && line.s[first] < from) first++;
+  for (let k = 0; k < n; k++) {
+    const i = (first + k) % n;
+    if (inside(line.s[i])) pts.push([line.x[i], line.y[i]]);
+  }
+  return pts;
+}
+
+/**
+ * The overlay of an analysis for one class and skill level.
+ * @throws RangeError naming `classId` or `skill` when the analysis has no such class or level.
+ */
+export function buildOverlay(analysis: LayoutAnalysis, classId: string, skill: SkillLevel = analysis.skill): AnalysisOverlay {
+  const cls = analysis.classes.find((c) => c.classId === classId);
+  if (!cls) throw new RangeError(`classId: the analysis has no class "${classId}"`);
+  if (!SKILL_LEVELS.includes(skill)) throw new RangeError(`skill: must be one of ${SKILL_LEVELS.join(", ")}`);
+  let min = Infinity;
+  let max = -Infinity;
+  for (const v of cls.lineSpeed) {
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return {
+    classId,
+    lapLength: analysis.lapLength,
+    lapTime: cls.lapTime,
+    closure: { ...analysis.closure },
+    line: {
+      x: analysis.line.x,
+      y: analysis.line.y,
+      speed: cls.lineSpeed,
+      sectionIndex: analysis.line.sectionIndex,
+    },
+    speedRange: { min, max },
+    jumps: cls.jumps.map((j) => overlayJump(j, skill)),
+    hidden: (analysis.hiddenFromStand ?? []).map((h) => ({ points: stretch(analysis.line, h.fromS, h.toS), length: h.length })),
+    laneConflicts: analysis.laneConflicts.map((c) => ({ a: c.a, b: c.b, distance: c.distance })),
+    ruleFailures: analysis.rules.checks.filter((c) => c.status === "fail").map(ruleFailure),
+  };
+}
