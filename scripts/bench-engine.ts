@@ -72,11 +72,16 @@ if (process.argv.includes("--alloc-probe")) {
 }
 
 const lines: string[] = [];
-const report = (label: string, value: string, target = "") => lines.push(`${label.padEnd(58)} ${value.padStart(12)}  ${target}`);
+const report = (label: string, value: string, target = "") =>
+  lines.push(`${label.padEnd(58)} ${value.padStart(12)}  ${target}`);
 
 // 1. One second of attitude at 1 ms steps.
 const attitudeMs = time(() => simulateAttitude(car, aggressive), 31, 200);
-report("attitude, 1 s at 1 ms steps (median per run)", `${attitudeMs.toFixed(4)} ms`, attitudeMs < 0.2 ? "target < 0.2 ms: met" : "target < 0.2 ms: MISSED");
+report(
+  "attitude, 1 s at 1 ms steps (median per run)",
+  `${attitudeMs.toFixed(4)} ms`,
+  attitudeMs < 0.2 ? "target < 0.2 ms: met" : "target < 0.2 ms: MISSED",
+);
 const quietMs = time(() => simulateAttitude(car, { speed: 12, duration: 1 }), 31, 200);
 report("attitude, 1 s at 1 ms steps, no inputs", `${quietMs.toFixed(4)} ms`);
 
@@ -84,21 +89,47 @@ report("attitude, 1 s at 1 ms steps, no inputs", `${quietMs.toFixed(4)} ms`);
 // enough that no collection runs during the probe: heap growth per run, long runs minus short.
 const probe = spawnSync(
   process.execPath,
-  [...process.execArgv, "--expose-gc", "--min-semi-space-size=64", "--max-semi-space-size=64", fileURLToPath(import.meta.url), "--alloc-probe"],
+  [
+    ...process.execArgv,
+    "--expose-gc",
+    "--min-semi-space-size=64",
+    "--max-semi-space-size=64",
+    fileURLToPath(import.meta.url),
+    "--alloc-probe",
+  ],
   { encoding: "utf8" },
 );
 const perStep = Number(probe.stdout.trim());
-if (probe.status !== 0 || !Number.isFinite(perStep)) throw new Error(`allocation probe failed: ${probe.stderr}`);
-report("heap bytes per integrator step (6 s run minus 1.5 s run)", perStep.toFixed(3), perStep < 0.5 ? "target: no allocation: met" : "target: no allocation: MISSED");
+if (probe.status !== 0 || !Number.isFinite(perStep))
+  throw new Error(`allocation probe failed: ${probe.stderr}`);
+report(
+  "heap bytes per integrator step (6 s run minus 1.5 s run)",
+  perStep.toFixed(3),
+  perStep < 0.5 ? "target: no allocation: met" : "target: no allocation: MISSED",
+);
 
 // 3. Complete set-up plans.
 const planCases = CAR_PRESET_IDS.flatMap((id) =>
-  [0.5, 0.8, 1.1].map((airtime) => ({ car: CAR_PRESETS[id], speed: 11, airtime, turn: "right" as const, pitchChangeRad: rad(-25) })),
+  [0.5, 0.8, 1.1].map((airtime) => ({
+    car: CAR_PRESETS[id],
+    speed: 11,
+    airtime,
+    turn: "right" as const,
+    pitchChangeRad: rad(-25),
+  })),
 );
 const planTimes = planCases.map((c) => time(() => planAirSetup(c), 9, 3, 3));
 const planMedian = median(planTimes);
-report("set-up plan incl. windows and 3 success rates (median)", `${planMedian.toFixed(2)} ms`, planMedian < 15 ? "target < 15 ms: met" : "target < 15 ms: MISSED");
-report("set-up plan, slowest of the 12 cases (its median)", `${Math.max(...planTimes).toFixed(2)} ms`, "(4 classes x airtimes 0.5, 0.8, 1.1 s)");
+report(
+  "set-up plan incl. windows and 3 success rates (median)",
+  `${planMedian.toFixed(2)} ms`,
+  planMedian < 15 ? "target < 15 ms: met" : "target < 15 ms: MISSED",
+);
+report(
+  "set-up plan, slowest of the 12 cases (its median)",
+  `${Math.max(...planTimes).toFixed(2)} ms`,
+  "(4 classes x airtimes 0.5, 0.8, 1.1 s)",
+);
 
 // 4. Flight, for information.
 const jump = {
@@ -113,8 +144,17 @@ const jump = {
   ],
   landingRamp: { start: 4, end: 6 },
 };
-report("flight, exact parabola", `${(time(() => flyJump({ ...jump, speed: 9 }), 31, 2000) * 1000).toFixed(2)} us`);
-report("flight with drag", `${(time(() => flyJump({ ...jump, speed: 9, drag: { massKg: 1.6, cdA: 0.03 } }), 31, 200) * 1000).toFixed(2)} us`);
-report("speed window with drag", `${time(() => speedWindow({ ...jump, drag: { massKg: 1.6, cdA: 0.03 } }), 15, 3).toFixed(3)} ms`);
+report(
+  "flight, exact parabola",
+  `${(time(() => flyJump({ ...jump, speed: 9 }), 31, 2000) * 1000).toFixed(2)} us`,
+);
+report(
+  "flight with drag",
+  `${(time(() => flyJump({ ...jump, speed: 9, drag: { massKg: 1.6, cdA: 0.03 } }), 31, 200) * 1000).toFixed(2)} us`,
+);
+report(
+  "speed window with drag",
+  `${time(() => speedWindow({ ...jump, drag: { massKg: 1.6, cdA: 0.03 } }), 15, 3).toFixed(3)} ms`,
+);
 
 console.log(`Loftline engine benchmark (Node ${process.version}, medians)\n${lines.join("\n")}`);

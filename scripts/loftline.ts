@@ -14,7 +14,9 @@ function usage(): string {
 const [name, file] = process.argv.slice(2);
 const command = name ? commands[name] : undefined;
 if (!command || !Object.prototype.hasOwnProperty.call(commands, name)) {
-  process.stderr.write(name ? `loftline: bad input: command: unknown command "${name}"\n${usage()}` : usage());
+  process.stderr.write(
+    name ? `loftline: bad input: command: unknown command "${name}"\n${usage()}` : usage(),
+  );
   process.exitCode = 2;
 } else {
   process.exitCode = runCommand(command, file);

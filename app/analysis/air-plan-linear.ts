@@ -21,7 +21,10 @@ import type { PiecewiseLinear } from "./attitude-inputs";
  * @param speed takeoff speed, m/s
  */
 export function nutationPeriod(car: AttitudeCar, speed: number): number {
-  const H = 2 * speed * (car.rearWheel.spinInertia / car.rearWheel.radius + car.frontWheel.spinInertia / car.frontWheel.radius);
+  const H =
+    2 *
+    speed *
+    (car.rearWheel.spinInertia / car.rearWheel.radius + car.frontWheel.spinInertia / car.frontWheel.radius);
   return H > 0 ? (2 * Math.PI * Math.sqrt(car.inertia[0] * car.inertia[2])) / H : Infinity;
 }
 
@@ -50,7 +53,12 @@ function pieceValue(f: PiecewiseLinear, t: number, cursor: { k: number }): numbe
  * Builds the guide's table for a flight of `airtime` s at takeoff `speed` m/s, with the driven
  * wheels' spin given by `rearSpin` (rad/s over time) and the front spin following it on a 4wd car.
  */
-export function buildLinearGuide(car: AttitudeCar, speed: number, airtime: number, rearSpin: PiecewiseLinear): LinearGuide {
+export function buildLinearGuide(
+  car: AttitudeCar,
+  speed: number,
+  airtime: number,
+  rearSpin: PiecewiseLinear,
+): LinearGuide {
   const step = 0.002;
   const n = Math.max(2, Math.ceil(airtime / step) + 1);
   const [ixx, , izz] = car.inertia;

@@ -9,7 +9,11 @@ import type { BlockPlan } from "./air-plan-search";
 import type { AttitudeResult } from "./attitude";
 
 /** Runs the full model for a steering timeline and wheel-acceleration timeline. */
-export type PlanSim = (steering: Array<[number, number]>, accel: Array<[number, number]>, dt?: number) => AttitudeResult;
+export type PlanSim = (
+  steering: Array<[number, number]>,
+  accel: Array<[number, number]>,
+  dt?: number,
+) => AttitudeResult;
 
 export interface RefineOptions {
   dir: number;
@@ -42,7 +46,16 @@ const SAME_AMOUNT = (5 * Math.PI) / 180;
 
 /** Steering timeline of a block plan: [t s, target rad] entries. */
 export function timeline(p: BlockPlan): Array<[number, number]> {
-  return p.single ? [[p.a, p.u1], [p.m, 0]] : [[p.a, p.u1], [p.m, p.u2], [p.b, 0]];
+  return p.single
+    ? [
+        [p.a, p.u1],
+        [p.m, 0],
+      ]
+    : [
+        [p.a, p.u1],
+        [p.m, p.u2],
+        [p.b, 0],
+      ];
 }
 
 interface Outcome {
@@ -128,7 +141,12 @@ function simplify(p: BlockPlan): BlockPlan {
  * Refines a guide plan in the full model. Returns null when the full model gives no yaw toward
  * the turn.
  */
-export function refineAmounts(sim: PlanSim, guide: BlockPlan, accel: Array<[number, number]>, o: RefineOptions): Refined | null {
+export function refineAmounts(
+  sim: PlanSim,
+  guide: BlockPlan,
+  accel: Array<[number, number]>,
+  o: RefineOptions,
+): Refined | null {
   const start = simplify(guide);
   const target = Math.min(start.yaw, o.yawCap);
   const run: Run = (plan) => {
@@ -225,7 +243,10 @@ function zeroOnLever(run: Run, base: Outcome, lever: Lever, slope: number): Outc
     if (Math.sign(f.roll) !== Math.sign(f1.roll)) return illinois(at, x1, f1, x, f, best);
     // Secant toward the root when the roll shrinks, otherwise grow the step.
     const s = (f.roll - f1.roll) / (x - x1);
-    step = s * f.roll * dirn > 0 || s === 0 ? step * 1.6 : Math.min(size, Math.max(lever.probe / 2, 1.2 * Math.abs(f.roll / s)));
+    step =
+      s * f.roll * dirn > 0 || s === 0
+        ? step * 1.6
+        : Math.min(size, Math.max(lever.probe / 2, 1.2 * Math.abs(f.roll / s)));
     x1 = x;
     f1 = f;
   }
@@ -233,7 +254,14 @@ function zeroOnLever(run: Run, base: Outcome, lever: Lever, slope: number): Outc
 }
 
 /** Illinois (modified regula falsi) between two lever values whose rolls differ in sign. */
-function illinois(at: (x: number) => Outcome, xa: number, fa: Outcome, xb: number, fb: Outcome, best: Outcome): Outcome {
+function illinois(
+  at: (x: number) => Outcome,
+  xa: number,
+  fa: Outcome,
+  xb: number,
+  fb: Outcome,
+  best: Outcome,
+): Outcome {
   let side = 0;
   let ra = fa.roll;
   let rb = fb.roll;

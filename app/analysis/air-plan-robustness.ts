@@ -19,7 +19,11 @@ export interface SkillSigmas {
 }
 
 /** Defaults: estimates from timing research (engine.md): 60 ms, 35 ms, 15 ms. */
-export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({ novice: 0.06, club: 0.035, expert: 0.015 });
+export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
+  novice: 0.06,
+  club: 0.035,
+  expert: 0.015,
+});
 
 export interface SwitchWindow {
   /** Planned switch time, s after takeoff. */
@@ -47,7 +51,11 @@ export const PROBE_SHIFTS: readonly number[] = [-0.15, -0.09, -0.045, -0.02, 0, 
  * switch `index` alone moves by `shift` s (the caller keeps it after takeoff). Costs eight
  * simulations per switch.
  */
-export function rollModel(roll0: number, switches: number, rollWithShift: (index: number, shift: number) => number): RollModel {
+export function rollModel(
+  roll0: number,
+  switches: number,
+  rollWithShift: (index: number, shift: number) => number,
+): RollModel {
   const change: number[][] = [];
   for (let i = 0; i < switches; i++) {
     change.push(PROBE_SHIFTS.map((s) => (s === 0 ? 0 : rollWithShift(i, s) - roll0)));
@@ -116,14 +124,22 @@ function normals(seed: number, count: number): Float64Array {
  * timing error of the skill level's sigma. Seeded: the same inputs give the same rates. Each
  * level uses its own stream (seed, seed + 1, seed + 2).
  */
-export function successRates(model: RollModel, tolerance: number, sigmas: SkillSigmas, seed: number, samples = 4000): SkillSigmas {
+export function successRates(
+  model: RollModel,
+  tolerance: number,
+  sigmas: SkillSigmas,
+  seed: number,
+  samples = 4000,
+): SkillSigmas {
   const n = model.change.length;
   // Each switch's curve resampled every millisecond, so a sample costs one lookup.
   const first = model.shifts[0];
   const span = model.shifts[model.shifts.length - 1] - first;
   const cells = Math.round(span * 1000);
   const table = new Float64Array(n * (cells + 1));
-  for (let i = 0; i < n; i++) for (let c = 0; c <= cells; c++) table[i * (cells + 1) + c] = changeAt(model, i, first + (c * span) / cells);
+  for (let i = 0; i < n; i++)
+    for (let c = 0; c <= cells; c++)
+      table[i * (cells + 1) + c] = changeAt(model, i, first + (c * span) / cells);
   const rate = (sigma: number, levelSeed: number) => {
     const z = normals(levelSeed, samples * n);
     const scale = (sigma * cells) / span;

@@ -42,7 +42,11 @@ export interface SearchOptions {
 const MAX_GRID = 40;
 
 /** Linear-guide prediction of roll (out[0]) and yaw (out[1]), rad, for a block plan. */
-export function guideLanding(g: LinearGuide, p: Omit<BlockPlan, "yaw" | "single"> & { single?: boolean }, out: number[]): void {
+export function guideLanding(
+  g: LinearGuide,
+  p: Omit<BlockPlan, "yaw" | "single"> & { single?: boolean },
+  out: number[],
+): void {
   const ca = [tableAt(g, g.cumRe, p.a), tableAt(g, g.cumIm, p.a)];
   const cm = [tableAt(g, g.cumRe, p.m), tableAt(g, g.cumIm, p.m)];
   const cb = [tableAt(g, g.cumRe, p.b), tableAt(g, g.cumIm, p.b)];
@@ -53,7 +57,13 @@ export function guideLanding(g: LinearGuide, p: Omit<BlockPlan, "yaw" | "single"
   out[1] = im / g.sqrtIzz;
 }
 
-function successEstimate(g: LinearGuide, edges: number[], jumps: number[], rollMean: number, o: SearchOptions): number {
+function successEstimate(
+  g: LinearGuide,
+  edges: number[],
+  jumps: number[],
+  rollMean: number,
+  o: SearchOptions,
+): number {
   let varSum = 0;
   for (let k = 0; k < edges.length; k++) {
     const s = (jumps[k] * tableAt(g, g.kerRe, edges[k])) / g.sqrtIxx;
@@ -82,7 +92,8 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
   const yz = o.dir * g.sqrtIzz; // yaw of 1 rad toward the turn, in z units
   let bestYaw = 0;
   const yawOf = (i: number, j: number, l: number, out: number[]): number => {
-    const g1r = re[j] - re[i], g1i = im[j] - im[i];
+    const g1r = re[j] - re[i],
+      g1i = im[j] - im[i];
     if (l < 0) {
       // Single block: amount for the capped yaw, roll must stay within half the tolerance.
       if (Math.abs(g1i) < 1e-15) return 0;
@@ -96,7 +107,8 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
       out[2] = ((yaw / perRad) * g1r) / g.sqrtIxx;
       return yaw;
     }
-    const g2r = re[l] - re[j], g2i = im[l] - im[j];
+    const g2r = re[l] - re[j],
+      g2i = im[l] - im[j];
     const det = g1r * g2i - g2r * g1i;
     if (Math.abs(det) < 1e-18) return 0;
     const u1 = (-g2r * yz) / det;
@@ -134,7 +146,15 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
         const score = successEstimate(g, edges, jumps, rollMean, o) - 1e-3 * (Math.abs(u1) + Math.abs(u2));
         if (score > bestScore) {
           bestScore = score;
-          best = { a: grid[i], m: grid[j], b: single ? grid[j] : grid[l], u1, u2: single ? 0 : u2, single, yaw };
+          best = {
+            a: grid[i],
+            m: grid[j],
+            b: single ? grid[j] : grid[l],
+            u1,
+            u2: single ? 0 : u2,
+            single,
+            yaw,
+          };
         }
       }
   return best;

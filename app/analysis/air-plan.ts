@@ -6,8 +6,21 @@
  * amounts, and every number reported comes from a full simulation.
  */
 import { buildLinearGuide } from "./air-plan-linear";
-import { drivenSpinInertia, pitchPulse, pulseTimeline, type PitchPulse, type PulseLimits } from "./air-plan-pulse";
-import { DEFAULT_SKILL_SIGMAS, rollModel, successRates, timingWindows, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
+import {
+  drivenSpinInertia,
+  pitchPulse,
+  pulseTimeline,
+  type PitchPulse,
+  type PulseLimits,
+} from "./air-plan-pulse";
+import {
+  DEFAULT_SKILL_SIGMAS,
+  rollModel,
+  successRates,
+  timingWindows,
+  type SkillSigmas,
+  type SwitchWindow,
+} from "./air-plan-robustness";
 import { searchBlocks, type BlockPlan } from "./air-plan-search";
 import { checkCar, simulateAttitude, type AttitudeCar } from "./attitude";
 import { compileWheel } from "./attitude-inputs";
@@ -37,7 +50,8 @@ export interface AirPlanInput {
   skillSigmas?: SkillSigmas;
 }
 
-export type PlanInfeasibleReason = "no-wheel-spin" | "not-enough-airtime" | "no-useful-yaw" | "cannot-land-flat";
+export type PlanInfeasibleReason =
+  "no-wheel-spin" | "not-enough-airtime" | "no-useful-yaw" | "cannot-land-flat";
 
 export interface AirPlan {
   feasible: boolean;
@@ -76,7 +90,8 @@ function validate(input: AirPlanInput): void {
   checkCar(input.car);
   const pos = (v: number | undefined, name: string, optional = false) => {
     if (optional && v === undefined) return;
-    if (typeof v !== "number" || !Number.isFinite(v) || !(v > 0)) throw new RangeError(`${name} must be a positive finite number`);
+    if (typeof v !== "number" || !Number.isFinite(v) || !(v > 0))
+      throw new RangeError(`${name} must be a positive finite number`);
   };
   pos(input.speed, "speed");
   pos(input.airtime, "airtime");
@@ -84,7 +99,8 @@ function validate(input: AirPlanInput): void {
   pos(input.rollToleranceRad, "rollToleranceRad", true);
   pos(input.maxYawRad, "maxYawRad", true);
   pos(input.turnAngleRad, "turnAngleRad", true);
-  if (input.pitchChangeRad !== undefined && !Number.isFinite(input.pitchChangeRad)) throw new RangeError("pitchChangeRad must be a finite number");
+  if (input.pitchChangeRad !== undefined && !Number.isFinite(input.pitchChangeRad))
+    throw new RangeError("pitchChangeRad must be a finite number");
 }
 
 /**
@@ -133,7 +149,14 @@ export function planAirSetup(input: AirPlanInput): AirPlan {
   const straight = (reason: PlanInfeasibleReason): AirPlan => {
     const r = sim([], base.rearWheelAccel, 0.001);
     const flat = Math.abs(r.rollRad) <= tol ? 1 : 0;
-    return { ...base, reason, yawRad: r.yawRad, pitchRad: r.pitchRad, rollRad: r.rollRad, successRate: { novice: flat, club: flat, expert: flat } };
+    return {
+      ...base,
+      reason,
+      yawRad: r.yawRad,
+      pitchRad: r.pitchRad,
+      rollRad: r.rollRad,
+      successRate: { novice: flat, club: flat, expert: flat },
+    };
   };
   if (!(car.frontWheel.spinInertia > 0) || !(spinMomentum > 0)) return straight("no-wheel-spin");
   if (tLast - t0 < MIN_PHASE) return straight("not-enough-airtime");
@@ -143,13 +166,35 @@ export function planAirSetup(input: AirPlanInput): AirPlan {
   for (let round = 0; round < PULSE_ROUNDS; round++) {
     const accel = pulseTimeline(pulse);
     if (round === 0) {
-      const wheel = compileWheel(accel, speed / car.rearWheel.radius, car.topSpeed ? car.topSpeed / car.rearWheel.radius : Infinity);
+      const wheel = compileWheel(
+        accel,
+        speed / car.rearWheel.radius,
+        car.topSpeed ? car.topSpeed / car.rearWheel.radius : Infinity,
+      );
       const guide = buildLinearGuide(car, speed, T, wheel);
-      plan = searchBlocks(guide, { t0, tLast, lock, dir, yawCap, rollTol: tol, sigma: sigmas.club, minPhase: MIN_PHASE });
+      plan = searchBlocks(guide, {
+        t0,
+        tLast,
+        lock,
+        dir,
+        yawCap,
+        rollTol: tol,
+        sigma: sigmas.club,
+        minPhase: MIN_PHASE,
+      });
       if (!plan) return straight("no-useful-yaw");
     }
     // Later rounds only re-flatten the roll after the pulse changed.
-    const options = { dir, lock, rate, t0, tLast: T - STRAIGHT_BEFORE_TOUCHDOWN, yawCap, minPhase: MIN_PHASE, scaleRounds: round === 0 ? 4 : 0 };
+    const options = {
+      dir,
+      lock,
+      rate,
+      t0,
+      tLast: T - STRAIGHT_BEFORE_TOUCHDOWN,
+      yawCap,
+      minPhase: MIN_PHASE,
+      scaleRounds: round === 0 ? 4 : 0,
+    };
     const next = refineAmounts(sim, plan!, accel, options);
     if (!next) {
       if (round === 0) return straight("no-useful-yaw");
@@ -171,7 +216,9 @@ export function planAirSetup(input: AirPlanInput): AirPlan {
 
   const switchTimes = steering.map(([t]) => t);
   const rollWithShift = (index: number, shift: number) => {
-    const moved = steering.map(([t, v], i) => [Math.max(0, i === index ? t + shift : t), v] as [number, number]);
+    const moved = steering.map(
+      ([t, v], i) => [Math.max(0, i === index ? t + shift : t), v] as [number, number],
+    );
     moved.sort((x, y) => x[0] - y[0]);
     return sim(moved, accel).rollRad;
   };
@@ -196,5 +243,7 @@ export function planAirSetup(input: AirPlanInput): AirPlan {
 
 /** Pitch change the pulse was sized for (rad), from its length: (J a d / Iyy)(T - start - d/2). */
 function pulseSupplied(car: AttitudeCar, T: number, p: PitchPulse): number {
-  return ((drivenSpinInertia(car) * p.wheelAccel * p.duration) / car.inertia[1]) * (T - p.start - p.duration / 2);
+  return (
+    ((drivenSpinInertia(car) * p.wheelAccel * p.duration) / car.inertia[1]) * (T - p.start - p.duration / 2)
+  );
 }

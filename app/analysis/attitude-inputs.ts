@@ -47,9 +47,11 @@ function pushKnot(knots: number[][], t: number, v: number, s: number): void {
 export function checkTimeline(timeline: readonly TimedValue[], name: string): void {
   for (let i = 0; i < timeline.length; i++) {
     const [t, v] = timeline[i];
-    if (!Number.isFinite(t) || !Number.isFinite(v)) throw new RangeError(`${name}[${i}] must hold two finite numbers`);
+    if (!Number.isFinite(t) || !Number.isFinite(v))
+      throw new RangeError(`${name}[${i}] must hold two finite numbers`);
     if (t < 0) throw new RangeError(`${name}[${i}] time must be 0 or later`);
-    if (i > 0 && t < timeline[i - 1][0]) throw new RangeError(`${name}[${i}] time must not be earlier than the entry before`);
+    if (i > 0 && t < timeline[i - 1][0])
+      throw new RangeError(`${name}[${i}] time must not be earlier than the entry before`);
   }
 }
 
@@ -62,14 +64,11 @@ export function checkTimeline(timeline: readonly TimedValue[], name: string): vo
  */
 export function compileServo(targets: readonly TimedValue[], rate: number, lock: number): PiecewiseLinear {
   const knots: number[][] = [[0, 0, 0]];
-  let angle = 0;
-  let time = 0;
   for (let i = 0; i < targets.length; i++) {
-    const [t0, raw] = targets[i];
+    const [time, raw] = targets[i];
     const target = Math.max(-lock, Math.min(lock, raw));
-    // Advance the previous segment to t0.
-    angle = valueAt(knots, t0);
-    time = t0;
+    // Where the previous segment has brought the wheels by now.
+    const angle = valueAt(knots, time);
     const tNext = i + 1 < targets.length ? targets[i + 1][0] : Infinity;
     const gap = target - angle;
     if (Math.abs(gap) < 1e-15) {
@@ -127,7 +126,8 @@ export function evaluate(pl: PiecewiseLinear, t: number): number {
  */
 export function kinkTimes(end: number, ...fns: PiecewiseLinear[]): Float64Array {
   const all: number[] = [];
-  for (const f of fns) for (let k = 0; k < f.n; k++) if (f.t[k] > 1e-12 && f.t[k] < end - 1e-12) all.push(f.t[k]);
+  for (const f of fns)
+    for (let k = 0; k < f.n; k++) if (f.t[k] > 1e-12 && f.t[k] < end - 1e-12) all.push(f.t[k]);
   all.sort((a, b) => a - b);
   const out: number[] = [];
   for (const t of all) if (out.length === 0 || t - out[out.length - 1] > 1e-9) out.push(t);

@@ -24,7 +24,16 @@ export function makeSeries(n: number): AttitudeSeries {
 }
 
 /** Writes sample i (time t s, state y, inputs at pieces js, jr); returns the next index. */
-export function record(s: AttitudeSeries, i: number, t: number, y: Float64Array, servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, jr: number): number {
+export function record(
+  s: AttitudeSeries,
+  i: number,
+  t: number,
+  y: Float64Array,
+  servo: PiecewiseLinear,
+  rear: PiecewiseLinear,
+  js: number,
+  jr: number,
+): number {
   if (i >= s.t.length) return i;
   quatToYawThetaRoll(y[0], y[1], y[2], y[3], EUL);
   s.t[i] = t;

@@ -10,7 +10,14 @@
  * Integrator: fixed-step RK4 (1 ms default) with steps ending exactly on every kink of the
  * inputs, and the quaternion renormalised after each step. The inner loop allocates nothing.
  */
-import { compileServo, compileWheel, checkTimeline, kinkTimes, type PiecewiseLinear, type TimedValue } from "./attitude-inputs";
+import {
+  compileServo,
+  compileWheel,
+  checkTimeline,
+  kinkTimes,
+  type PiecewiseLinear,
+  type TimedValue,
+} from "./attitude-inputs";
 import { makeSeries, record, trimSeries, type AttitudeSeries } from "./attitude-series";
 import { quatToYawThetaRoll } from "./vec";
 
@@ -99,7 +106,11 @@ let heldSin = 0;
 /** Writes h and dh/dt at time ARG[1] (inside pieces js, jr) to EX[o..o+5]. */
 function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, jr: number, o: number): void {
   const tt = ARG[1];
-  const kf = C[0], kr = C[1], cc = C[2], sc = C[3], frontRatio = C[4];
+  const kf = C[0],
+    kr = C[1],
+    cc = C[2],
+    sc = C[3],
+    frontRatio = C[4];
   const sdot = servo.s[js];
   const delta = servo.v[js] + sdot * (tt - servo.t[js]);
   let cd: number, sd: number;
@@ -120,7 +131,9 @@ function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, j
   const w = rear.v[jr] + wdot * (tt - rear.t[jr]);
   const wf = frontRatio > 0 ? w * frontRatio : C[5];
   const wfdot = frontRatio > 0 ? wdot * frontRatio : 0;
-  const ax = -cc * sd, ay = cd, az = -sc * sd;
+  const ax = -cc * sd,
+    ay = cd,
+    az = -sc * sd;
   EX[o] = kf * wf * ax;
   EX[o + 1] = kr * w + kf * wf * ay;
   EX[o + 2] = kf * wf * az;
@@ -136,11 +149,21 @@ function fillInputs(servo: PiecewiseLinear, rear: PiecewiseLinear, js: number, j
  */
 function rk4Step(oMid: number, oEnd: number): void {
   const h = ARG[0];
-  const ixx = C[9], iyy = C[10], izz = C[11];
-  const q0 = Y[0], q1 = Y[1], q2 = Y[2], q3 = Y[3], wx = Y[4], wy = Y[5], wz = Y[6];
+  const ixx = C[9],
+    iyy = C[10],
+    izz = C[11];
+  const q0 = Y[0],
+    q1 = Y[1],
+    q2 = Y[2],
+    q3 = Y[3],
+    wx = Y[4],
+    wy = Y[5],
+    wz = Y[6];
   const hh = 0.5 * h;
   // Stage 1
-  let lx = ixx * wx + EX[0], ly = iyy * wy + EX[1], lz = izz * wz + EX[2];
+  let lx = ixx * wx + EX[0],
+    ly = iyy * wy + EX[1],
+    lz = izz * wz + EX[2];
   const a0 = 0.5 * (-q1 * wx - q2 * wy - q3 * wz);
   const a1 = 0.5 * (q0 * wx + q2 * wz - q3 * wy);
   const a2 = 0.5 * (q0 * wy - q1 * wz + q3 * wx);
@@ -149,8 +172,13 @@ function rk4Step(oMid: number, oEnd: number): void {
   const a5 = (-(wz * lx - wx * lz) - EX[4]) / iyy;
   const a6 = (-(wx * ly - wy * lx) - EX[5]) / izz;
   // Stage 2
-  let p0 = q0 + hh * a0, p1 = q1 + hh * a1, p2 = q2 + hh * a2, p3 = q3 + hh * a3;
-  let ux = wx + hh * a4, uy = wy + hh * a5, uz = wz + hh * a6;
+  let p0 = q0 + hh * a0,
+    p1 = q1 + hh * a1,
+    p2 = q2 + hh * a2,
+    p3 = q3 + hh * a3;
+  let ux = wx + hh * a4,
+    uy = wy + hh * a5,
+    uz = wz + hh * a6;
   lx = ixx * ux + EX[oMid];
   ly = iyy * uy + EX[oMid + 1];
   lz = izz * uz + EX[oMid + 2];
@@ -220,7 +248,11 @@ function rk4Step(oMid: number, oEnd: number): void {
  * @returns yaw, pitch, roll at the end (rad, engine.md sign conventions) and the world-frame
  *   angular momentum drift; with `seriesEvery`, a time series for plotting.
  */
-export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options: AttitudeOptions = {}): AttitudeResult {
+export function simulateAttitude(
+  car: AttitudeCar,
+  input: AttitudeInput,
+  options: AttitudeOptions = {},
+): AttitudeResult {
   const setup = prepare(car, input);
   const { servo, rear, frontRatio, frontW0 } = setup;
   const [ixx, iyy, izz] = car.inertia;
@@ -274,7 +306,9 @@ export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options
   let constJr = -1;
   let lastEnd = 0;
   const h0 = worldMomentum(Y, EX, ixx, iyy, izz);
-  const hx0 = h0[0], hy0 = h0[1], hz0 = h0[2];
+  const hx0 = h0[0],
+    hy0 = h0[1],
+    hz0 = h0[2];
   if (series) sample = record(series, sample, 0, Y, servo, rear, js, jr);
 
   while (t < T - 1e-12) {
@@ -341,7 +375,8 @@ export function simulateAttitude(car: AttitudeCar, input: AttitudeInput, options
 function prepare(car: AttitudeCar, input: AttitudeInput) {
   checkCar(car);
   const num = (v: number, name: string, positive = false) => {
-    if (!Number.isFinite(v) || (positive && !(v > 0)) || v < 0) throw new RangeError(`${name} must be a ${positive ? "positive" : "non-negative"} finite number`);
+    if (!Number.isFinite(v) || (positive && !(v > 0)) || v < 0)
+      throw new RangeError(`${name} must be a ${positive ? "positive" : "non-negative"} finite number`);
   };
   num(input.speed, "speed");
   num(input.duration, "duration");
@@ -379,19 +414,30 @@ export function checkCar(car: AttitudeCar): void {
   car.inertia.forEach((v, i) => pos(v, `inertia[${i}]`));
   pos(car.frontWheel?.radius, "frontWheel.radius");
   pos(car.rearWheel?.radius, "rearWheel.radius");
-  if (!(car.frontWheel.spinInertia >= 0)) throw new RangeError("car.frontWheel.spinInertia must be 0 or more");
+  if (!(car.frontWheel.spinInertia >= 0))
+    throw new RangeError("car.frontWheel.spinInertia must be 0 or more");
   if (!(car.rearWheel.spinInertia >= 0)) throw new RangeError("car.rearWheel.spinInertia must be 0 or more");
-  if (!Number.isFinite(car.casterRad) || Math.abs(car.casterRad) >= Math.PI / 2) throw new RangeError("car.caster must be within (-90, 90) deg");
+  if (!Number.isFinite(car.casterRad) || Math.abs(car.casterRad) >= Math.PI / 2)
+    throw new RangeError("car.caster must be within (-90, 90) deg");
   pos(car.steeringLockRad, "steeringLock");
   pos(car.servoSecondsPer60, "servoSecondsPer60");
 }
 
 /** World-frame angular momentum R (I w + h) from state y and input terms ex[0..2]. */
-function worldMomentum(y: Float64Array, ex: Float64Array, ixx: number, iyy: number, izz: number): [number, number, number] {
+function worldMomentum(
+  y: Float64Array,
+  ex: Float64Array,
+  ixx: number,
+  iyy: number,
+  izz: number,
+): [number, number, number] {
   const lx = ixx * y[4] + ex[0];
   const ly = iyy * y[5] + ex[1];
   const lz = izz * y[6] + ex[2];
-  const w = y[0], x = y[1], yy = y[2], z = y[3];
+  const w = y[0],
+    x = y[1],
+    yy = y[2],
+    z = y[3];
   return [
     (1 - 2 * (yy * yy + z * z)) * lx + 2 * (x * yy - w * z) * ly + 2 * (x * z + w * yy) * lz,
     2 * (x * yy + w * z) * lx + (1 - 2 * (x * x + z * z)) * ly + 2 * (yy * z - w * x) * lz,

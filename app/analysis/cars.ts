@@ -90,7 +90,13 @@ export function estimateInertia(m: MassModel): [number, number, number] {
 
 const DEG = Math.PI / 180;
 
-interface PresetSpec extends MassModel, Omit<CarParams, "inertia" | "frontWheel" | "rearWheel" | "estimate" | "notes" | "casterRad" | "steeringLockRad"> {
+interface PresetSpec
+  extends
+    MassModel,
+    Omit<
+      CarParams,
+      "inertia" | "frontWheel" | "rearWheel" | "estimate" | "notes" | "casterRad" | "steeringLockRad"
+    > {
   casterDeg: number;
   steeringLockDeg: number;
   why: string;

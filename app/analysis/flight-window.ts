@@ -36,7 +36,13 @@ function landingX(input: JumpSpeedInput, speed: number): number {
  * when `strict`), scanning upward in 0.5 m/s steps and then closing in with the Illinois method
  * (regula falsi that halves a stale end) to 1e-9 m/s. Null when no scanned speed qualifies.
  */
-function firstSpeedReaching(input: JumpSpeedInput, target: number, lo: number, hi: number, strict: boolean): number | null {
+function firstSpeedReaching(
+  input: JumpSpeedInput,
+  target: number,
+  lo: number,
+  hi: number,
+  strict: boolean,
+): number | null {
   const gap = (v: number) => landingX(input, v) - target;
   const reaches = (g: number) => (strict ? g > 0 : g >= 0);
   let g0 = gap(lo);
@@ -53,7 +59,14 @@ function firstSpeedReaching(input: JumpSpeedInput, target: number, lo: number, h
 }
 
 /** Illinois iterations on a bracket [a, b] with `reaches` false at a and true at b; returns b. */
-function closeIn(gap: (v: number) => number, reaches: (g: number) => boolean, a: number, ga: number, b: number, gb: number): number {
+function closeIn(
+  gap: (v: number) => number,
+  reaches: (g: number) => boolean,
+  a: number,
+  ga: number,
+  b: number,
+  gb: number,
+): number {
   let side = 0;
   for (let k = 0; k < 200 && b - a > TOLERANCE; k++) {
     let m = b - (gb * (b - a)) / (gb - ga);

@@ -91,7 +91,12 @@ const DEFAULT_G = 9.81;
  * @param surfaceSlopeRad ground slope, rad
  * @param g gravity, m/s^2
  */
-export function equivalentFallHeight(speed: number, flightPathRad: number, surfaceSlopeRad: number, g = DEFAULT_G): number {
+export function equivalentFallHeight(
+  speed: number,
+  flightPathRad: number,
+  surfaceSlopeRad: number,
+  g = DEFAULT_G,
+): number {
   const vn = speed * Math.sin(flightPathRad - surfaceSlopeRad);
   return (vn * vn) / (2 * g);
 }
@@ -121,13 +126,15 @@ function checkInput(input: FlightInput): number {
   assertFinite(g, "g");
   if (!(input.speed > 0)) throw new RangeError("speed must be above 0");
   if (!(g > 0)) throw new RangeError("g must be above 0");
-  if (Math.abs(input.faceAngleRad) >= Math.PI / 2) throw new RangeError("faceAngleRad must be within (-90, 90) deg");
+  if (Math.abs(input.faceAngleRad) >= Math.PI / 2)
+    throw new RangeError("faceAngleRad must be within (-90, 90) deg");
   const s = input.surface;
   if (s.length < 2) throw new RangeError("surface needs at least 2 points");
   for (let i = 0; i < s.length; i++) {
     assertFinite(s[i].x, `surface[${i}].x`);
     assertFinite(s[i].z, `surface[${i}].z`);
-    if (i > 0 && !(s[i].x > s[i - 1].x)) throw new RangeError(`surface[${i}].x must be greater than the point before`);
+    if (i > 0 && !(s[i].x > s[i - 1].x))
+      throw new RangeError(`surface[${i}].x must be greater than the point before`);
   }
   const at = groundAt(s, input.lip.x);
   if (input.lip.z < at.z - 1e-6) throw new RangeError("lip lies below the surface");

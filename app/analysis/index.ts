@@ -41,11 +41,23 @@
 export * from "./flight";
 export * from "./flight-window";
 export * from "./attitude";
-export { compileServo, compileWheel, evaluate, type PiecewiseLinear, type TimedValue } from "./attitude-inputs";
+export {
+  compileServo,
+  compileWheel,
+  evaluate,
+  type PiecewiseLinear,
+  type TimedValue,
+} from "./attitude-inputs";
 export * from "./air-plan";
 export { nutationPeriod } from "./air-plan-linear";
 export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
-export { pitchPulse, drivenSpinInertia, type PitchPulse, type PulseKind, type PulseLimits } from "./air-plan-pulse";
+export {
+  pitchPulse,
+  drivenSpinInertia,
+  type PitchPulse,
+  type PulseKind,
+  type PulseLimits,
+} from "./air-plan-pulse";
 export * from "./verdict";
 export * from "./cars";
 export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./vec";

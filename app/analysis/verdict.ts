@@ -20,7 +20,11 @@ export const DEFAULT_GAIN_FLOOR_S = 0.02;
  * @param distanceToTurn from touchdown to the start of the next turn, m (Infinity for none)
  * @param landingSpeed m/s
  */
-export function landsIntoTurn(distanceToTurn: number, landingSpeed: number, lookaheadS = DEFAULT_TURN_LOOKAHEAD_S): boolean {
+export function landsIntoTurn(
+  distanceToTurn: number,
+  landingSpeed: number,
+  lookaheadS = DEFAULT_TURN_LOOKAHEAD_S,
+): boolean {
   return distanceToTurn >= 0 && distanceToTurn <= landingSpeed * lookaheadS;
 }
 
@@ -92,16 +96,34 @@ export function jumpVerdict(input: JumpVerdictInput): JumpVerdict {
   const minAir = input.minAirtime ?? DEFAULT_MIN_AIRTIME_S;
   const floor = input.gainFloor ?? DEFAULT_GAIN_FLOOR_S;
   const gain = `${input.expectedGain >= 0 ? "+" : ""}${input.expectedGain.toFixed(2)} s`;
-  const straight = (reason: StraightReason, text: string): JumpVerdict => ({ verdict: "straight", reason, text });
-  if (!input.landsIntoTurn) return straight("no-turn", "Take it straight: no turn starts close enough to the landing.");
+  const straight = (reason: StraightReason, text: string): JumpVerdict => ({
+    verdict: "straight",
+    reason,
+    text,
+  });
+  if (!input.landsIntoTurn)
+    return straight("no-turn", "Take it straight: no turn starts close enough to the landing.");
   if (Math.abs(input.turnAngle) < minTurn) {
-    return straight("turn-too-gentle", "Take it straight: the turn after the landing is too gentle to gain anything.");
+    return straight(
+      "turn-too-gentle",
+      "Take it straight: the turn after the landing is too gentle to gain anything.",
+    );
   }
   if (input.airtime < minAir || input.planFeasible === false) {
-    return straight("not-enough-airtime", "Take it straight: the car is not in the air long enough to turn it.");
+    return straight(
+      "not-enough-airtime",
+      "Take it straight: the car is not in the air long enough to turn it.",
+    );
   }
   if (!(input.expectedGain > floor)) {
-    return straight("too-risky", `Take it straight: at this skill level a set-up costs more than it saves (expected ${gain} a lap).`);
+    return straight(
+      "too-risky",
+      `Take it straight: at this skill level a set-up costs more than it saves (expected ${gain} a lap).`,
+    );
   }
-  return { verdict: "set-up", reason: null, text: `Set the car up in the air for the turn (expected ${gain} a lap).` };
+  return {
+    verdict: "set-up",
+    reason: null,
+    text: `Set the car up in the air for the turn (expected ${gain} a lap).`,
+  };
 }

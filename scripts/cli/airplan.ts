@@ -13,7 +13,8 @@ import { carRefSchema, resolveCar } from "~/lib/car-schema";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });
-const angle = (what: string, max: number) => num(what).positive(`${what} must be above 0`).max(max, `${what} must be at most ${max}`);
+const angle = (what: string, max: number) =>
+  num(what).positive(`${what} must be above 0`).max(max, `${what} must be at most ${max}`);
 
 export const airplanInputSchema = z.object({
   car: carRefSchema,
@@ -23,7 +24,10 @@ export const airplanInputSchema = z.object({
   rollToleranceDeg: angle("rollToleranceDeg", 45).optional(),
   turnAngleDeg: angle("turnAngleDeg", 360).optional(),
   maxYawDeg: angle("maxYawDeg", 45).optional(),
-  pitchChangeDeg: num("pitchChangeDeg").min(-180, "pitchChangeDeg must be at least -180").max(180, "pitchChangeDeg must be at most 180").optional(),
+  pitchChangeDeg: num("pitchChangeDeg")
+    .min(-180, "pitchChangeDeg must be at least -180")
+    .max(180, "pitchChangeDeg must be at most 180")
+    .optional(),
   seed: z.number({ error: "seed must be a whole number" }).int("seed must be a whole number").optional(),
 });
 

@@ -12,9 +12,14 @@ import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });
 const timeline = (what: string) =>
-  z.array(z.tuple([num("t").min(0, "t must be 0 or later"), num(what)], { error: `each entry must be [t, ${what}]` }), {
-    error: `must be a list of [t, ${what}] entries`,
-  });
+  z.array(
+    z.tuple([num("t").min(0, "t must be 0 or later"), num(what)], {
+      error: `each entry must be [t, ${what}]`,
+    }),
+    {
+      error: `must be a list of [t, ${what}] entries`,
+    },
+  );
 
 export const attitudeInputSchema = z.object({
   car: carRefSchema,
@@ -22,7 +27,9 @@ export const attitudeInputSchema = z.object({
   duration: num("duration").positive("duration must be above 0").max(10, "duration must be at most 10 s"),
   steering: timeline("targetDeg"),
   rearWheelAccel: timeline("rad/s^2").optional(),
-  initialRates: z.tuple([num("wx"), num("wy"), num("wz")], { error: "initialRates must be [wx, wy, wz] in rad/s" }).optional(),
+  initialRates: z
+    .tuple([num("wx"), num("wy"), num("wz")], { error: "initialRates must be [wx, wy, wz] in rad/s" })
+    .optional(),
   initialPitchDeg: num("initialPitchDeg").optional(),
   dt: num("dt").positive("dt must be above 0").max(0.01, "dt must be at most 0.01 s").optional(),
 });

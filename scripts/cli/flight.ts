@@ -13,9 +13,13 @@ const point = z.tuple([num("x"), num("z")], { error: "must be [x, z] in metres" 
 
 export const flightInputSchema = z.object({
   speed: num("speed").positive("speed must be above 0"),
-  faceAngleDeg: num("faceAngleDeg").gt(-90, "faceAngleDeg must be above -90").lt(90, "faceAngleDeg must be below 90"),
+  faceAngleDeg: num("faceAngleDeg")
+    .gt(-90, "faceAngleDeg must be above -90")
+    .lt(90, "faceAngleDeg must be below 90"),
   lip: point,
-  surface: z.array(point, { error: "surface must be a list of [x, z] points" }).min(2, "surface needs at least 2 points"),
+  surface: z
+    .array(point, { error: "surface must be a list of [x, z] points" })
+    .min(2, "surface needs at least 2 points"),
   g: num("g").positive("g must be above 0").optional(),
   drag: z
     .object({

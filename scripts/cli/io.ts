@@ -28,7 +28,10 @@ export function readInput(file: string): string {
   try {
     return readFileSync(file === "-" ? 0 : file, "utf8");
   } catch (error) {
-    throw new InputError("FILE", `cannot read ${file === "-" ? "standard input" : file} (${(error as Error).message})`);
+    throw new InputError(
+      "FILE",
+      `cannot read ${file === "-" ? "standard input" : file} (${(error as Error).message})`,
+    );
   }
 }
 
@@ -62,7 +65,12 @@ export function parseWith<S extends z.ZodType>(schema: S, input: unknown): z.inf
  * Runs `command` on FILE and prints its JSON output. Returns the exit code: 0 on success, 2 for
  * bad input (message on stderr, nothing on stdout), 1 for anything else.
  */
-export function runCommand(command: CliCommand, file: string | undefined, out = process.stdout, err = process.stderr): number {
+export function runCommand(
+  command: CliCommand,
+  file: string | undefined,
+  out = process.stdout,
+  err = process.stderr,
+): number {
   try {
     if (!file) throw new InputError("FILE", "give a JSON file, or - for standard input");
     const output = command.run(parseJson(readInput(file)));

@@ -9,41 +9,52 @@ const rad = (d: number) => (d * Math.PI) / 180;
 const deg = (r: number) => (r * 180) / Math.PI;
 
 describe("mid-air set-up plan", () => {
-  it.each(CAR_PRESET_IDS)("%s: replayed through the attitude model, the plan gives the landing it reports", (id) => {
-    const car = CAR_PRESETS[id];
-    const plan = planAirSetup({ car, speed: 11, airtime: 0.7, turn: "right", pitchChangeRad: rad(-25) });
-    expect(plan.feasible).toBe(true);
-    const replay = simulateAttitude(car, { speed: 11, duration: 0.7, steering: plan.steering, rearWheelAccel: plan.rearWheelAccel });
-    expect(replay.yawRad).toBeCloseTo(plan.yawRad, 12);
-    expect(replay.pitchRad).toBeCloseTo(plan.pitchRad, 12);
-    expect(replay.rollRad).toBeCloseTo(plan.rollRad, 12);
-    // It lands flat, nose toward the turn, and the pulse brings the pitch round.
-    expect(Math.abs(plan.rollRad)).toBeLessThanOrEqual(plan.rollToleranceRad);
-    expect(deg(plan.yawRad)).toBeLessThan(-5);
-    expect(deg(plan.yawRad)).toBeGreaterThan(-45.25);
-    expect(plan.pitchPulse.kind).toBe("brake");
-    expect(Math.abs(deg(plan.pitchRad) + 25)).toBeLessThan(0.6);
-    // Wheels straight again before touchdown.
-    const last = plan.steering[plan.steering.length - 1];
-    expect(last[1]).toBe(0);
-    expect(last[0] + 0.5 / ((Math.PI / 3) / car.servoSecondsPer60)).toBeLessThan(0.7);
-  });
+  it.each(CAR_PRESET_IDS)(
+    "%s: replayed through the attitude model, the plan gives the landing it reports",
+    (id) => {
+      const car = CAR_PRESETS[id];
+      const plan = planAirSetup({ car, speed: 11, airtime: 0.7, turn: "right", pitchChangeRad: rad(-25) });
+      expect(plan.feasible).toBe(true);
+      const replay = simulateAttitude(car, {
+        speed: 11,
+        duration: 0.7,
+        steering: plan.steering,
+        rearWheelAccel: plan.rearWheelAccel,
+      });
+      expect(replay.yawRad).toBeCloseTo(plan.yawRad, 12);
+      expect(replay.pitchRad).toBeCloseTo(plan.pitchRad, 12);
+      expect(replay.rollRad).toBeCloseTo(plan.rollRad, 12);
+      // It lands flat, nose toward the turn, and the pulse brings the pitch round.
+      expect(Math.abs(plan.rollRad)).toBeLessThanOrEqual(plan.rollToleranceRad);
+      expect(deg(plan.yawRad)).toBeLessThan(-5);
+      expect(deg(plan.yawRad)).toBeGreaterThan(-45.25);
+      expect(plan.pitchPulse.kind).toBe("brake");
+      expect(Math.abs(deg(plan.pitchRad) + 25)).toBeLessThan(0.6);
+      // Wheels straight again before touchdown.
+      const last = plan.steering[plan.steering.length - 1];
+      expect(last[1]).toBe(0);
+      expect(last[0] + 0.5 / (Math.PI / 3 / car.servoSecondsPer60)).toBeLessThan(0.7);
+    },
+  );
 
-  it.each(CAR_PRESET_IDS)("%s: a right-hand turn is set up by steering left first (common practice, no source)", (id) => {
-    // Holds in the model for flights shorter than about 0.6 of the wheels' nutation period
-    // (docs/decisions/0103); checked here at 0.45 and 0.55 of it, at two speeds. (Much shorter flights leave
-    // no room for a plan that lands flat: the planner then reports it as not feasible.)
-    const car = CAR_PRESETS[id];
-    for (const speed of [8, 13]) {
-      for (const share of [0.45, 0.55]) {
-        const airtime = share * nutationPeriod(car, speed);
-        const plan = planAirSetup({ car, speed, airtime, turn: "right" });
-        expect(plan.feasible).toBe(true);
-        expect(plan.steering[0][1]).toBeGreaterThan(0);
-        expect(deg(plan.yawRad)).toBeLessThan(-2);
+  it.each(CAR_PRESET_IDS)(
+    "%s: a right-hand turn is set up by steering left first (common practice, no source)",
+    (id) => {
+      // Holds in the model for flights shorter than about 0.6 of the wheels' nutation period
+      // (docs/decisions/0103); checked here at 0.45 and 0.55 of it, at two speeds. (Much shorter flights leave
+      // no room for a plan that lands flat: the planner then reports it as not feasible.)
+      const car = CAR_PRESETS[id];
+      for (const speed of [8, 13]) {
+        for (const share of [0.45, 0.55]) {
+          const airtime = share * nutationPeriod(car, speed);
+          const plan = planAirSetup({ car, speed, airtime, turn: "right" });
+          expect(plan.feasible).toBe(true);
+          expect(plan.steering[0][1]).toBeGreaterThan(0);
+          expect(deg(plan.yawRad)).toBeLessThan(-2);
+        }
       }
-    }
-  });
+    },
+  );
 
   it("a left-hand turn gets the mirror image of the right-hand plan", () => {
     const car = CAR_PRESETS["buggy-2wd-10"];
@@ -59,7 +70,13 @@ describe("mid-air set-up plan", () => {
   });
 
   it("never turns the nose past the turn's angle", () => {
-    const plan = planAirSetup({ car: CAR_PRESETS["sct-10"], speed: 10, airtime: 0.8, turn: "left", turnAngleRad: rad(15) });
+    const plan = planAirSetup({
+      car: CAR_PRESETS["sct-10"],
+      speed: 10,
+      airtime: 0.8,
+      turn: "left",
+      turnAngleRad: rad(15),
+    });
     expect(plan.feasible).toBe(true);
     expect(deg(plan.yawRad)).toBeGreaterThan(10);
     expect(deg(plan.yawRad)).toBeLessThan(15.3);
@@ -70,7 +87,9 @@ describe("mid-air set-up plan", () => {
     const input = { car, speed: 10, airtime: 0.6, turn: "right" as const };
     const plan = planAirSetup(input);
     const rollAt = (i: number, shift: number) => {
-      const steering = plan.steering.map(([t, a], k) => [Math.max(0, k === i ? t + shift : t), a] as [number, number]);
+      const steering = plan.steering.map(
+        ([t, a], k) => [Math.max(0, k === i ? t + shift : t), a] as [number, number],
+      );
       steering.sort((x, y) => x[0] - y[0]);
       return deg(simulateAttitude(car, { speed: 10, duration: 0.6, steering }).rollRad);
     };
@@ -95,9 +114,17 @@ describe("mid-air set-up plan", () => {
       let ok = 0;
       const n = 400;
       for (let k = 0; k < n; k++) {
-        const steering = plan.steering.map(([t, a]) => [Math.max(0, t + sigmas[level] * z()), a] as [number, number]);
+        const steering = plan.steering.map(
+          ([t, a]) => [Math.max(0, t + sigmas[level] * z()), a] as [number, number],
+        );
         steering.sort((x, y) => x[0] - y[0]);
-        const r = simulateAttitude(car, { speed: 10, duration: 0.8, steering, rearWheelAccel: plan.rearWheelAccel, dt: 0.002 });
+        const r = simulateAttitude(car, {
+          speed: 10,
+          duration: 0.8,
+          steering,
+          rearWheelAccel: plan.rearWheelAccel,
+          dt: 0.002,
+        });
         if (Math.abs(r.rollRad) <= plan.rollToleranceRad) ok++;
       }
       expect(Math.abs(plan.successRate[level] - ok / n)).toBeLessThan(0.07);
@@ -117,7 +144,12 @@ describe("mid-air set-up plan", () => {
     expect(short.feasible).toBe(false);
     expect(short.reason).toBe("not-enough-airtime");
     expect(short.steering).toEqual([]);
-    const still = planAirSetup({ car: { ...car, frontWheel: { ...car.frontWheel, spinInertia: 0 } }, speed: 10, airtime: 0.8, turn: "right" });
+    const still = planAirSetup({
+      car: { ...car, frontWheel: { ...car.frontWheel, spinInertia: 0 } },
+      speed: 10,
+      airtime: 0.8,
+      turn: "right",
+    });
     expect(still.reason).toBe("no-wheel-spin");
     expect(() => planAirSetup({ car, speed: 10, airtime: -1, turn: "right" })).toThrow(/airtime/);
     expect(() => planAirSetup({ car, speed: 10, airtime: 1, turn: "up" as "left" })).toThrow(/turn/);

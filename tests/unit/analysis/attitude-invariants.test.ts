@@ -27,12 +27,15 @@ const aggressive = {
 };
 
 describe("invariants of the gyrostat model", () => {
-  it.each(CAR_PRESET_IDS)("%s: world angular momentum drifts less than 1e-6 over 1 s of aggressive inputs", (id) => {
-    // Conservation of angular momentum with no external torque (engine.md section 4)
-    const r = simulateAttitude(CAR_PRESETS[id], aggressive);
-    expect(r.angularMomentumDrift).toBeLessThan(1e-6);
-    expect(Math.abs(deg(r.rollRad)) + Math.abs(deg(r.yawRad))).toBeGreaterThan(5);
-  });
+  it.each(CAR_PRESET_IDS)(
+    "%s: world angular momentum drifts less than 1e-6 over 1 s of aggressive inputs",
+    (id) => {
+      // Conservation of angular momentum with no external torque (engine.md section 4)
+      const r = simulateAttitude(CAR_PRESETS[id], aggressive);
+      expect(r.angularMomentumDrift).toBeLessThan(1e-6);
+      expect(Math.abs(deg(r.rollRad)) + Math.abs(deg(r.yawRad))).toBeGreaterThan(5);
+    },
+  );
 
   it("with no input the gyrostat energy 1/2 w.I.w is conserved", () => {
     // Euler's equations with constant rotor momentum conserve 1/2 w.I.w (gyrostat energy integral)
@@ -90,25 +93,53 @@ describe("invariants of the gyrostat model", () => {
   it("refuses bad input, naming the field", () => {
     const car = CAR_PRESETS["buggy-2wd-10"];
     expect(() => simulateAttitude(car, { speed: -1, duration: 1 })).toThrow(/speed/);
-    expect(() => simulateAttitude(car, { speed: 5, duration: 1, steering: [[0.5, 0], [0.2, 0]] })).toThrow(/steering\[1\]/);
-    expect(() => simulateAttitude({ ...car, inertia: [0, 1, 1] }, { speed: 5, duration: 1 })).toThrow(/inertia\[0\]/);
+    expect(() =>
+      simulateAttitude(car, {
+        speed: 5,
+        duration: 1,
+        steering: [
+          [0.5, 0],
+          [0.2, 0],
+        ],
+      }),
+    ).toThrow(/steering\[1\]/);
+    expect(() => simulateAttitude({ ...car, inertia: [0, 1, 1] }, { speed: 5, duration: 1 })).toThrow(
+      /inertia\[0\]/,
+    );
   });
 });
 
 describe("behaviours drivers report (common practice, no source)", () => {
   it.each(CAR_PRESET_IDS)("%s: throttle in the air raises the nose, brake drops it", (id) => {
     const car = CAR_PRESETS[id];
-    const throttle = simulateAttitude(car, { speed: 8, duration: 0.6, rearWheelAccel: [[0.05, car.maxWheelAccel], [0.1, 0]] });
-    const brake = simulateAttitude(car, { speed: 8, duration: 0.6, rearWheelAccel: [[0.05, -car.maxWheelBrake], [0.1, 0]] });
+    const throttle = simulateAttitude(car, {
+      speed: 8,
+      duration: 0.6,
+      rearWheelAccel: [
+        [0.05, car.maxWheelAccel],
+        [0.1, 0],
+      ],
+    });
+    const brake = simulateAttitude(car, {
+      speed: 8,
+      duration: 0.6,
+      rearWheelAccel: [
+        [0.05, -car.maxWheelBrake],
+        [0.1, 0],
+      ],
+    });
     expect(deg(throttle.pitchRad)).toBeGreaterThan(5);
     expect(deg(brake.pitchRad)).toBeLessThan(-5);
   });
 
-  it.each(CAR_PRESET_IDS)("%s: steering in the air rolls the car (left steer: right side down first)", (id) => {
-    const car = CAR_PRESETS[id];
-    const r = simulateAttitude(car, { speed: 10, duration: 0.1, steering: [[0, car.steeringLockRad]] });
-    expect(deg(r.rollRad)).toBeGreaterThan(2);
-  });
+  it.each(CAR_PRESET_IDS)(
+    "%s: steering in the air rolls the car (left steer: right side down first)",
+    (id) => {
+      const car = CAR_PRESETS[id];
+      const r = simulateAttitude(car, { speed: 10, duration: 0.1, steering: [[0, car.steeringLockRad]] });
+      expect(deg(r.rollRad)).toBeGreaterThan(2);
+    },
+  );
 
   it.each(CAR_PRESET_IDS)("%s: held steering turns the nose toward the other side", (id) => {
     const car = CAR_PRESETS[id];

@@ -36,7 +36,10 @@ describe("gyroscope precession", () => {
     // OpenStax University Physics Vol. 1 (2016), section 11.4, Example 11.10 (g = 9.8).
     // The disk is the spinning wheel pair of a gyrostat; gravity's torque about the pivot,
     // m g r, acts about the body x axis, perpendicular to the spin axis y.
-    const m = 0.3, R = 0.05, r = 0.05, spin = 20 * 2 * Math.PI;
+    const m = 0.3,
+      R = 0.05,
+      r = 0.05,
+      spin = 20 * 2 * Math.PI;
     const spinInertia = 0.5 * m * R * R;
     const torque = m * 9.8 * r;
     const car: AttitudeCar = {
@@ -106,14 +109,21 @@ describe("agreement with an adaptive reference solver", () => {
       [0.4, 1500],
       [0.5, 0],
     ] as const;
-    const input = { speed: 12, duration: 0.9, steering, rearWheelAccel: accel, initialRates: [0.5, -1, 0.8] as const };
+    const input = {
+      speed: 12,
+      duration: 0.9,
+      steering,
+      rearWheelAccel: accel,
+      initialRates: [0.5, -1, 0.8] as const,
+    };
     const ours = simulateAttitude(car, input);
 
     const rate = Math.PI / 3 / car.servoSecondsPer60;
     const servo = compileServo(steering, rate, car.steeringLockRad);
     const wheel = compileWheel(accel, 12 / car.rearWheel.radius, car.topSpeed / car.rearWheel.radius);
     const [I1, I2, I3] = car.inertia;
-    const kf = 2 * car.frontWheel.spinInertia, kr = 2 * car.rearWheel.spinInertia;
+    const kf = 2 * car.frontWheel.spinInertia,
+      kr = 2 * car.rearWheel.spinInertia;
     const c = car.casterRad;
     const slopeAt = (f: typeof servo, t: number) => {
       let k = 0;
@@ -122,8 +132,10 @@ describe("agreement with an adaptive reference solver", () => {
     };
     const rhs = (t: number, y: number[]) => {
       const [q0, q1, q2, q3, wx, wy, wz] = y;
-      const d = evaluate(servo, t), dd = slopeAt(servo, t);
-      const W = evaluate(wheel, t), Wd = slopeAt(wheel, t);
+      const d = evaluate(servo, t),
+        dd = slopeAt(servo, t);
+      const W = evaluate(wheel, t),
+        Wd = slopeAt(wheel, t);
       const Wf = 12 / car.frontWheel.radius; // 2wd: the front wheels keep their takeoff spin
       const a = [-Math.cos(c) * Math.sin(d), Math.cos(d), -Math.sin(c) * Math.sin(d)];
       const da = [-Math.cos(c) * Math.cos(d) * dd, -Math.sin(d) * dd, -Math.sin(c) * Math.cos(d) * dd];
@@ -158,6 +170,8 @@ describe("agreement with an adaptive reference solver", () => {
     expect(Math.abs(deg(ours.pitchRad + theta))).toBeLessThan(0.01);
     expect(Math.abs(deg(ours.rollRad - roll))).toBeLessThan(0.01);
     // the case is aggressive: the car turns well away from where it started
-    expect(Math.abs(deg(ours.yawRad)) + Math.abs(deg(ours.rollRad)) + Math.abs(deg(ours.pitchRad))).toBeGreaterThan(30);
+    expect(
+      Math.abs(deg(ours.yawRad)) + Math.abs(deg(ours.rollRad)) + Math.abs(deg(ours.pitchRad)),
+    ).toBeGreaterThan(30);
   });
 });

@@ -19,7 +19,8 @@ describe("car class presets", () => {
   it("wheel spin inertia is 0.7 m r^2 and the inertias follow the mass model", () => {
     for (const id of CAR_PRESET_IDS) {
       const car = CAR_PRESETS[id];
-      for (const w of [car.frontWheel, car.rearWheel]) expect(w.spinInertia).toBeCloseTo(wheelSpinInertia(w.massKg, w.radius), 15);
+      for (const w of [car.frontWheel, car.rearWheel])
+        expect(w.spinInertia).toBeCloseTo(wheelSpinInertia(w.massKg, w.radius), 15);
       const [ixx, iyy, izz] = car.inertia;
       // A flat, long car: roll < pitch < yaw, and the perpendicular-axis bound Izz <= Ixx + Iyy
       // holds for a body thinner in z than in x and y.

@@ -11,7 +11,10 @@ describe("speed to land at a point", () => {
       { x: -1, z: 0 },
       { x: 500, z: 0 },
     ];
-    const v = speedToLandAt({ faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface, g: 9.8, maxSpeed: 60 }, 90);
+    const v = speedToLandAt(
+      { faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface, g: 9.8, maxSpeed: 60 },
+      90,
+    );
     expect(v).not.toBeNull();
     expect(v!).toBeCloseTo(31.9, 1);
     expect(v!).toBeCloseTo(Math.sqrt((9.8 * 90) / Math.sin(rad(60))), 5);

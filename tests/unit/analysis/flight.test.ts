@@ -62,7 +62,11 @@ describe("equivalent fall height", () => {
     expect(r.landing.z).toBeCloseTo(-0.2865, 4);
     expect(r.landing.equivalentFallHeight).toBeCloseTo(0.0821, 4);
     expect(deg(r.landing.surfaceSlopeRad)).toBeCloseTo(-25, 9);
-    const viaFormula = equivalentFallHeight(r.landing.speed, r.landing.flightPathRad, r.landing.surfaceSlopeRad);
+    const viaFormula = equivalentFallHeight(
+      r.landing.speed,
+      r.landing.flightPathRad,
+      r.landing.surfaceSlopeRad,
+    );
     expect(r.landing.equivalentFallHeight).toBeCloseTo(viaFormula, 12);
   });
 });
@@ -76,7 +80,12 @@ describe("ground profiles", () => {
     { x: 10, z: 0 },
   ];
   it("a slow car lands short on the table top, a faster one on the landing, a fast one beyond", () => {
-    const base = { faceAngleRad: Math.atan(0.2), lip: { x: 0, z: 0.4 }, surface: tabletop, landingRamp: { start: 3, end: 5 } };
+    const base = {
+      faceAngleRad: Math.atan(0.2),
+      lip: { x: 0, z: 0.4 },
+      surface: tabletop,
+      landingRamp: { start: 3, end: 5 },
+    };
     expect(flyJump({ ...base, speed: 3 }).landedOn).toBe("short");
     expect(flyJump({ ...base, speed: 9 }).landedOn).toBe("ramp");
     const far = flyJump({ ...base, speed: 12 });
@@ -107,12 +116,16 @@ describe("ground profiles", () => {
       { x: 0, z: 0 },
       { x: 1, z: 2 },
     ];
-    expect(() => flyJump({ speed: 5, faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface: steep })).toThrow(/rises/);
+    expect(() => flyJump({ speed: 5, faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface: steep })).toThrow(
+      /rises/,
+    );
     const unordered = [
       { x: 0, z: 0 },
       { x: 0, z: 1 },
     ];
-    expect(() => flyJump({ speed: 5, faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface: unordered })).toThrow(/surface\[1\]\.x/);
+    expect(() =>
+      flyJump({ speed: 5, faceAngleRad: rad(30), lip: { x: 0, z: 0 }, surface: unordered }),
+    ).toThrow(/surface\[1\]\.x/);
   });
 });
 

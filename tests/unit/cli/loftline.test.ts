@@ -10,7 +10,11 @@ const dir = mkdtempSync(join(tmpdir(), "loftline-cli-"));
 const SLOW = { timeout: 60_000 };
 
 /** Runs the real command line as a child process, with `input` written to a file or piped in. */
-function loftline(command: string, input: unknown, viaStdin = false): Promise<{ code: number | null; stdout: string; stderr: string }> {
+function loftline(
+  command: string,
+  input: unknown,
+  viaStdin = false,
+): Promise<{ code: number | null; stdout: string; stderr: string }> {
   const text = typeof input === "string" ? input : JSON.stringify(input);
   let file = "-";
   if (!viaStdin) {
@@ -32,22 +36,56 @@ function loftline(command: string, input: unknown, viaStdin = false): Promise<{ 
 const keys = (o: object) => Object.keys(o).sort();
 
 describe("loftline flight", () => {
-  it("answers the flight contract (check: EFH example from engine.md, after Levy et al. 2015)", SLOW, async () => {
-    const input = { speed: 6, faceAngleDeg: 30, lip: [0, 0], surface: [[0, 0], [3, 0], [10, -7 * Math.tan((25 * Math.PI) / 180)]] };
-    const r = await loftline("flight", input);
-    expect(r.code).toBe(0);
-    const out = JSON.parse(r.stdout);
-    expect(keys(out)).toEqual(["airtime", "apex", "landing"]);
-    expect(keys(out.landing)).toEqual(["equivalentFallHeight", "flightPathDeg", "normalSpeed", "speed", "surfaceSlopeDeg", "x", "z"]);
-    expect(out.airtime).toBeCloseTo(0.6956, 4);
-    expect(out.landing.x).toBeCloseTo(3.6144, 4);
-    expect(out.landing.equivalentFallHeight).toBeCloseTo(0.0821, 4);
-    expect(out.landing.surfaceSlopeDeg).toBeCloseTo(-25, 9);
-    expect(out.apex).toHaveLength(2);
-  });
+  it(
+    "answers the flight contract (check: EFH example from engine.md, after Levy et al. 2015)",
+    SLOW,
+    async () => {
+      const input = {
+        speed: 6,
+        faceAngleDeg: 30,
+        lip: [0, 0],
+        surface: [
+          [0, 0],
+          [3, 0],
+          [10, -7 * Math.tan((25 * Math.PI) / 180)],
+        ],
+      };
+      const r = await loftline("flight", input);
+      expect(r.code).toBe(0);
+      const out = JSON.parse(r.stdout);
+      expect(keys(out)).toEqual(["airtime", "apex", "landing"]);
+      expect(keys(out.landing)).toEqual([
+        "equivalentFallHeight",
+        "flightPathDeg",
+        "normalSpeed",
+        "speed",
+        "surfaceSlopeDeg",
+        "x",
+        "z",
+      ]);
+      expect(out.airtime).toBeCloseTo(0.6956, 4);
+      expect(out.landing.x).toBeCloseTo(3.6144, 4);
+      expect(out.landing.equivalentFallHeight).toBeCloseTo(0.0821, 4);
+      expect(out.landing.surfaceSlopeDeg).toBeCloseTo(-25, 9);
+      expect(out.apex).toHaveLength(2);
+    },
+  );
 
   it("reads standard input for -", SLOW, async () => {
-    const r = await loftline("flight", { speed: 70, faceAngleDeg: 75, lip: [0, 0], surface: [[-1, 0], [2000, 0]], g: 9.8 }, true);
+    const r = await loftline(
+      "flight",
+      {
+        speed: 70,
+        faceAngleDeg: 75,
+        lip: [0, 0],
+        surface: [
+          [-1, 0],
+          [2000, 0],
+        ],
+        g: 9.8,
+      },
+      true,
+    );
     expect(r.code).toBe(0);
     // OpenStax University Physics Vol. 1 (2016), Example 4.7: apex 233 m
     expect(JSON.parse(r.stdout).apex[1]).toBeCloseTo(233, 0);
@@ -55,8 +93,23 @@ describe("loftline flight", () => {
 
   it("bad input: exit 2, nothing on stdout, stderr names the field", SLOW, async () => {
     const [missing, order, broken] = await Promise.all([
-      loftline("flight", { speed: 6, lip: [0, 0], surface: [[0, 0], [3, 0]] }),
-      loftline("flight", { speed: 6, faceAngleDeg: 20, lip: [0, 0], surface: [[0, 0], [-1, 0]] }),
+      loftline("flight", {
+        speed: 6,
+        lip: [0, 0],
+        surface: [
+          [0, 0],
+          [3, 0],
+        ],
+      }),
+      loftline("flight", {
+        speed: 6,
+        faceAngleDeg: 20,
+        lip: [0, 0],
+        surface: [
+          [0, 0],
+          [-1, 0],
+        ],
+      }),
       loftline("flight", "{ not json", true),
     ]);
     expect(missing.code).toBe(2);
@@ -80,7 +133,19 @@ describe("loftline attitude and airplan", () => {
       steeringLockDeg: 32,
       servoSecondsPer60: 0.08,
     };
-    const r = await loftline("attitude", { car, speed: 10, duration: 0.6, steering: [[0.05, 30], [0.3, 0]], rearWheelAccel: [[0.05, -2000], [0.08, 0]] });
+    const r = await loftline("attitude", {
+      car,
+      speed: 10,
+      duration: 0.6,
+      steering: [
+        [0.05, 30],
+        [0.3, 0],
+      ],
+      rearWheelAccel: [
+        [0.05, -2000],
+        [0.08, 0],
+      ],
+    });
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
     expect(keys(out)).toEqual(["angularMomentumDrift", "pitchDeg", "rollDeg", "yawDeg"]);
@@ -89,13 +154,26 @@ describe("loftline attitude and airplan", () => {
   });
 
   it("the airplan output replays through attitude to the landing it reports", SLOW, async () => {
-    const plan = await loftline("airplan", { car: "buggy-4wd-10", speed: 11, airtime: 0.65, turn: "left", pitchChangeDeg: -20 });
+    const plan = await loftline("airplan", {
+      car: "buggy-4wd-10",
+      speed: 11,
+      airtime: 0.65,
+      turn: "left",
+      pitchChangeDeg: -20,
+    });
     expect(plan.code).toBe(0);
     const p = JSON.parse(plan.stdout);
-    for (const k of ["steering", "yawDeg", "pitchDeg", "rollDeg", "timingWindowMs", "successRate"]) expect(p).toHaveProperty(k);
+    for (const k of ["steering", "yawDeg", "pitchDeg", "rollDeg", "timingWindowMs", "successRate"])
+      expect(p).toHaveProperty(k);
     expect(keys(p.successRate)).toEqual(["club", "expert", "novice"]);
     expect(p.yawDeg).toBeGreaterThan(3);
-    const replay = await loftline("attitude", { car: "buggy-4wd-10", speed: 11, duration: 0.65, steering: p.steering, rearWheelAccel: p.rearWheelAccel });
+    const replay = await loftline("attitude", {
+      car: "buggy-4wd-10",
+      speed: 11,
+      duration: 0.65,
+      steering: p.steering,
+      rearWheelAccel: p.rearWheelAccel,
+    });
     expect(replay.code).toBe(0);
     const a = JSON.parse(replay.stdout);
     expect(a.yawDeg).toBeCloseTo(p.yawDeg, 6);
