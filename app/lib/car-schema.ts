@@ -7,9 +7,13 @@ import type { AttitudeCar } from "~/analysis/attitude";
 import type { PulseLimits } from "~/analysis/air-plan-pulse";
 import { CAR_PRESET_IDS, carPreset, type CarParams } from "~/analysis/cars";
 
-const positive = (what: string) => z.number({ error: `${what} must be a number` }).positive(`${what} must be above 0`);
+const positive = (what: string) =>
+  z.number({ error: `${what} must be a number` }).positive(`${what} must be above 0`);
 const angleDeg = (what: string, max: number) =>
-  z.number({ error: `${what} must be a number` }).min(0, `${what} must be 0 or more`).max(max, `${what} must be at most ${max} deg`);
+  z
+    .number({ error: `${what} must be a number` })
+    .min(0, `${what} must be 0 or more`)
+    .max(max, `${what} must be at most ${max} deg`);
 
 /** A wheel with its tyre: rolling radius (m), spin inertia about its axle (kg m^2), mass (kg). */
 export const wheelSchema = z.object({
@@ -20,7 +24,9 @@ export const wheelSchema = z.object({
 
 /** What the attitude model needs (the `attitude` command's car), plus optional drive data. */
 export const attitudeCarSchema = z.object({
-  inertia: z.tuple([positive("Ixx"), positive("Iyy"), positive("Izz")], { error: "inertia must be [Ixx, Iyy, Izz] in kg m^2" }),
+  inertia: z.tuple([positive("Ixx"), positive("Iyy"), positive("Izz")], {
+    error: "inertia must be [Ixx, Iyy, Izz] in kg m^2",
+  }),
   frontWheel: wheelSchema,
   rearWheel: wheelSchema,
   casterDeg: angleDeg("casterDeg", 60),
@@ -55,14 +61,20 @@ export type CarProfile = z.infer<typeof carProfileSchema>;
 
 /** A car given either as a preset id or as an attitude car object. */
 export const carRefSchema = z.union([
-  z.string().refine((id) => carPreset(id) !== undefined, { message: `unknown car preset (known: ${CAR_PRESET_IDS.join(", ")})` }),
+  z
+    .string()
+    .refine((id) => carPreset(id) !== undefined, {
+      message: `unknown car preset (known: ${CAR_PRESET_IDS.join(", ")})`,
+    }),
   attitudeCarSchema,
 ]);
 
 const RAD = Math.PI / 180;
 
 /** The engine's attitude car (radians) from an attitude car input (degrees). */
-export function attitudeCarFromInput(c: AttitudeCarInput): AttitudeCar & PulseLimits & { wheelbase?: number } {
+export function attitudeCarFromInput(
+  c: AttitudeCarInput,
+): AttitudeCar & PulseLimits & { wheelbase?: number } {
   return {
     inertia: c.inertia,
     frontWheel: { radius: c.frontWheel.radius, spinInertia: c.frontWheel.spinInertia },
@@ -79,7 +91,9 @@ export function attitudeCarFromInput(c: AttitudeCarInput): AttitudeCar & PulseLi
 }
 
 /** A preset id or a parsed car object, as the engine's car. */
-export function resolveCar(ref: z.infer<typeof carRefSchema>): AttitudeCar & PulseLimits & { wheelbase?: number } {
+export function resolveCar(
+  ref: z.infer<typeof carRefSchema>,
+): AttitudeCar & PulseLimits & { wheelbase?: number } {
   return typeof ref === "string" ? carPreset(ref)! : attitudeCarFromInput(ref);
 }
 
@@ -92,8 +106,16 @@ export function carFromProfile(p: CarProfile, id = "custom"): CarParams {
     massKg: p.massKg,
     wheelbase: p.wheelbase,
     track: p.track,
-    frontWheel: { radius: p.frontWheel.radius, spinInertia: p.frontWheel.spinInertia, massKg: p.frontWheel.massKg },
-    rearWheel: { radius: p.rearWheel.radius, spinInertia: p.rearWheel.spinInertia, massKg: p.rearWheel.massKg },
+    frontWheel: {
+      radius: p.frontWheel.radius,
+      spinInertia: p.frontWheel.spinInertia,
+      massKg: p.frontWheel.massKg,
+    },
+    rearWheel: {
+      radius: p.rearWheel.radius,
+      spinInertia: p.rearWheel.spinInertia,
+      massKg: p.rearWheel.massKg,
+    },
     drive: p.drive,
     topSpeed: p.topSpeed,
     accel0: p.accel0,
