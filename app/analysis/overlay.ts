@@ -41,21 +41,42 @@ function ruleFailure(c: RuleCheck): AnalysisOverlay["ruleFailures"][number] {
   };
 }
 
-/**
- * The points of the downsampled line from lap distance `from` to `to` (m), going forward and
- * crossing the start line when `to` < `from`.
- */
-function stretch(line: LayoutAnalysis["line"], from: number, to: number): [number, number][] {
-  const pts: [number, number][] = [];
+/** Plan point (m) of the downsampled line at lap distance s (m), linear between its points. */
+function pointOnLine(line: LayoutAnalysis["line"], s: number): [number, number] {
   const n = line.s.length;
-  const inside = (s: number) => (from <= to ? s >= from && s <= to : s >= from || s <= to);
-  // Start at the first point inside after the start line is crossed, so that pieces join up.
-  let first = 0;
-  if (from > to) while (first < n && line.s[first] < from) first++;
-  for (let k = 0; k < n; k++) {
-    const i = (first + k) % n;
-    if (inside(line.s[i])) pts.push([line.x[i], line.y[i]]);
+  let lo = 0;
+  let hi = n - 1;
+  if (s <= line.s[0]) return [line.x[0], line.y[0]];
+  if (s >= line.s[hi]) return [line.x[hi], line.y[hi]];
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (line.s[mid] <= s) lo = mid;
+    else hi = mid;
   }
+  const f = (s - line.s[lo]) / (line.s[hi] - line.s[lo]);
+  return [line.x[lo] + f * (line.x[hi] - line.x[lo]), line.y[lo] + f * (line.y[hi] - line.y[lo])];
+}
+
+/**
+ * The stretch of the downsampled line from lap distance `from` to `to` (m) as a polyline: the
+ * exact end points and every line point between them, going forward and crossing the start line
+ * when `to` < `from`.
+ */
+export function linePolyline(line: LayoutAnalysis["line"], from: number, to: number): [number, number][] {
+  const n = line.s.length;
+  const lap = line.s[n - 1];
+  const pts: [number, number][] = [pointOnLine(line, from)];
+  // The closing point repeats the first one (same place), so it is left out when wrapping.
+  const add = (a: number, b: number, last: number) => {
+    for (let i = 0; i < last; i++) if (line.s[i] > a && line.s[i] < b) pts.push([line.x[i], line.y[i]]);
+  };
+  if (from <= to) add(from, to, n);
+  else {
+    add(from, lap + 1, n - 1);
+    pts.push([line.x[0], line.y[0]]);
+    add(0, to, n - 1);
+  }
+  pts.push(pointOnLine(line, to));
   return pts;
 }
 
@@ -86,7 +107,7 @@ export function buildOverlay(analysis: LayoutAnalysis, classId: string, skill: S
     },
     speedRange: { min, max },
     jumps: cls.jumps.map((j) => overlayJump(j, skill)),
-    hidden: (analysis.hiddenFromStand ?? []).map((h) => ({ points: stretch(analysis.line, h.fromS, h.toS), length: h.length })),
+    hidden: (analysis.hiddenFromStand ?? []).map((h) => ({ points: linePolyline(analysis.line, h.fromS, h.toS), length: h.length })),
     laneConflicts: analysis.laneConflicts.map((c) => ({ a: c.a, b: c.b, distance: c.distance })),
     ruleFailures: analysis.rules.checks.filter((c) => c.status === "fail").map(ruleFailure),
   };
