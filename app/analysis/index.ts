@@ -87,4 +87,4 @@ export * from "./layout-analysis-types";
 export * from "./analysis-cache";
 export { analyseJump, TAKEOFF_SPEED_STEP, type JumpContext, type JumpAnalysisOptions } from "./jump-analysis";
 export * from "./layout-analysis";
-export { buildOverlay, jumpLabel } from "./overlay";
+export { buildOverlay, jumpLabel, linePolyline } from "./overlay";
