@@ -42,7 +42,8 @@ export const DEFAULT_CACHE_ENTRIES = 2000;
 
 /** A new, empty cache holding at most `maxEntries` entries (least recently used go first). */
 export function createAnalysisCache(maxEntries = DEFAULT_CACHE_ENTRIES): AnalysisCache {
-  if (!Number.isInteger(maxEntries) || maxEntries < 1) throw new RangeError("maxEntries must be a whole number of at least 1");
+  if (!Number.isInteger(maxEntries) || maxEntries < 1)
+    throw new RangeError("maxEntries must be a whole number of at least 1");
   // A Map keeps insertion order: re-inserting on each use keeps the least recent entry first.
   const entries = new Map<string, unknown>();
   const stats: CacheStats = { hits: 0, misses: 0, missesByKind: {}, evictions: 0 };

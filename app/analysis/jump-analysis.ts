@@ -20,7 +20,12 @@ import { findLandingTurn, lineIndexAt, pointAt } from "./jump-turn";
 import { describeVerdicts, type VerdictInputs } from "./jump-verdicts";
 import type { JumpAnalysis, JumpPlan, SkillLevel } from "./layout-analysis-types";
 import type { JumpLap } from "./speed";
-import { DEFAULT_FAIL_COST_S, DEFAULT_MIN_AIRTIME_S, DEFAULT_MIN_TURN_ANGLE, DEFAULT_TURN_LOOKAHEAD_S } from "./verdict";
+import {
+  DEFAULT_FAIL_COST_S,
+  DEFAULT_MIN_AIRTIME_S,
+  DEFAULT_MIN_TURN_ANGLE,
+  DEFAULT_TURN_LOOKAHEAD_S,
+} from "./verdict";
 
 /** The jump and its surroundings, as the lap model left them for one car class. */
 export interface JumpContext {
@@ -86,13 +91,20 @@ function flightBase(profile: JumpProfile, car: CarParams, g: number): Omit<Fligh
  * Speed window and sweet-spot speed with drag. Drag only shortens a flight, so the drag-free
  * speeds (lap-jumps.ts) are lower bounds and the search starts there.
  */
-function dragWindow(profile: JumpProfile, car: CarParams, g: number): { window: SpeedWindow | null; sweetSpot: number | null } {
+function dragWindow(
+  profile: JumpProfile,
+  car: CarParams,
+  g: number,
+): { window: SpeedWindow | null; sweetSpot: number | null } {
   const free = ballisticJumpWindow(profile, g);
   if (free.windowMin === null) return { window: null, sweetSpot: null };
   const base = flightBase(profile, car, g);
   const ramp = base.landingRamp!;
   const window = speedWindow({ ...base, landingRamp: ramp, minSpeed: free.windowMin });
-  const sweetSpot = speedToLandAt({ ...base, minSpeed: free.sweetSpotSpeed ?? free.windowMin }, profile.sweetSpot);
+  const sweetSpot = speedToLandAt(
+    { ...base, minSpeed: free.sweetSpotSpeed ?? free.windowMin },
+    profile.sweetSpot,
+  );
   return { window, sweetSpot };
 }
 
@@ -155,7 +167,12 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
     verdicts: null!,
     verdict: null!,
   };
-  const w = memo(cache, "window", () => ({ profileKey, drag, g }), () => dragWindow(profile, car, g));
+  const w = memo(
+    cache,
+    "window",
+    () => ({ profileKey, drag, g }),
+    () => dragWindow(profile, car, g),
+  );
   result.window = w.window ? { ...w.window } : null;
   result.sweetSpotSpeed = w.sweetSpot;
   // engine.md section 2 with the flight model's drag: the sweet-spot speed, or the most the approach allows.
@@ -165,7 +182,11 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   result.takeoffSpeed = lap.flownOverBy === null ? takeoffSpeed : 0;
   result.cannotClear = lap.flownOverBy === null && (w.window === null || approach < w.window.min);
 
-  const inputs: VerdictInputs = { skill: options.skill ?? "club", failCost: options.failCost ?? DEFAULT_FAIL_COST_S, result };
+  const inputs: VerdictInputs = {
+    skill: options.skill ?? "club",
+    failCost: options.failCost ?? DEFAULT_FAIL_COST_S,
+    result,
+  };
   if (lap.flownOverBy !== null || !(takeoffSpeed > 0)) return describeVerdicts(inputs);
 
   const flight: FlightResult = memo(
@@ -211,7 +232,10 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   }
   const turn = result.turn;
   const wantsPlan =
-    !result.cannotClear && turn !== null && turn.angleDeg / DEG >= DEFAULT_MIN_TURN_ANGLE && flight.airtime >= DEFAULT_MIN_AIRTIME_S;
+    !result.cannotClear &&
+    turn !== null &&
+    turn.angleDeg / DEG >= DEFAULT_MIN_TURN_ANGLE &&
+    flight.airtime >= DEFAULT_MIN_AIRTIME_S;
   if (wantsPlan) {
     const turnAngleRad = Math.min(turn.angleDeg / DEG, Math.PI / 4);
     const pitchChangeRad = td.surfaceSlopeRad - profile.faceAngle;
@@ -219,10 +243,28 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
     const plan = memo(
       cache,
       "plan",
-      () => ({ car: objectHash(car), speed: takeoffSpeed, airtime: flight.airtime, side: turn.side, turnAngleRad, pitchChangeRad, sigmas, seed }),
+      () => ({
+        car: objectHash(car),
+        speed: takeoffSpeed,
+        airtime: flight.airtime,
+        side: turn.side,
+        turnAngleRad,
+        pitchChangeRad,
+        sigmas,
+        seed,
+      }),
       () =>
         planSummary(
-          planAirSetup({ car, speed: takeoffSpeed, airtime: flight.airtime, turn: turn.side, turnAngleRad, pitchChangeRad, skillSigmas: sigmas, seed }),
+          planAirSetup({
+            car,
+            speed: takeoffSpeed,
+            airtime: flight.airtime,
+            turn: turn.side,
+            turnAngleRad,
+            pitchChangeRad,
+            skillSigmas: sigmas,
+            seed,
+          }),
         ),
     );
     result.plan = plan;

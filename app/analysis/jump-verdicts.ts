@@ -42,7 +42,13 @@ function steeringWords(steering: [number, number][]): string {
   return sides.length === 0 ? "keep the wheels straight" : `steer ${sides.join(", then ")}`;
 }
 
-function straightText(reason: JumpReason, r: JumpAnalysis, gain: number, rate: number, saved: number): string {
+function straightText(
+  reason: JumpReason,
+  r: JumpAnalysis,
+  gain: number,
+  rate: number,
+  saved: number,
+): string {
   switch (reason) {
     case "flown-over":
       return `Nothing to do here: the car flies over this jump from ${r.flownOverBy}.`;
@@ -73,7 +79,12 @@ export function describeVerdicts({ skill, failCost, result: r }: VerdictInputs):
   for (const level of SKILL_LEVELS) {
     const rate = plan ? plan.successRate[level] : 0;
     const gain = plan ? expectedGain(rate, saved, failCost) : 0;
-    const numbers = { successRate: rate, trackLengthSaved: lengthSaved, timeSaved: saved, expectedGain: gain };
+    const numbers = {
+      successRate: rate,
+      trackLengthSaved: lengthSaved,
+      timeSaved: saved,
+      expectedGain: gain,
+    };
     const straight = (reason: JumpReason): SkillVerdict => ({
       skill: level,
       verdict: "straight",

@@ -27,12 +27,7 @@ export type SkillLevel = (typeof SKILL_LEVELS)[number];
  * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it).
  */
 export type JumpReason =
-  | "no-turn"
-  | "turn-too-gentle"
-  | "not-enough-airtime"
-  | "too-risky"
-  | "cannot-clear"
-  | "flown-over";
+  "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky" | "cannot-clear" | "flown-over";
 
 /** The verdict for one jump, one car class and one skill level. */
 export interface SkillVerdict {

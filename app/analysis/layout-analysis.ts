@@ -16,7 +16,12 @@ import { analyseJump } from "./jump-analysis";
 import type { JumpProfile } from "./jump-profile";
 import { pointAt } from "./jump-turn";
 import { ballisticJumpWindow, STANDARD_GRAVITY } from "./lap-jumps";
-import { SKILL_LEVELS, type ClassAnalysis, type LayoutAnalysis, type SkillLevel } from "./layout-analysis-types";
+import {
+  SKILL_LEVELS,
+  type ClassAnalysis,
+  type LayoutAnalysis,
+  type SkillLevel,
+} from "./layout-analysis-types";
 import { measureLayout, ruleMeasurements, type LayoutMeasures } from "./layout-measure";
 import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "./rules";
 import { lapSpeed } from "./speed";
@@ -58,7 +63,8 @@ function resolveClasses(doc: LayoutDocument, options: AnalyseOptions): { id: str
   const field = options.classIds ? "classIds" : "carClasses";
   if (ids.length === 0) throw new RangeError(`${field}: must name at least one car class`);
   return ids.map((id, i) => {
-    const own = options.cars && Object.prototype.hasOwnProperty.call(options.cars, id) ? options.cars[id] : undefined;
+    const own =
+      options.cars && Object.prototype.hasOwnProperty.call(options.cars, id) ? options.cars[id] : undefined;
     const car = own ?? carPreset(id);
     if (!car) throw new RangeError(`${field}[${i}]: unknown car class "${id}"`);
     return { id, car };
@@ -79,7 +85,12 @@ function downsample(count: number, s: Float64Array): number[] {
   return out;
 }
 
-function planSection(doc: LayoutDocument, m: LayoutMeasures, skill: SkillLevel, rules: LayoutAnalysis["rules"]) {
+function planSection(
+  doc: LayoutDocument,
+  m: LayoutMeasures,
+  skill: SkillLevel,
+  rules: LayoutAnalysis["rules"],
+) {
   const { line } = m.geometry;
   const keep = downsample(line.count, line.s);
   const base: Omit<LayoutAnalysis, "classes"> = {
@@ -125,8 +136,10 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
     seed: options.seed ?? 1,
   };
   const guidance = options.guidance ?? doc.guidance;
-  if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance)) throw new RangeError('guidance: must be "club" or "national"');
-  const rulesFor = (m: LayoutMeasures) => checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
+  if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance))
+    throw new RangeError('guidance: must be "club" or "national"');
+  const rulesFor = (m: LayoutMeasures) =>
+    checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
   const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
   if (!cache) return compute();
   const key = cacheKey("layout", {
@@ -154,7 +167,8 @@ function computeAnalysis(
   const { sections, line } = m.geometry;
   const g = STANDARD_GRAVITY;
   const jumpWindow = cache
-    ? (_s: ResolvedSection, p: JumpProfile) => cache.memo(cacheKey("lap-window", { p, g }), () => ballisticJumpWindow(p, g))
+    ? (_s: ResolvedSection, p: JumpProfile) =>
+        cache.memo(cacheKey("lap-window", { p, g }), () => ballisticJumpWindow(p, g))
     : undefined;
   const result: ClassAnalysis[] = classes.map(({ id, car }) => {
     const lap = lapSpeed(m.geometry, car, { g, jumpWindow });

@@ -84,7 +84,11 @@ export function linePolyline(line: LayoutAnalysis["line"], from: number, to: num
  * The overlay of an analysis for one class and skill level.
  * @throws RangeError naming `classId` or `skill` when the analysis has no such class or level.
  */
-export function buildOverlay(analysis: LayoutAnalysis, classId: string, skill: SkillLevel = analysis.skill): AnalysisOverlay {
+export function buildOverlay(
+  analysis: LayoutAnalysis,
+  classId: string,
+  skill: SkillLevel = analysis.skill,
+): AnalysisOverlay {
   const cls = analysis.classes.find((c) => c.classId === classId);
   if (!cls) throw new RangeError(`classId: the analysis has no class "${classId}"`);
   if (!SKILL_LEVELS.includes(skill)) throw new RangeError(`skill: must be one of ${SKILL_LEVELS.join(", ")}`);
@@ -107,7 +111,10 @@ export function buildOverlay(analysis: LayoutAnalysis, classId: string, skill: S
     },
     speedRange: { min, max },
     jumps: cls.jumps.map((j) => overlayJump(j, skill)),
-    hidden: (analysis.hiddenFromStand ?? []).map((h) => ({ points: linePolyline(analysis.line, h.fromS, h.toS), length: h.length })),
+    hidden: (analysis.hiddenFromStand ?? []).map((h) => ({
+      points: linePolyline(analysis.line, h.fromS, h.toS),
+      length: h.length,
+    })),
     laneConflicts: analysis.laneConflicts.map((c) => ({ a: c.a, b: c.b, distance: c.distance })),
     ruleFailures: analysis.rules.checks.filter((c) => c.status === "fail").map(ruleFailure),
   };

@@ -3,6 +3,7 @@
  * one line here.
  */
 import { airplanCommand } from "./airplan";
+import { analyseCommand } from "./analyse";
 import { attitudeCommand } from "./attitude";
 import { flightCommand } from "./flight";
 import type { CliCommand } from "./io";
@@ -11,4 +12,5 @@ export const commands: Record<string, CliCommand> = {
   flight: flightCommand,
   attitude: attitudeCommand,
   airplan: airplanCommand,
+  analyse: analyseCommand(process.argv.slice(4)),
 };

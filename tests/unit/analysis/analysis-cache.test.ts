@@ -8,7 +8,9 @@ const clone = (d: LayoutDocument): LayoutDocument => structuredClone(d);
 
 describe("canonical JSON and the hash", () => {
   it("gives equal text for equal data whatever the key order", () => {
-    expect(canonicalJson({ b: 1, a: [1, { d: 2, c: 3 }] })).toBe(canonicalJson({ a: [1, { c: 3, d: 2 }], b: 1 }));
+    expect(canonicalJson({ b: 1, a: [1, { d: 2, c: 3 }] })).toBe(
+      canonicalJson({ a: [1, { c: 3, d: 2 }], b: 1 }),
+    );
     expect(canonicalJson({ a: 1, skip: undefined })).toBe('{"a":1}');
     expect(canonicalJson(new Float64Array([1.5, 2]))).toBe("[1.5,2]");
     // Non-finite numbers stay distinct from each other and from null.
@@ -85,7 +87,8 @@ describe("analyseLayout with the cache", () => {
     const edited = clone(SUMMER_LAYOUT);
     const k = edited.sections.findIndex((s) => s.id === "step-down");
     const jump = edited.sections[k];
-    if (jump.kind !== "jump" || jump.preset !== "step-down") throw new Error("demo layout changed: no step-down");
+    if (jump.kind !== "jump" || jump.preset !== "step-down")
+      throw new Error("demo layout changed: no step-down");
     jump.faceHeight += 0.05;
     const a = analyseLayout(edited, { cache });
     const after = cache.stats.missesByKind;
@@ -109,7 +112,8 @@ describe("analyseLayout with the cache", () => {
     const a = analyseLayout(edited, { cache });
     const after = cache.stats.missesByKind;
     expect(after.layout - before.layout).toBe(1);
-    for (const kind of ["lap-window", "window", "flight", "plan"]) expect((after[kind] ?? 0) - (before[kind] ?? 0)).toBe(0);
+    for (const kind of ["lap-window", "window", "flight", "plan"])
+      expect((after[kind] ?? 0) - (before[kind] ?? 0)).toBe(0);
     // Positions along the lap moved, the jumps' own numbers did not.
     expect(a.lapLength).toBeCloseTo(base.lapLength + 2, 9);
     expect(a.classes[0].jumps[0].lip.s).toBeCloseTo(base.classes[0].jumps[0].lip.s + 2, 6);

@@ -78,7 +78,12 @@ describe("jump verdicts (issue 4 correctness)", () => {
   it("a gentle turn after the landing gets the gentle-turn reason", () => {
     const doc = ovalWithJump(BIG_DOUBLE, { after: 0.5 });
     // Split the first hairpin into a 10 deg right kink and the rest of the loop to the left.
-    doc.sections.splice(3, 1, { id: "kink", kind: "turn", radius: 20, angleDeg: 10, direction: "right" }, { id: "hairpin", kind: "turn", radius: 3, angleDeg: 190, direction: "left" });
+    doc.sections.splice(
+      3,
+      1,
+      { id: "kink", kind: "turn", radius: 20, angleDeg: 10, direction: "right" },
+      { id: "hairpin", kind: "turn", radius: 3, angleDeg: 190, direction: "left" },
+    );
     const j = only(doc);
     expect(j.turn?.sectionId).toBe("kink");
     expect(j.turn?.side).toBe("right");
@@ -133,7 +138,14 @@ describe("jump flight and numbers", () => {
     const geo = layoutGeometry(doc);
     const car = CAR_PRESETS["buggy-4wd-10"];
     const lap = lapSpeed(geo, car);
-    const j = analyseJump({ doc: BIG_DOUBLE, sections: geo.sections, line: geo.line, speed: lap.speed, lap: lap.jumps[0], car });
+    const j = analyseJump({
+      doc: BIG_DOUBLE,
+      sections: geo.sections,
+      line: geo.line,
+      speed: lap.speed,
+      lap: lap.jumps[0],
+      car,
+    });
     // The near straight runs along +X from the origin.
     expect(Math.abs(j.lip.s - (25 + j.lip.d))).toBeLessThanOrEqual(0.1);
     expect(j.lip.x).toBeCloseTo(j.lip.s, 6);

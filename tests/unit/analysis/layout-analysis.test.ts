@@ -61,7 +61,9 @@ describe("analyseLayout: rule checks (issue 4 correctness)", () => {
     expect(national.checks.find((c) => c.id === "minTrackWidth")!.status).toBe("fail");
     const relaxed = analyseLayout(ruleOval(2), { overrides: { minTrackWidth: 1.8 } }).rules;
     expect(relaxed.checks.find((c) => c.id === "minTrackWidth")!.status).toBe("pass");
-    expect(() => analyseLayout(ruleOval(2), { overrides: { minTrackWidth: -1 } })).toThrow(/overrides\.minTrackWidth/);
+    expect(() => analyseLayout(ruleOval(2), { overrides: { minTrackWidth: -1 } })).toThrow(
+      /overrides\.minTrackWidth/,
+    );
   });
 });
 
@@ -87,14 +89,19 @@ describe("analyseLayout: the result", () => {
   });
 
   it("names the field for an unknown class or skill level", () => {
-    expect(() => analyseLayout(ruleOval(3), { classIds: ["buggy-2wd-10", "hovercraft"] })).toThrow(/^classIds\[1\]: unknown car class "hovercraft"/);
+    expect(() => analyseLayout(ruleOval(3), { classIds: ["buggy-2wd-10", "hovercraft"] })).toThrow(
+      /^classIds\[1\]: unknown car class "hovercraft"/,
+    );
     expect(() => analyseLayout({ ...ruleOval(3), carClasses: ["club-special"] })).toThrow(/^carClasses\[0\]/);
     expect(() => analyseLayout(ruleOval(3), { skill: "pro" as never })).toThrow(/^skill:/);
   });
 
   it("uses a club's own car class when given", () => {
     const own = { ...CAR_PRESETS["buggy-2wd-10"], id: "club-special", label: "Club special", mu: 0.5 };
-    const a = analyseLayout({ ...ruleOval(3), carClasses: ["club-special"] }, { cars: { "club-special": own } });
+    const a = analyseLayout(
+      { ...ruleOval(3), carClasses: ["club-special"] },
+      { cars: { "club-special": own } },
+    );
     expect(a.classes[0].label).toBe("Club special");
     expect(a.classes[0].speed.min).toBeCloseTo(Math.sqrt(0.5 * G * 8), 9);
   });

@@ -37,7 +37,8 @@ describe("buildOverlay", () => {
         expect(oj.takeoffSpeed).toBe(j.takeoffSpeed);
         if (v.reason === "cannot-clear") expect(oj.verdict).toBe("cannot-clear");
         else expect(oj.verdict).toBe(v.verdict);
-        if (v.verdict === "straight" && v.reason !== "cannot-clear") expect(oj.label).toBe(`Straight: ${v.reasonText}`);
+        if (v.verdict === "straight" && v.reason !== "cannot-clear")
+          expect(oj.label).toBe(`Straight: ${v.reasonText}`);
         if (v.verdict === "set-up") expect(oj.label).toMatch(/^Set up: turn \d+° (left|right) in the air$/);
       });
     }
@@ -57,15 +58,29 @@ describe("buildOverlay", () => {
 
   it("lists failed rules in words", () => {
     const o = buildOverlay(analyseLayout(ruleOval(2)), "buggy-2wd-10");
-    expect(o.ruleFailures).toEqual([{ id: "minTrackWidth", label: "Track width", measured: "2 m", required: "at least 2.4 m" }]);
+    expect(o.ruleFailures).toEqual([
+      { id: "minTrackWidth", label: "Track width", measured: "2 m", required: "at least 2.4 m" },
+    ]);
     expect(buildOverlay(analyseLayout(ruleOval(3)), "buggy-2wd-10").ruleFailures).toEqual([]);
   });
 
   it("draws stretches hidden from the driver stand as polylines on the centre line", () => {
     // A tall table on the near straight, the stand low down in front of it.
-    const wall: JumpSection = { id: "wall", kind: "jump", preset: "tabletop", faceHeight: 2, faceAngleDeg: 30, tableLength: 10, landingAngleDeg: 30 };
+    const wall: JumpSection = {
+      id: "wall",
+      kind: "jump",
+      preset: "tabletop",
+      faceHeight: 2,
+      faceAngleDeg: 30,
+      tableLength: 10,
+      landingAngleDeg: 30,
+    };
     const doc = ruleOval(3);
-    doc.sections.splice(0, 1, { id: "s1", kind: "straight", length: 10 }, wall, { id: "s2", kind: "straight", length: 30 - jumpProfile(wall).length });
+    doc.sections.splice(0, 1, { id: "s1", kind: "straight", length: 10 }, wall, {
+      id: "s2",
+      kind: "straight",
+      length: 30 - jumpProfile(wall).length,
+    });
     doc.driverStand = { x: 20, y: -6, eyeHeight: 1 };
     const a = analyseLayout(doc);
     const o = buildOverlay(a, "buggy-2wd-10");
