@@ -28,8 +28,9 @@ export function JumpSideView({ section, snap, takeoffSpeed, onChange, onGestureE
   const [picked, setPicked] = useState<number | null>(null);
   const gesture = useRef("");
   const p = jumpProfile(section);
-  const maxH = Math.max(0.3, ...p.h);
-  const length = p.length * 1.15 + 0.5;
+  const flight = takeoffSpeed ? flightPath(p, takeoffSpeed) : null;
+  const maxH = Math.max(0.3, ...p.h, ...(flight ?? []).map(([, h]) => h));
+  const length = Math.max(p.length * 1.15 + 0.5, ...(flight ?? []).map(([d]) => d + 0.3));
   const sx = (W - 2 * PAD) / length;
   const sy = Math.min(sx * 4, (H - 2 * PAD - 10) / maxH);
   const X = (d: number) => PAD + d * sx;
@@ -37,7 +38,6 @@ export function JumpSideView({ section, snap, takeoffSpeed, onChange, onGestureE
   const ground = `M ${X(-0.2)} ${Y(0)} ` + p.d.map((d, k) => `L ${X(d)} ${Y(p.h[k])}`).join(" ") + ` L ${X(length)} ${Y(0)} L ${X(length)} ${H} L ${X(-0.2)} ${H} Z`;
   const ramp = p.d.slice(p.landingStartIndex, p.landingEndIndex + 1).map((d, k) => `${k ? "L" : "M"} ${X(d)} ${Y(p.h[p.landingStartIndex + k])}`).join(" ");
   const handles = profileHandles(section);
-  const flight = takeoffSpeed ? flightPath(p, takeoffSpeed) : null;
 
   const toProfile = (e: React.PointerEvent) => {
     const rect = svg.current!.getBoundingClientRect();

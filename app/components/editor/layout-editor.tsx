@@ -188,7 +188,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         </p>
       ) : null}
       <div className="flex flex-col gap-3 lg:flex-row">
-        <div className="h-[62vh] min-h-[380px] flex-1 overflow-hidden rounded-md border border-ink-300" aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard" role="application">
+        <div className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1" aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard" role="application">
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>
@@ -236,7 +236,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
             <AnalysisPanel overlay={analysis.overlay} status={analysis.status} stale={analysis.overlayDoc !== doc} sections={doc.sections} classIds={doc.carClasses} classId={classId} skill={skill} selected={selected} onClass={setClassId} onSkill={setSkill} onSelect={(index) => select({ kind: "section", index })} />
           </Panel>
           <Panel title="Site: width, stand, marshals, boundary" open={state.selection !== null && state.selection.kind !== "section" && state.selection.kind !== "photo"}>
-            <SitePanel doc={doc} selection={state.selection} mode={mode} bounds={bounds()} onMode={setMode} onChange={change} onSelect={select} onGestureEnd={endGesture} />
+            <SitePanel doc={doc} selection={state.selection} mode={mode} bounds={bounds} onMode={setMode} onChange={change} onSelect={select} onGestureEnd={endGesture} />
           </Panel>
           <Panel title="Site photo" open={mode === "calibrate" || state.selection?.kind === "photo"}>
             <PhotoPanel

@@ -36,6 +36,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const press = useRef<Press | null>(null);
   const space = useRef(false);
   const photoGesture = useRef("");
+  /** While a handle is dragged the track layer skips its hit canvas (nothing can be clicked then). */
+  const [dragging, setDragging] = useState(false);
 
   const fit = useCallback(() => {
     if (!size.width) return;
@@ -162,7 +164,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   return (
     <div
       ref={wrapper}
-      className="relative h-full w-full touch-none overflow-hidden bg-sand-50 select-none"
+      className="absolute inset-0 touch-none overflow-hidden bg-sand-50 select-none"
       style={{ cursor }}
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
@@ -171,7 +173,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       data-testid="plan-canvas"
     >
       {view && size.width ? (
-        <Stage ref={stageRef} width={size.width} height={size.height}>
+        <Stage ref={stageRef} width={size.width} height={size.height} onDragStart={() => setDragging(true)} onDragEnd={() => setDragging(false)}>
           <Layer listening={false}>
             <GridShape view={view} width={size.width} height={size.height} units={props.units} />
             <Group x={view.ox} y={view.oy} scaleX={view.scale} scaleY={-view.scale}>
@@ -179,7 +181,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
               {doc.siteBoundary ? <Line points={doc.siteBoundary.flat()} closed stroke={PLAN.boundary} strokeWidth={2} dash={[10, 6]} strokeScaleEnabled={false} /> : null}
             </Group>
           </Layer>
-          <Layer>
+          <Layer listening={!dragging}>
             <Group x={view.ox} y={view.oy} scaleX={view.scale} scaleY={-view.scale}>
               {sections.map((r, i) => (
                 <SectionShape

@@ -68,7 +68,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
       </header>
       <ClosureBar closure={closure} units={units} editable={false} message={null} />
       <div className="flex flex-col gap-3 lg:flex-row">
-        <div className="h-[62vh] min-h-[360px] flex-1 overflow-hidden rounded-md border border-ink-300" role="img" aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}>
+        <div className="relative h-[62vh] min-h-[360px] overflow-hidden rounded-md border border-ink-300 lg:flex-1" role="img" aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}>
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>

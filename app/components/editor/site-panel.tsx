@@ -10,7 +10,8 @@ interface Props {
   doc: LayoutDocument;
   selection: Selection;
   mode: CanvasMode;
-  bounds: Bounds;
+  /** The layout's extent, m (worked out only when a boundary is drawn). */
+  bounds(): Bounds;
   onMode(mode: CanvasMode): void;
   onChange(doc: LayoutDocument, gesture?: string, selection?: Selection): void;
   onSelect(selection: Selection): void;
@@ -116,7 +117,7 @@ export function SitePanel({ doc, selection, mode, bounds, onMode, onChange, onSe
             ) : null}
           </>
         ) : (
-          <button type="button" className={toolClass} onClick={() => onChange(rectangleBoundary(doc, bounds))}>
+          <button type="button" className={toolClass} onClick={() => onChange(rectangleBoundary(doc, bounds()))}>
             Draw a boundary around the layout
           </button>
         )}

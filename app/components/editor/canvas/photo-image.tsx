@@ -27,7 +27,7 @@ export function PhotoImage({ url, background, onSize }: { url: string; backgroun
   if (!image || background.hidden) return null;
   return (
     <Group x={background.x} y={background.y} rotation={background.rotationDeg} scaleX={background.metresPerPixel} scaleY={-background.metresPerPixel} opacity={background.opacity} listening={false}>
-      <KonvaImage image={image} perfectDrawEnabled={false} />
+      <KonvaImage name="site-photo" image={image} perfectDrawEnabled={false} />
     </Group>
   );
 }

@@ -13,6 +13,8 @@ export interface LocalSectionDrawing {
   endTick: number[];
   /** Middle of the section on the centre line and the heading there, deg (for labels and arrows). */
   mid: { x: number; y: number; headingDeg: number };
+  /** Arrow of the direction of travel at the middle, flat [x0, y0, x1, y1, x2, y2]. */
+  chevron: number[];
   /** Jumps: rectangles across the band (face, landing), the lip line and the whole mound span. */
   jump: { mound: number[]; face: number[]; landing: number[]; lip: number[] } | null;
 }
@@ -25,6 +27,15 @@ function across(d0: number, d1: number, half: number): number[] {
 
 /** @param trackWidth m. */
 export function localDrawing(section: LayoutSection, trackWidth: number): LocalSectionDrawing {
+  const drawing = sectionDrawing(section, trackWidth);
+  const size = Math.min(1.2, trackWidth / 3);
+  const h = drawing.mid.headingDeg * DEG;
+  const at = (ax: number, ay: number) => [drawing.mid.x + ax * Math.cos(h) - ay * Math.sin(h), drawing.mid.y + ax * Math.sin(h) + ay * Math.cos(h)];
+  drawing.chevron = [...at(-size * 0.5, -size * 0.45), ...at(0, 0), ...at(-size * 0.5, size * 0.45)];
+  return drawing;
+}
+
+function sectionDrawing(section: LayoutSection, trackWidth: number): LocalSectionDrawing {
   const half = trackWidth / 2;
   if (section.kind === "turn") return turnDrawing(section.radius, section.angleDeg * DEG, section.direction === "left" ? 1 : -1, half);
   const profile = section.kind === "jump" ? jumpProfile(section) : null;
@@ -34,6 +45,7 @@ export function localDrawing(section: LayoutSection, trackWidth: number): LocalS
     centre: [0, 0, length, 0],
     endTick: [length, -half, length, half],
     mid: { x: length / 2, y: 0, headingDeg: 0 },
+    chevron: [],
     jump: null,
   };
   if (profile) {
@@ -76,6 +88,7 @@ function turnDrawing(radius: number, angle: number, sign: number, half: number):
     centre,
     endTick: [...endRight, ...endLeft],
     mid: { x: mx, y: my, headingDeg: (sign * angle) / 2 / DEG },
+    chevron: [],
     jump: null,
   };
 }
