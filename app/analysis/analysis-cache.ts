@@ -135,3 +135,27 @@ export function fnv1a64(text: string): string {
 export function cacheKey(kind: string, inputs: unknown): string {
   return `${kind}:${fnv1a64(canonicalJson(inputs))}`;
 }
+
+const remembered = new WeakMap<object, string>();
+
+/**
+ * `fnv1a64(canonicalJson(o))`, remembered per object: for objects that are never changed after
+ * they are first hashed (a jump profile, a car class).
+ */
+export function hashOnce(o: object): string {
+  let h = remembered.get(o);
+  if (h === undefined) {
+    h = fnv1a64(canonicalJson(o));
+    remembered.set(o, h);
+  }
+  return h;
+}
+
+/**
+ * A cache key from plain parts (hashes, ids, numbers), cheaper than `cacheKey` for keys made
+ * many times an analysis: `kind:` then the hash of the parts joined by "|" (numbers written
+ * exactly, as `String(n)` does).
+ */
+export function cacheKeyOf(kind: string, ...parts: readonly (string | number)[]): string {
+  return `${kind}:${fnv1a64(parts.join("|"))}`;
+}

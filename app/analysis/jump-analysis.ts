@@ -9,7 +9,7 @@
 import type { JumpSection } from "~/lib/layout-document";
 import { planAirSetup, type AirPlan } from "./air-plan";
 import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
-import { cacheKey, canonicalJson, fnv1a64, type AnalysisCache } from "./analysis-cache";
+import { cacheKeyOf, hashOnce, type AnalysisCache } from "./analysis-cache";
 import type { CarParams } from "./cars";
 import { flyJump, type FlightInput, type FlightResult } from "./flight";
 import { speedToLandAt, speedWindow, type SpeedWindow } from "./flight-window";
@@ -61,19 +61,13 @@ const DEG = 180 / Math.PI;
 export const TAKEOFF_SPEED_STEP = 0.01;
 
 /** Runs `compute` through the cache when there is one. */
-function memo<T>(cache: AnalysisCache | undefined, kind: string, inputs: () => unknown, compute: () => T): T {
-  return cache ? cache.memo(cacheKey(kind, inputs()), compute) : compute();
-}
-
-const hashes = new WeakMap<object, string>();
-/** Hash of an object that is shared and never changed (a profile, a car preset), remembered. */
-function objectHash(o: object): string {
-  let h = hashes.get(o);
-  if (h === undefined) {
-    h = fnv1a64(canonicalJson(o));
-    hashes.set(o, h);
-  }
-  return h;
+function memo<T>(
+  cache: AnalysisCache | undefined,
+  kind: string,
+  parts: () => (string | number)[],
+  compute: () => T,
+): T {
+  return cache ? cache.memo(cacheKeyOf(kind, ...parts()), compute) : compute();
 }
 
 function flightBase(profile: JumpProfile, car: CarParams, g: number): Omit<FlightInput, "speed"> {
@@ -142,8 +136,7 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const lookaheadS = options.lookaheadS ?? DEFAULT_TURN_LOOKAHEAD_S;
   const lipD = profile.d[profile.lipIndex];
   const lipPoint = pointAt(line, lap.lipS);
-  const profileKey = objectHash(profile);
-  const drag = { massKg: car.massKg, cdA: car.cdA };
+  const profileKey = hashOnce(profile);
   const result: JumpAnalysis = {
     sectionId: section.id,
     sectionIndex: section.index,
@@ -170,7 +163,7 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const w = memo(
     cache,
     "window",
-    () => ({ profileKey, drag, g }),
+    () => [profileKey, car.massKg, car.cdA, g],
     () => dragWindow(profile, car, g),
   );
   result.window = w.window ? { ...w.window } : null;
@@ -192,7 +185,7 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const flight: FlightResult = memo(
     cache,
     "flight",
-    () => ({ profileKey, drag, g, speed: takeoffSpeed }),
+    () => [profileKey, car.massKg, car.cdA, g, takeoffSpeed],
     () => flyJump({ ...flightBase(profile, car, g), speed: takeoffSpeed }),
   );
   const td = flight.landing;
@@ -243,16 +236,18 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
     const plan = memo(
       cache,
       "plan",
-      () => ({
-        car: objectHash(car),
-        speed: takeoffSpeed,
-        airtime: flight.airtime,
-        side: turn.side,
+      () => [
+        hashOnce(car),
+        takeoffSpeed,
+        flight.airtime,
+        turn.side,
         turnAngleRad,
         pitchChangeRad,
-        sigmas,
+        sigmas.novice,
+        sigmas.club,
+        sigmas.expert,
         seed,
-      }),
+      ],
       () =>
         planSummary(
           planAirSetup({

@@ -9,7 +9,7 @@
  */
 import type { JumpSection, LayoutDocument } from "~/lib/layout-document";
 import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
-import { cacheKey, canonicalJson, fnv1a64, type AnalysisCache } from "./analysis-cache";
+import { cacheKey, cacheKeyOf, fnv1a64, hashOnce, type AnalysisCache } from "./analysis-cache";
 import { carPreset, type CarParams } from "./cars";
 import type { ResolvedSection } from "./geometry";
 import { analyseJump } from "./jump-analysis";
@@ -142,9 +142,10 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
     checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
   const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
   if (!cache) return compute();
+  // The document's plain JSON text: a document written with its keys in another order only misses.
   const key = cacheKey("layout", {
-    doc,
-    classes: classes.map((c) => [c.id, fnv1a64(canonicalJson(c.car))]),
+    doc: fnv1a64(JSON.stringify(doc)),
+    classes: classes.map((c) => [c.id, hashOnce(c.car)]),
     skill,
     guidance,
     overrides: options.overrides ?? {},
@@ -168,7 +169,7 @@ function computeAnalysis(
   const g = STANDARD_GRAVITY;
   const jumpWindow = cache
     ? (_s: ResolvedSection, p: JumpProfile) =>
-        cache.memo(cacheKey("lap-window", { p, g }), () => ballisticJumpWindow(p, g))
+        cache.memo(cacheKeyOf("lap-window", hashOnce(p), g), () => ballisticJumpWindow(p, g))
     : undefined;
   const result: ClassAnalysis[] = classes.map(({ id, car }) => {
     const lap = lapSpeed(m.geometry, car, { g, jumpWindow });

@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { cacheKey, canonicalJson, createAnalysisCache, fnv1a64 } from "~/analysis/analysis-cache";
+import {
+  cacheKey,
+  cacheKeyOf,
+  canonicalJson,
+  createAnalysisCache,
+  fnv1a64,
+  hashOnce,
+} from "~/analysis/analysis-cache";
 import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
 import { analyseLayout } from "~/analysis/layout-analysis";
 import type { LayoutDocument } from "~/lib/layout-document";
@@ -28,6 +35,15 @@ describe("canonical JSON and the hash", () => {
     expect(cacheKey("plan", { v: 1 })).not.toBe(cacheKey("plan", { v: 1.0001 }));
     expect(cacheKey("plan", { v: 1 })).not.toBe(cacheKey("flight", { v: 1 }));
     expect(cacheKey("plan", { v: 1 })).toMatch(/^plan:[0-9a-f]{16}$/);
+    expect(cacheKeyOf("flight", "p1", 6.5)).not.toBe(cacheKeyOf("flight", "p1", 6.51));
+    expect(cacheKeyOf("flight", "p1", 6.5)).toBe(`flight:${fnv1a64("p1|6.5")}`);
+  });
+
+  it("hashOnce remembers the hash of an object", () => {
+    const profile = { d: [0, 1], h: [0, 0.3] };
+    expect(hashOnce(profile)).toBe(fnv1a64(canonicalJson(profile)));
+    expect(hashOnce(profile)).toBe(hashOnce({ h: [0, 0.3], d: [0, 1] }));
+    expect(hashOnce(profile)).not.toBe(hashOnce({ d: [0, 1], h: [0, 0.31] }));
   });
 });
 
