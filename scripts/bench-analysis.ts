@@ -96,15 +96,15 @@ const straightEdit = edited(warmCache, straightId, (d, r) => {
   const s = d.sections.find((x) => x.id === straightId)!;
   if (s.kind === "straight") s.length += 0.01 * (r + 1);
 });
-const warmStraight = time(31, 5, straightEdit, (d) => analyseLayout(d, { cache: warmCache }));
+const warmStraight = time(101, 10, straightEdit, (d) => analyseLayout(d, { cache: warmCache }));
 report(`one straight changed ("${straightId}"), rest cached (median)`, warmStraight, 5);
 
 // Where the warm time goes: the plan measures and the lap model run again on every edit.
-const measureMs = time(31, 5, straightEdit, (d) => measureLayout(d));
+const measureMs = time(101, 10, straightEdit, (d) => measureLayout(d));
 const geometry = measureLayout(fresh()).geometry;
 const lapMs = time(
-  31,
-  5,
+  101,
+  10,
   () => geometry,
   (geo) => doc.carClasses.forEach((id) => lapSpeed(geo, carPreset(id)!)),
 );
