@@ -112,9 +112,20 @@ describe("layout editor", () => {
     expect(length * 10).toBeCloseTo(Math.round(length * 10), 6); // snapped to 0.1 m
     await page.getByTestId("closure").getByText("Loop open").waitFor();
     await screenshot(page, "20-editor-loop-open");
+    // the whole drag is one undo step; redo brings it back
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => sectionList(page).nth(2).textContent()).toBe("3. Straight 30.0 m");
+    await page.keyboard.press("Control+Shift+z");
+    await expect.poll(() => sectionList(page).nth(2).textContent()).toBe(dragged);
 
     await page.getByRole("button", { name: "Close the loop" }).click();
     await page.getByTestId("closure").getByText("Loop closed").waitFor();
+    // leaving with unsaved changes asks first
+    await page.getByRole("link", { name: "Layout page" }).click();
+    const leave = page.getByRole("alertdialog", { name: "Leave without saving?" });
+    await leave.waitFor();
+    await leave.getByRole("button", { name: "Stay and keep editing" }).click();
+    expect(new URL(page.url()).pathname).toBe(`/layouts/${id}/edit`);
     await page.getByRole("button", { name: "Save", exact: true }).click();
     await expect.poll(() => page.getByTestId("save-status").textContent()).toMatch(/Version 2, no unsaved changes|Saved as version 2/);
     const before = await sectionList(page).allTextContents();
@@ -216,6 +227,25 @@ describe("layout editor", () => {
     await second.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
     expect(await sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
     expect((await storedDocument(id)).sections[0]).toMatchObject({ length: 32 });
+  });
+
+  it("keeps unsaved changes in the browser and offers them back when the editor opens again", async () => {
+    const id = await createLayout(`Kept in the browser ${Date.now()}`);
+    const page = await browser.newPage();
+    await login(page, demoAccount("director"));
+    await openEditor(page, id);
+    await sectionList(page).first().click();
+    await typeField(page, "Length (m)", "33");
+    await page.waitForTimeout(1500); // the copy is written a second after the last change
+    page.on("dialog", (d) => void d.accept()); // the browser's "leave this page?" prompt
+    await page.goto(url("/clubs"));
+    await openEditor(page, id);
+    const banner = page.getByRole("alert").filter({ hasText: "were kept in this browser" });
+    await banner.waitFor();
+    expect(await sectionList(page).first().textContent()).toBe("1. Straight 30.0 m");
+    await banner.getByRole("button", { name: "Bring them back" }).click();
+    expect(await sectionList(page).first().textContent()).toBe("1. Straight 33.0 m");
+    expect(await page.getByTestId("save-status").textContent()).toBe("Unsaved changes");
   });
 
   it("shows marshals the read-only plan: no handles, no editing panels, numbered marshal points", async () => {

@@ -60,7 +60,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   const [closeMessage, setCloseMessage] = useState<string | null>(null);
   const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
   const [skill, setSkill] = useState<Skill>("club");
-  const analysis = useAnalysis(doc, classId, skill);
+  const analysis = useAnalysis(doc, classId, skill, layout.id);
   const dirty = isDirty(state);
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);

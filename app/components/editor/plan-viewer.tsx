@@ -34,7 +34,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
   const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
   const [skill, setSkill] = useState<Skill>("club");
   const [fitRequest, setFitRequest] = useState(0);
-  const analysis = useAnalysis(doc, classId, skill);
+  const analysis = useAnalysis(doc, classId, skill, layout.id);
   const selected = selection?.kind === "section" ? selection.index : null;
   return (
     <div className="space-y-3">

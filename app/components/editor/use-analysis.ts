@@ -24,7 +24,10 @@ export const ANALYSIS_DELAY_MS = 400;
 /** After a 404 (the analysis service is not there), wait this long before asking again, ms. */
 const UNAVAILABLE_RETRY_MS = 30_000;
 
-export function useAnalysis(doc: LayoutDocument, classId: string | undefined, skill: Skill, endpoint = "/api/analysis") {
+/**
+ * @param layoutId the saved layout the draft belongs to: the club's own track guidance then applies.
+ */
+export function useAnalysis(doc: LayoutDocument, classId: string | undefined, skill: Skill, layoutId?: string, endpoint = "/api/analysis") {
   const [result, setResult] = useState<{ overlay: AnalysisOverlay; doc: LayoutDocument } | null>(null);
   const [status, setStatus] = useState<AnalysisStatus>({ state: "idle", message: null });
   const unavailableUntil = useRef(0);
@@ -38,7 +41,7 @@ export function useAnalysis(doc: LayoutDocument, classId: string | undefined, sk
         const response = await fetch(endpoint, {
           method: "POST",
           headers: { "Content-Type": "application/json", Accept: "application/json" },
-          body: JSON.stringify({ document: doc, classId, skill }),
+          body: JSON.stringify({ document: doc, classId, skill, layoutId }),
           credentials: "same-origin",
           signal: controller.signal,
         });
@@ -63,7 +66,7 @@ export function useAnalysis(doc: LayoutDocument, classId: string | undefined, sk
       window.clearTimeout(timer);
       controller.abort();
     };
-  }, [doc, classId, skill, endpoint]);
+  }, [doc, classId, skill, layoutId, endpoint]);
 
   return { overlay: result?.overlay ?? null, overlayDoc: result?.doc ?? null, status };
 }

@@ -37,17 +37,24 @@ export function useDraftBackup(layoutId: string, present: LayoutDocument, dirty:
     const backup = read(layoutId);
     // Reading the browser's storage after hydration (the server has none): an outside system.
     // eslint-disable-next-line react-hooks/set-state-in-effect
-    if (backup && JSON.stringify(backup.document) !== JSON.stringify(loaded)) setFound(backup);
+    if (backup && stableJson(backup.document) !== stableJson(loaded)) setFound(backup);
     // Only on opening the editor.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [layoutId]);
   useEffect(() => {
     // While an earlier copy waits for the director's answer, it is not overwritten.
     if (found) return;
+    try {
+      if (!dirty) {
+        window.localStorage.removeItem(key(layoutId));
+        return;
+      }
+    } catch {
+      return;
+    }
     const timer = window.setTimeout(() => {
       try {
-        if (dirty) window.localStorage.setItem(key(layoutId), JSON.stringify({ document: present, baseVersion, savedAt: Date.now() } satisfies DraftBackup));
-        else window.localStorage.removeItem(key(layoutId));
+        window.localStorage.setItem(key(layoutId), JSON.stringify({ document: present, baseVersion, savedAt: Date.now() } satisfies DraftBackup));
       } catch {
         /* storage full or disabled: the prompt before leaving still guards the draft */
       }
@@ -55,4 +62,11 @@ export function useDraftBackup(layoutId: string, present: LayoutDocument, dirty:
     return () => window.clearTimeout(timer);
   }, [layoutId, present, dirty, baseVersion, found]);
   return { found, dismiss: () => setFound(null) };
+}
+
+/** JSON with object keys sorted, so two equal documents compare equal whatever their key order. */
+export function stableJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v) =>
+    v && typeof v === "object" && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v,
+  );
 }
