@@ -222,7 +222,13 @@ describe("layout editor", () => {
     await dialog.waitFor();
     expect(await dialog.textContent()).toMatch(/version 1; it is now at version 2/);
     await screenshot(second, "24-editor-conflict");
-    await dialog.getByRole("button", { name: "Save as a copy" }).click();
+    // reloading shows the other director's version; the own drawing is one undo step back
+    await dialog.getByRole("button", { name: "Reload the saved version" }).click();
+    await expect.poll(() => sectionList(second).first().textContent()).toBe("1. Straight 32.0 m");
+    expect(await second.getByTestId("save-status").textContent()).toMatch(/Version 2, no unsaved changes/);
+    await second.keyboard.press("Control+z");
+    await expect.poll(() => sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
+    await second.getByRole("button", { name: "Save as a copy" }).click();
     await second.waitForURL((u) => u.pathname.endsWith("/edit") && !u.pathname.includes(id));
     await second.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
     expect(await sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
