@@ -2,10 +2,17 @@ import { data, isRouteErrorResponse, Link, type ShouldRevalidateFunctionArgs } f
 import type { Route } from "./+types/layout-editor";
 import { requireLayoutAccess } from "~/auth/permissions.server";
 import { LayoutEditor } from "~/components/editor/layout-editor";
-import { createLayoutFromDocument, loadLayoutDocument, saveLayoutDocument, StaleVersionError } from "~/layouts/documents.server";
+import {
+  createLayoutFromDocument,
+  loadLayoutDocument,
+  saveLayoutDocument,
+  StaleVersionError,
+} from "~/layouts/documents.server";
 import { parseSaveRequest } from "~/lib/editor/save-request";
 
-export const meta: Route.MetaFunction = ({ data }) => [{ title: `Edit ${data?.layout.name ?? "layout"} · Loftline` }];
+export const meta: Route.MetaFunction = ({ data }) => [
+  { title: `Edit ${data?.layout.name ?? "layout"} · Loftline` },
+];
 
 /** The club's directors edit; everyone else is refused (403) by requireLayoutAccess. */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -29,14 +36,32 @@ const MAX_BODY_BYTES = 5 * 1024 * 1024;
  */
 export async function action({ request, params }: Route.ActionArgs) {
   try {
-    const { layout, club, user } = await requireLayoutAccess(request, params.layoutId, "director", { api: true });
+    const { layout, club, user } = await requireLayoutAccess(request, params.layoutId, "director", {
+      api: true,
+    });
     const body = await readBody(request);
     const parsed = parseSaveRequest(body);
-    if (!parsed.ok) return data({ ok: false as const, error: parsed.error, issues: parsed.issues, field: parsed.issues[0]?.path ?? null }, { status: 400 });
+    if (!parsed.ok)
+      return data(
+        {
+          ok: false as const,
+          error: parsed.error,
+          issues: parsed.issues,
+          field: parsed.issues[0]?.path ?? null,
+        },
+        { status: 400 },
+      );
     const { intent, document, baseVersion, note } = parsed.request;
     if (intent === "save-copy") {
-      const copy = await createLayoutFromDocument(club.id, { ...document, name: copyName(document.name) }, user.id);
-      return data({ ok: true as const, intent, layoutId: copy.id, url: `/layouts/${copy.id}/edit`, name: copy.name }, { status: 201 });
+      const copy = await createLayoutFromDocument(
+        club.id,
+        { ...document, name: copyName(document.name) },
+        user.id,
+      );
+      return data(
+        { ok: true as const, intent, layoutId: copy.id, url: `/layouts/${copy.id}/edit`, name: copy.name },
+        { status: 201 },
+      );
     }
     try {
       const { version } = await saveLayoutDocument(layout.id, baseVersion!, document, user.id, note);
@@ -44,7 +69,15 @@ export async function action({ request, params }: Route.ActionArgs) {
     } catch (error) {
       if (!(error instanceof StaleVersionError)) throw error;
       const message = `Not saved: someone else saved this layout after you opened it (you started from version ${error.expected}; it is now at version ${error.current}). Your drawing is still here: reload the saved version (your drawing stays one undo step back) or save yours as a copy.`;
-      return data({ ok: false as const, error: message, field: "baseVersion", conflict: { yours: error.expected, current: error.current } }, { status: 409 });
+      return data(
+        {
+          ok: false as const,
+          error: message,
+          field: "baseVersion",
+          conflict: { yours: error.expected, current: error.current },
+        },
+        { status: 409 },
+      );
     }
   } catch (error) {
     if (error instanceof Response) return asData(error);
@@ -62,23 +95,43 @@ async function readBody(request: Request): Promise<unknown> {
     try {
       return JSON.parse(text);
     } catch {
-      throw Response.json({ ok: false, error: "The body is not valid JSON.", field: "(body)" }, { status: 400 });
+      throw Response.json(
+        { ok: false, error: "The body is not valid JSON.", field: "(body)" },
+        { status: 400 },
+      );
     }
   }
   if (type.startsWith("application/x-www-form-urlencoded") || type.startsWith("multipart/form-data")) {
     return Object.fromEntries(await request.formData());
   }
-  throw Response.json({ ok: false, error: "Send the layout as JSON (application/json) or as form fields.", field: "(body)" }, { status: 415 });
+  throw Response.json(
+    { ok: false, error: "Send the layout as JSON (application/json) or as form fields.", field: "(body)" },
+    { status: 415 },
+  );
 }
 
 function tooLarge() {
-  return Response.json({ ok: false, error: `The layout is too large to save: at most ${MAX_BODY_BYTES / (1024 * 1024)} MB.`, field: "document" }, { status: 413 });
+  return Response.json(
+    {
+      ok: false,
+      error: `The layout is too large to save: at most ${MAX_BODY_BYTES / (1024 * 1024)} MB.`,
+      field: "document",
+    },
+    { status: 413 },
+  );
 }
 
 /** A thrown JSON Response (401, 403, 404, 413, 415) as returned data, so the editor stays on screen. */
 async function asData(response: Response) {
   const body = await response.json().catch(() => ({ error: response.statusText || "Refused." }));
-  return data({ ok: false as const, error: String(body.error ?? "Refused."), field: (body.field as string | undefined) ?? null }, { status: response.status });
+  return data(
+    {
+      ok: false as const,
+      error: String(body.error ?? "Refused."),
+      field: (body.field as string | undefined) ?? null,
+    },
+    { status: response.status },
+  );
 }
 
 function copyName(name: string): string {
@@ -99,15 +152,27 @@ export function ErrorBoundary({ error, params }: Route.ErrorBoundaryProps) {
   return (
     <section className="mx-auto max-w-lg py-16 text-center">
       <p className="text-sm font-semibold text-clay-700">Error {status}</p>
-      <h1 className="mt-2 text-2xl font-semibold">{status === 403 ? "Only the club's race directors edit layouts" : status === 404 ? "Not found" : "The editor stopped"}</h1>
+      <h1 className="mt-2 text-2xl font-semibold">
+        {status === 403
+          ? "Only the club's race directors edit layouts"
+          : status === 404
+            ? "Not found"
+            : "The editor stopped"}
+      </h1>
       <p className="mt-3 text-ink-700">
         {status === 403 || status === 404
           ? "You can still look at published layouts of your club."
           : "Unsaved changes are kept in this browser: open the editor again and it offers to bring them back."}
       </p>
       <p className="mt-6 flex justify-center gap-4">
-        {params.layoutId ? <Link className="text-pine-700 underline" to={`/layouts/${params.layoutId}/plan`}>Look at the plan</Link> : null}
-        <Link className="text-pine-700 underline" to="/clubs">Your clubs</Link>
+        {params.layoutId ? (
+          <Link className="text-pine-700 underline" to={`/layouts/${params.layoutId}/plan`}>
+            Look at the plan
+          </Link>
+        ) : null}
+        <Link className="text-pine-700 underline" to="/clubs">
+          Your clubs
+        </Link>
       </p>
     </section>
   );

@@ -8,12 +8,16 @@ import { receiveUpload, SITE_PHOTO } from "~/storage/uploads.server";
  * field; 401 signed out; 403 for other roles. The editor then places the photo in the document.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  if (request.method !== "POST") return Response.json({ error: "Send the photo with POST." }, { status: 405, headers: { Allow: "POST" } });
+  if (request.method !== "POST")
+    return Response.json({ error: "Send the photo with POST." }, { status: 405, headers: { Allow: "POST" } });
   const { layout, user } = await requireLayoutAccess(request, params.layoutId, "director", { api: true });
   const { fileId } = await receiveUpload(request, SITE_PHOTO, { clubId: layout.clubId, userId: user.id });
   return Response.json({ fileId, url: `/files/${fileId}` }, { status: 201 });
 }
 
 export async function loader() {
-  return Response.json({ error: "Send the photo with POST as the multipart field \"photo\"." }, { status: 405, headers: { Allow: "POST" } });
+  return Response.json(
+    { error: 'Send the photo with POST as the multipart field "photo".' },
+    { status: 405, headers: { Allow: "POST" } },
+  );
 }

@@ -17,29 +17,47 @@ const browser = useBrowser();
 /** Creates a draft layout of the demo club holding `doc` as version 1; returns its id. */
 async function createLayout(name: string, doc?: LayoutDocument): Promise<string> {
   const [club] = await queryDb<{ id: string }>("select id from clubs where name = ?", [DEMO_CLUB]);
-  const [user] = await queryDb<{ id: string }>("select id from users where email = ?", [demoAccount("director").email]);
+  const [user] = await queryDb<{ id: string }>("select id from users where email = ?", [
+    demoAccount("director").email,
+  ]);
   const id = randomUUID();
-  await queryDb("insert into layouts (id, club_id, name, surface, track_width, status, version, created_by) values (?, ?, ?, 'dirt', 3, 'draft', 1, ?)", [id, club.id, name, user.id]);
-  if (doc) await queryDb("insert into layout_versions (id, layout_id, number, document, created_by) values (?, ?, 1, ?, ?)", [randomUUID(), id, JSON.stringify({ ...doc, name }), user.id]);
+  await queryDb(
+    "insert into layouts (id, club_id, name, surface, track_width, status, version, created_by) values (?, ?, ?, 'dirt', 3, 'draft', 1, ?)",
+    [id, club.id, name, user.id],
+  );
+  if (doc)
+    await queryDb(
+      "insert into layout_versions (id, layout_id, number, document, created_by) values (?, ?, 1, ?, ?)",
+      [randomUUID(), id, JSON.stringify({ ...doc, name }), user.id],
+    );
   return id;
 }
 
 async function storedDocument(layoutId: string): Promise<LayoutDocument> {
-  const [row] = await queryDb<{ document: string }>("select document from layout_versions where layout_id = ? order by number desc limit 1", [layoutId]);
+  const [row] = await queryDb<{ document: string }>(
+    "select document from layout_versions where layout_id = ? order by number desc limit 1",
+    [layoutId],
+  );
   return JSON.parse(row.document);
 }
 
 /** Opens the editor and waits until the konva stage is drawn. */
 async function openEditor(page: Page, layoutId: string) {
   await page.goto(url(`/layouts/${layoutId}/edit`));
-  await page.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
+  await page.waitForFunction(
+    () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+  );
 }
 
 /** Page coordinates of the first konva node with the given name (e.g. "handle-end"). */
 async function nodePosition(page: Page, name: string): Promise<{ x: number; y: number }> {
   return page.evaluate((n) => {
     type Node = { getAbsolutePosition(): { x: number; y: number } };
-    const stage = (window as unknown as { Konva: { stages: { findOne(s: string): Node | undefined; container(): HTMLElement }[] } }).Konva.stages[0];
+    const stage = (
+      window as unknown as {
+        Konva: { stages: { findOne(s: string): Node | undefined; container(): HTMLElement }[] };
+      }
+    ).Konva.stages[0];
     const node = stage.findOne(`.${n}`);
     if (!node) throw new Error(`no konva node named ${n}`);
     const p = node.getAbsolutePosition();
@@ -51,7 +69,9 @@ async function nodePosition(page: Page, name: string): Promise<{ x: number; y: n
 async function konvaCount(page: Page, pattern: string): Promise<number> {
   return page.evaluate((src) => {
     const re = new RegExp(src);
-    const stage = (window as unknown as { Konva: { stages: { find(f: (n: { name(): string }) => boolean): unknown[] }[] } }).Konva.stages[0];
+    const stage = (
+      window as unknown as { Konva: { stages: { find(f: (n: { name(): string }) => boolean): unknown[] }[] } }
+    ).Konva.stages[0];
     return stage.find((n) => re.test(n.name())).length;
   }, pattern);
 }
@@ -63,7 +83,8 @@ async function drag(page: Page, from: { x: number; y: number }, to: { x: number;
   await page.mouse.up();
 }
 
-const sectionList = (page: Page) => page.getByRole("list", { name: "Sections in lap order" }).getByRole("button");
+const sectionList = (page: Page) =>
+  page.getByRole("list", { name: "Sections in lap order" }).getByRole("button");
 
 async function typeField(page: Page, label: string, value: string) {
   const field = page.getByLabel(label, { exact: false }).first();
@@ -93,14 +114,23 @@ describe("layout editor", () => {
     await page.getByRole("button", { name: "Left turn", exact: true }).click();
     await typeField(page, "Angle (deg)", "180");
     await typeField(page, "Radius (m)", "8");
-    expect(await sectionList(page).allTextContents()).toEqual(["1. Straight 30.0 m", "2. Left hairpin 180° R 8.0 m", "3. Straight 30.0 m", "4. Left hairpin 180° R 8.0 m"]);
+    expect(await sectionList(page).allTextContents()).toEqual([
+      "1. Straight 30.0 m",
+      "2. Left hairpin 180° R 8.0 m",
+      "3. Straight 30.0 m",
+      "4. Left hairpin 180° R 8.0 m",
+    ]);
     await page.getByTestId("closure").getByText("Loop closed").waitFor();
 
     // drag the back straight's end handle about 4 m shorter: the loop opens
     await sectionList(page).nth(2).click();
     const end = await nodePosition(page, "handle-end");
     const scale = await page.evaluate(() => {
-      const stage = (window as unknown as { Konva: { stages: { getLayers(): { getChildren(): { scaleX(): number }[] }[] }[] } }).Konva.stages[0];
+      const stage = (
+        window as unknown as {
+          Konva: { stages: { getLayers(): { getChildren(): { scaleX(): number }[] }[] }[] };
+        }
+      ).Konva.stages[0];
       return stage.getLayers()[1].getChildren()[0].scaleX();
     });
     // the back straight runs towards -X on screen (heading 180 deg)
@@ -127,12 +157,16 @@ describe("layout editor", () => {
     await leave.getByRole("button", { name: "Stay and keep editing" }).click();
     expect(new URL(page.url()).pathname).toBe(`/layouts/${id}/edit`);
     await page.getByRole("button", { name: "Save", exact: true }).click();
-    await expect.poll(() => page.getByTestId("save-status").textContent()).toMatch(/Version 2, no unsaved changes|Saved as version 2/);
+    await expect
+      .poll(() => page.getByTestId("save-status").textContent())
+      .toMatch(/Version 2, no unsaved changes|Saved as version 2/);
     const before = await sectionList(page).allTextContents();
     await screenshot(page, "21-editor-loop-closed-saved");
 
     await page.reload();
-    await page.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
+    await page.waitForFunction(
+      () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+    );
     expect(await sectionList(page).allTextContents()).toEqual(before);
     await page.getByTestId("closure").getByText("Loop closed").waitFor();
     const stored = await storedDocument(id);
@@ -145,9 +179,13 @@ describe("layout editor", () => {
     await login(page, demoAccount("director"));
     await openEditor(page, id);
     await page.locator("summary", { hasText: "Site photo" }).click();
-    await page.locator("#photo-file").setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("not a photo") });
+    await page
+      .locator("#photo-file")
+      .setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("not a photo") });
     await page.getByRole("alert").filter({ hasText: "Only PNG or JPEG files are accepted." }).waitFor();
-    await page.locator("#photo-file").setInputFiles({ name: "site.png", mimeType: "image/png", buffer: makePng(240, 160) });
+    await page
+      .locator("#photo-file")
+      .setInputFiles({ name: "site.png", mimeType: "image/png", buffer: makePng(240, 160) });
     await page.getByTestId("photo-scale").waitFor();
     await expect.poll(() => konvaCount(page, "^site-photo$")).toBe(1);
 
@@ -170,7 +208,9 @@ describe("layout editor", () => {
     await expect.poll(() => konvaCount(page, "^site-photo$")).toBe(0);
     await page.getByLabel("Hide the photo").uncheck();
     await page.getByRole("button", { name: "Save", exact: true }).click();
-    await expect.poll(() => page.getByTestId("save-status").textContent()).toMatch(/Saved as version 2|Version 2/);
+    await expect
+      .poll(() => page.getByTestId("save-status").textContent())
+      .toMatch(/Saved as version 2|Version 2/);
     const stored = await storedDocument(id);
     expect(stored.background?.metresPerPixel).toBeCloseTo(after.mpp, 6);
     const photo = await page.request.get(url(`/files/${stored.background!.fileId}`));
@@ -181,18 +221,37 @@ describe("layout editor", () => {
   it("marks each jump with its verdict once the analysis answers (skipped while /api/analysis is missing)", async (ctx) => {
     const page = await browser.newPage();
     await login(page, demoAccount("director"));
-    const probe = await page.request.post(url("/api/analysis"), { data: { document: starterDocument("probe", 3) } });
+    const probe = await page.request.post(url("/api/analysis"), {
+      data: { document: starterDocument("probe", 3) },
+    });
     if (probe.status() === 404 && !(probe.headers()["content-type"] ?? "").includes("json")) {
-      console.log("[editor e2e] /api/analysis answers 404: the verdict-marker check is skipped until the analysis API exists");
+      console.log(
+        "[editor e2e] /api/analysis answers 404: the verdict-marker check is skipped until the analysis API exists",
+      );
       ctx.skip();
       return;
     }
     const doc = starterDocument("Verdicts", 3);
-    doc.sections.splice(1, 0, { id: "j1", kind: "jump", preset: "tabletop", faceHeight: 0.5, faceAngleDeg: 30, tableLength: 3, landingAngleDeg: 25 }, { id: "s9", kind: "straight", length: 2 });
+    doc.sections.splice(
+      1,
+      0,
+      {
+        id: "j1",
+        kind: "jump",
+        preset: "tabletop",
+        faceHeight: 0.5,
+        faceAngleDeg: 30,
+        tableLength: 3,
+        landingAngleDeg: 25,
+      },
+      { id: "s9", kind: "straight", length: 2 },
+    );
     (doc.sections[0] as { length: number }).length = 20;
     const id = await createLayout(`Verdicts ${Date.now()}`, doc);
     await openEditor(page, id);
-    await expect.poll(() => page.getByTestId("analysis-status").textContent(), { timeout: 20_000 }).toMatch(/up to date/);
+    await expect
+      .poll(() => page.getByTestId("analysis-status").textContent(), { timeout: 20_000 })
+      .toMatch(/up to date/);
     const jumps = page.getByRole("list", { name: "Jumps and their verdicts" }).getByRole("button");
     expect(await jumps.count()).toBe(1);
     expect(await jumps.first().textContent()).toMatch(/Set up in the air|Take it straight|Cannot clear/);
@@ -230,7 +289,9 @@ describe("layout editor", () => {
     await expect.poll(() => sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
     await second.getByRole("button", { name: "Save as a copy" }).click();
     await second.waitForURL((u) => u.pathname.endsWith("/edit") && !u.pathname.includes(id));
-    await second.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
+    await second.waitForFunction(
+      () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+    );
     expect(await sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
     expect((await storedDocument(id)).sections[0]).toMatchObject({ length: 32 });
   });
@@ -255,14 +316,23 @@ describe("layout editor", () => {
   });
 
   it("shows marshals the read-only plan: no handles, no editing panels, numbered marshal points", async () => {
-    const doc = { ...starterDocument("Race day", 3), marshalPoints: [{ x: 15, y: -4 }, { x: 15, y: 20 }], driverStand: { x: 15, y: -8, eyeHeight: 3 } };
+    const doc = {
+      ...starterDocument("Race day", 3),
+      marshalPoints: [
+        { x: 15, y: -4 },
+        { x: 15, y: 20 },
+      ],
+      driverStand: { x: 15, y: -8, eyeHeight: 3 },
+    };
     const id = await createLayout(`Race day ${Date.now()}`, doc);
     await queryDb("update layouts set status = 'published' where id = ?", [id]);
     const page = await browser.newPage();
     await login(page, demoAccount("marshal"));
     expect((await page.goto(url(`/layouts/${id}/edit`)))?.status()).toBe(403);
     await page.goto(url(`/layouts/${id}/plan`));
-    await page.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
+    await page.waitForFunction(
+      () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+    );
     expect(await konvaCount(page, "^marshal marshal-\\d$")).toBe(2);
     const box = (await page.getByTestId("plan-canvas").boundingBox())!;
     await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
@@ -274,10 +344,13 @@ describe("layout editor", () => {
     const phone = await browser.newPage({ width: 390, height: 800 });
     await login(phone, demoAccount("marshal"));
     await phone.goto(url(`/layouts/${id}/plan`));
-    await phone.waitForFunction(() => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1);
+    await phone.waitForFunction(
+      () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+    );
     expect(await phone.evaluate(() => document.documentElement.scrollWidth > window.innerWidth)).toBe(false);
     const stage = await phone.evaluate(() => {
-      const st = (window as unknown as { Konva: { stages: { width(): number; height(): number }[] } }).Konva.stages[0];
+      const st = (window as unknown as { Konva: { stages: { width(): number; height(): number }[] } }).Konva
+        .stages[0];
       return { width: st.width(), height: st.height() };
     });
     expect(stage.width).toBeGreaterThan(300);
@@ -334,8 +407,12 @@ describe("layout editor", () => {
       const pick = (q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0;
       return `median ${pick(0.5).toFixed(1)} ms, 95th percentile ${pick(0.95).toFixed(1)} ms, longest ${(sorted.at(-1) ?? 0).toFixed(1)} ms`;
     };
-    console.log(`[editor e2e] 60-section drag over ${wall} ms: ${frames.length} frames, frame time ${stats(frames)}`);
-    console.log(`[editor e2e] track layer redrawn ${draws[1].length} times: ${stats(draws[1])}; handle layer ${draws[3].length} times: ${stats(draws[3])}; grid and photo layer ${draws[0].length} times, analysis layer ${draws[2].length} times`);
+    console.log(
+      `[editor e2e] 60-section drag over ${wall} ms: ${frames.length} frames, frame time ${stats(frames)}`,
+    );
+    console.log(
+      `[editor e2e] track layer redrawn ${draws[1].length} times: ${stats(draws[1])}; handle layer ${draws[3].length} times: ${stats(draws[3])}; grid and photo layer ${draws[0].length} times, analysis layer ${draws[2].length} times`,
+    );
     expect(frames.length).toBeGreaterThan(10);
     // only what changed is redrawn: the track and the handles every move; the grid and photo
     // never; the analysis once or twice (its line fades when the drawing moves on)
@@ -347,7 +424,6 @@ describe("layout editor", () => {
     await screenshot(page, "27-editor-sixty-sections");
   });
 });
-
 
 /** The photo's scale (m per pixel) and the view's zoom (px per m), read from the konva nodes. */
 async function photoState(page: Page): Promise<{ mpp: number; viewScale: number }> {
@@ -386,7 +462,12 @@ function makePng(width: number, height: number): Buffer {
   ihdr.writeUInt32BE(height, 4);
   ihdr[8] = 8; // bit depth
   ihdr[9] = 2; // colour type: RGB
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", zlib.deflateSync(raw)), chunk("IEND", Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk("IHDR", ihdr),
+    chunk("IDAT", zlib.deflateSync(raw)),
+    chunk("IEND", Buffer.alloc(0)),
+  ]);
 }
 
 function crc32(bytes: Buffer): number {
@@ -398,15 +479,32 @@ function crc32(bytes: Buffer): number {
   return (c ^ 0xffffffff) >>> 0;
 }
 
-
 /** A serpentine of `count` sections (straights, hairpins and a tabletop every few), not closed. */
 function serpentine(count: number): LayoutDocument {
   const doc = starterDocument("Sixty", 3);
   const sections: LayoutDocument["sections"] = [];
   for (let k = 0; sections.length < count; k++) {
     const jump = k % 3 === 1;
-    sections.push(jump ? { id: `j${k}`, kind: "jump", preset: "tabletop", faceHeight: 0.4, faceAngleDeg: 25, tableLength: 2, landingAngleDeg: 25 } : { id: `s${k}`, kind: "straight", length: 10 });
-    sections.push({ id: `t${k}`, kind: "turn", radius: 4, angleDeg: 180, direction: k % 2 ? "right" : "left" });
+    sections.push(
+      jump
+        ? {
+            id: `j${k}`,
+            kind: "jump",
+            preset: "tabletop",
+            faceHeight: 0.4,
+            faceAngleDeg: 25,
+            tableLength: 2,
+            landingAngleDeg: 25,
+          }
+        : { id: `s${k}`, kind: "straight", length: 10 },
+    );
+    sections.push({
+      id: `t${k}`,
+      kind: "turn",
+      radius: 4,
+      angleDeg: 180,
+      direction: k % 2 ? "right" : "left",
+    });
   }
   return { ...doc, sections: sections.slice(0, count) };
 }

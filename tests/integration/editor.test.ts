@@ -20,11 +20,17 @@ async function setUp() {
   return { ...roles, layout };
 }
 
-const save = (layoutId: string, body: unknown, cookie?: string) => run(() => editorAction(args(jsonRequest(`/layouts/${layoutId}/edit`, body, cookie), { layoutId })));
+const save = (layoutId: string, body: unknown, cookie?: string) =>
+  run(() => editorAction(args(jsonRequest(`/layouts/${layoutId}/edit`, body, cookie), { layoutId })));
 
 async function latestVersion(layoutId: string) {
   const d = await db();
-  const [row] = await d.select().from(layoutVersions).where(eq(layoutVersions.layoutId, layoutId)).orderBy(desc(layoutVersions.number)).limit(1);
+  const [row] = await d
+    .select()
+    .from(layoutVersions)
+    .where(eq(layoutVersions.layoutId, layoutId))
+    .orderBy(desc(layoutVersions.number))
+    .limit(1);
   return row;
 }
 
@@ -37,14 +43,23 @@ async function layoutRow(layoutId: string) {
 describe("editor loader", () => {
   it("gives a director the document and the version to save from; other roles get 403, visitors go to sign-in", async () => {
     const { layout, director, marshal, driver, outsider } = await setUp();
-    const ok = await run(() => editorLoader(args(getRequest(`/layouts/${layout.id}/edit`, director.cookie), { layoutId: layout.id })));
+    const ok = await run(() =>
+      editorLoader(args(getRequest(`/layouts/${layout.id}/edit`, director.cookie), { layoutId: layout.id })),
+    );
     expect(ok.status).toBe(200);
-    expect(ok.data).toMatchObject({ version: 1, document: { name: "Spring layout", sections: [{ id: "s1" }, { id: "t1" }, { id: "s2" }, { id: "t2" }] } });
+    expect(ok.data).toMatchObject({
+      version: 1,
+      document: { name: "Spring layout", sections: [{ id: "s1" }, { id: "t1" }, { id: "s2" }, { id: "t2" }] },
+    });
     for (const who of [marshal, driver, outsider]) {
-      const r = await run(() => editorLoader(args(getRequest(`/layouts/${layout.id}/edit`, who.cookie), { layoutId: layout.id })));
+      const r = await run(() =>
+        editorLoader(args(getRequest(`/layouts/${layout.id}/edit`, who.cookie), { layoutId: layout.id })),
+      );
       expect(r.status, who.name).toBe(403);
     }
-    const visitor = await run(() => editorLoader(args(getRequest(`/layouts/${layout.id}/edit`), { layoutId: layout.id })));
+    const visitor = await run(() =>
+      editorLoader(args(getRequest(`/layouts/${layout.id}/edit`), { layoutId: layout.id })),
+    );
     expect(visitor.status).toBe(302);
     expect(visitor.location).toMatch(/^\/sign-in\?redirectTo=/);
   });
@@ -70,9 +85,16 @@ describe("saving a drawing", () => {
     const r = await save(layout.id, { intent: "save", document: doc, baseVersion: 1 }, director.cookie);
     expect(r.status).toBe(400);
     expect(r.data).toMatchObject({ ok: false, field: "document.sections[1].radius" });
-    expect((r.data as { issues: unknown[] }).issues).toContainEqual({ path: "document.sections[1].radius", message: "must be at least 1 m" });
+    expect((r.data as { issues: unknown[] }).issues).toContainEqual({
+      path: "document.sections[1].radius",
+      message: "must be at least 1 m",
+    });
     expect((r.data as { error: string }).error).toMatch(/sections\[1\]\.radius must be at least 1 m/);
-    const missing = await save(layout.id, { intent: "save", document: starterDocument("x", 3) }, director.cookie);
+    const missing = await save(
+      layout.id,
+      { intent: "save", document: starterDocument("x", 3) },
+      director.cookie,
+    );
     expect(missing.status).toBe(400);
     expect(missing.data).toMatchObject({ field: "baseVersion" });
     expect(await latestVersion(layout.id)).toBeUndefined();
@@ -85,9 +107,21 @@ describe("saving a drawing", () => {
     const d = await db();
     await d.insert(memberships).values({ clubId: club.id, userId: second.director.id, role: "director" });
     const mine = { ...starterDocument("Spring layout", 3), marshalPoints: [{ x: 1, y: 1 }] };
-    const theirs = { ...starterDocument("Spring layout", 3), marshalPoints: [{ x: 2, y: 2 }, { x: 3, y: 3 }] };
-    expect((await save(layout.id, { intent: "save", document: mine, baseVersion: 1 }, director.cookie)).status).toBe(200);
-    const stale = await save(layout.id, { intent: "save", document: theirs, baseVersion: 1 }, second.director.cookie);
+    const theirs = {
+      ...starterDocument("Spring layout", 3),
+      marshalPoints: [
+        { x: 2, y: 2 },
+        { x: 3, y: 3 },
+      ],
+    };
+    expect(
+      (await save(layout.id, { intent: "save", document: mine, baseVersion: 1 }, director.cookie)).status,
+    ).toBe(200);
+    const stale = await save(
+      layout.id,
+      { intent: "save", document: theirs, baseVersion: 1 },
+      second.director.cookie,
+    );
     expect(stale.status).toBe(409);
     expect(stale.data).toMatchObject({ ok: false, field: "baseVersion", conflict: { yours: 1, current: 2 } });
     expect((stale.data as { error: string }).error).toMatch(/someone else saved this layout/i);
@@ -99,7 +133,13 @@ describe("saving a drawing", () => {
     const { layoutId, url } = copy.data as { layoutId: string; url: string };
     expect(url).toBe(`/layouts/${layoutId}/edit`);
     const copied = await latestVersion(layoutId);
-    expect(JSON.parse(copied.document)).toMatchObject({ name: "Spring layout (copy)", marshalPoints: [{ x: 2, y: 2 }, { x: 3, y: 3 }] });
+    expect(JSON.parse(copied.document)).toMatchObject({
+      name: "Spring layout (copy)",
+      marshalPoints: [
+        { x: 2, y: 2 },
+        { x: 3, y: 3 },
+      ],
+    });
     expect((await layoutRow(layoutId)).clubId).toBe(club.id);
   });
 
@@ -119,20 +159,40 @@ describe("saving a drawing", () => {
 
   it("answers 415 to a body that is neither JSON nor a form, and 413 to an oversized one", async () => {
     const { layout, director } = await setUp();
-    const text = new Request(`http://localhost/layouts/${layout.id}/edit`, { method: "POST", headers: { "Content-Type": "text/plain", Cookie: director.cookie }, body: "hello" });
+    const text = new Request(`http://localhost/layouts/${layout.id}/edit`, {
+      method: "POST",
+      headers: { "Content-Type": "text/plain", Cookie: director.cookie },
+      body: "hello",
+    });
     const r = await run(() => editorAction(args(text, { layoutId: layout.id })));
     expect(r.status).toBe(415);
     expect(r.data).toMatchObject({ field: "(body)" });
-    const huge = JSON.stringify({ intent: "save", baseVersion: 1, document: { padding: "x".repeat(5 * 1024 * 1024 + 10) } });
-    const big = await run(() => editorAction(args(jsonRequest(`/layouts/${layout.id}/edit`, huge, director.cookie), { layoutId: layout.id })));
+    const huge = JSON.stringify({
+      intent: "save",
+      baseVersion: 1,
+      document: { padding: "x".repeat(5 * 1024 * 1024 + 10) },
+    });
+    const big = await run(() =>
+      editorAction(
+        args(jsonRequest(`/layouts/${layout.id}/edit`, huge, director.cookie), { layoutId: layout.id }),
+      ),
+    );
     expect(big.status).toBe(413);
     expect(big.data).toMatchObject({ field: "document" });
   });
 
   it("accepts the same save as form fields (the document as JSON text)", async () => {
     const { layout, director } = await setUp();
-    const body = new URLSearchParams({ intent: "save", baseVersion: "1", document: JSON.stringify(starterDocument("Spring layout", 4)) });
-    const request = new Request(`http://localhost/layouts/${layout.id}/edit`, { method: "POST", headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: director.cookie }, body });
+    const body = new URLSearchParams({
+      intent: "save",
+      baseVersion: "1",
+      document: JSON.stringify(starterDocument("Spring layout", 4)),
+    });
+    const request = new Request(`http://localhost/layouts/${layout.id}/edit`, {
+      method: "POST",
+      headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: director.cookie },
+      body,
+    });
     const r = await run(() => editorAction(args(request, { layoutId: layout.id })));
     expect(r.status).toBe(200);
     expect((await layoutRow(layout.id)).trackWidth).toBe(4);
@@ -142,14 +202,22 @@ describe("saving a drawing", () => {
 function photoRequest(layoutId: string, bytes: Uint8Array, type: string, cookie?: string, name = "site.png") {
   const body = new FormData();
   body.set("photo", new File([bytes as BlobPart], name, { type }));
-  return new Request(`http://localhost/layouts/${layoutId}/photo`, { method: "POST", body, headers: cookie ? { Cookie: cookie } : {} });
+  return new Request(`http://localhost/layouts/${layoutId}/photo`, {
+    method: "POST",
+    body,
+    headers: cookie ? { Cookie: cookie } : {},
+  });
 }
 
 describe("site photo upload and serving", () => {
   it("stores a director's PNG and serves it to club members only, privately cached", async () => {
     const { layout, director, driver, outsider } = await setUp();
     const bytes = new Uint8Array([...PNG_HEADER, 9, 8, 7]);
-    const up = await run(() => photoAction(args(photoRequest(layout.id, bytes, "image/png", director.cookie), { layoutId: layout.id })));
+    const up = await run(() =>
+      photoAction(
+        args(photoRequest(layout.id, bytes, "image/png", director.cookie), { layoutId: layout.id }),
+      ),
+    );
     expect(up.status).toBe(201);
     const { fileId, url } = up.data as { fileId: string; url: string };
     expect(url).toBe(`/files/${fileId}`);
@@ -161,20 +229,44 @@ describe("site photo upload and serving", () => {
     expect(Array.from(new Uint8Array(await served.arrayBuffer()))).toEqual(Array.from(bytes));
     expect((await run(() => get(outsider.cookie))).status).toBe(404);
     expect((await run(() => get())).status).toBe(401);
-    expect((await run(() => fileLoader(args(getRequest("/files/nope", director.cookie), { fileId: "nope" })))).status).toBe(404);
+    expect(
+      (await run(() => fileLoader(args(getRequest("/files/nope", director.cookie), { fileId: "nope" }))))
+        .status,
+    ).toBe(404);
   });
 
   it("refuses files over 10 MB (413), other types (415), and anyone but a director (403)", async () => {
     const { layout, director, marshal } = await setUp();
     const big = new Uint8Array(10 * 1024 * 1024 + 10);
     big.set(PNG_HEADER);
-    const tooBig = await run(() => photoAction(args(photoRequest(layout.id, big, "image/png", director.cookie), { layoutId: layout.id })));
+    const tooBig = await run(() =>
+      photoAction(args(photoRequest(layout.id, big, "image/png", director.cookie), { layoutId: layout.id })),
+    );
     expect(tooBig.status).toBe(413);
     expect(tooBig.data).toMatchObject({ field: "photo", error: "The file is too large: at most 10 MB." });
-    const text = await run(() => photoAction(args(photoRequest(layout.id, new TextEncoder().encode("plain text"), "text/plain", director.cookie, "notes.txt"), { layoutId: layout.id })));
+    const text = await run(() =>
+      photoAction(
+        args(
+          photoRequest(
+            layout.id,
+            new TextEncoder().encode("plain text"),
+            "text/plain",
+            director.cookie,
+            "notes.txt",
+          ),
+          { layoutId: layout.id },
+        ),
+      ),
+    );
     expect(text.status).toBe(415);
     expect(text.data).toMatchObject({ field: "photo", error: "Only PNG or JPEG files are accepted." });
-    const asMarshal = await run(() => photoAction(args(photoRequest(layout.id, new Uint8Array(PNG_HEADER), "image/png", marshal.cookie), { layoutId: layout.id })));
+    const asMarshal = await run(() =>
+      photoAction(
+        args(photoRequest(layout.id, new Uint8Array(PNG_HEADER), "image/png", marshal.cookie), {
+          layoutId: layout.id,
+        }),
+      ),
+    );
     expect(asMarshal.status).toBe(403);
   });
 });
@@ -183,8 +275,12 @@ describe("read-only plan", () => {
   it("shows published layouts to marshals and drivers, hides drafts (404), and offers editing to directors only", async () => {
     const { club, layout, director, marshal } = await setUp();
     const published = await makeLayout(club.id, { name: "Race day", status: "published" });
-    const view = (id: string, cookie: string) => run(() => viewLoader(args(getRequest(`/layouts/${id}/plan`, cookie), { layoutId: id })));
-    expect((await view(published.id, marshal.cookie)).data).toMatchObject({ canEdit: false, document: { name: "Race day" } });
+    const view = (id: string, cookie: string) =>
+      run(() => viewLoader(args(getRequest(`/layouts/${id}/plan`, cookie), { layoutId: id })));
+    expect((await view(published.id, marshal.cookie)).data).toMatchObject({
+      canEdit: false,
+      document: { name: "Race day" },
+    });
     expect((await view(layout.id, marshal.cookie)).status).toBe(404);
     expect((await view(layout.id, director.cookie)).data).toMatchObject({ canEdit: true });
   });

@@ -2,7 +2,11 @@ import type { AnalysisOverlay, OverlayJump } from "~/lib/analysis-overlay";
 import type { LayoutSection } from "~/lib/layout-document";
 import { SKILLS, type AnalysisStatus, type Skill } from "./use-analysis";
 
-const VERDICT_TEXT: Record<OverlayJump["verdict"], string> = { "set-up": "Set up in the air", straight: "Take it straight", "cannot-clear": "Cannot clear" };
+const VERDICT_TEXT: Record<OverlayJump["verdict"], string> = {
+  "set-up": "Set up in the air",
+  straight: "Take it straight",
+  "cannot-clear": "Cannot clear",
+};
 
 /** The verdict's symbol, the same shape as its marker on the plan. */
 export function VerdictIcon({ verdict }: { verdict: OverlayJump["verdict"] }) {
@@ -44,7 +48,11 @@ export function AnalysisPanel(p: Props) {
       <div className="grid grid-cols-2 gap-2">
         <label className="space-y-1 text-xs font-medium text-ink-700">
           Car class
-          <select className="block w-full rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm" value={p.classId} onChange={(e) => p.onClass(e.target.value)}>
+          <select
+            className="block w-full rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
+            value={p.classId}
+            onChange={(e) => p.onClass(e.target.value)}
+          >
             {p.classIds.map((c) => (
               <option key={c} value={c}>
                 {c}
@@ -54,7 +62,11 @@ export function AnalysisPanel(p: Props) {
         </label>
         <label className="space-y-1 text-xs font-medium text-ink-700">
           Driver skill
-          <select className="block w-full rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm" value={p.skill} onChange={(e) => p.onSkill(e.target.value as Skill)}>
+          <select
+            className="block w-full rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
+            value={p.skill}
+            onChange={(e) => p.onSkill(e.target.value as Skill)}
+          >
             {SKILLS.map((s) => (
               <option key={s} value={s}>
                 {s}
@@ -63,10 +75,23 @@ export function AnalysisPanel(p: Props) {
           </select>
         </label>
       </div>
-      <p className="flex items-center gap-2 text-xs" role="status" aria-live="polite" data-testid="analysis-status">
-        {p.status.state === "working" ? <span className="inline-block h-2 w-2 animate-pulse rounded-full bg-pine-600" aria-hidden="true" /> : null}
+      <p
+        className="flex items-center gap-2 text-xs"
+        role="status"
+        aria-live="polite"
+        data-testid="analysis-status"
+      >
+        {p.status.state === "working" ? (
+          <span className="inline-block h-2 w-2 animate-pulse rounded-full bg-pine-600" aria-hidden="true" />
+        ) : null}
         <span className={p.status.state === "failed" ? "text-danger-700" : "text-ink-500"}>
-          {p.status.state === "working" ? "Working out the analysis…" : p.status.state === "ready" ? "Analysis up to date." : p.status.state === "idle" ? "The analysis follows your changes." : p.status.message}
+          {p.status.state === "working"
+            ? "Working out the analysis…"
+            : p.status.state === "ready"
+              ? "Analysis up to date."
+              : p.status.state === "idle"
+                ? "The analysis follows your changes."
+                : p.status.message}
         </span>
       </p>
       {o ? (
@@ -81,7 +106,13 @@ export function AnalysisPanel(p: Props) {
                 const i = index.get(j.sectionId);
                 return (
                   <li key={j.sectionId}>
-                    <button type="button" disabled={i === undefined} aria-current={i === p.selected ? "true" : undefined} className="flex w-full gap-2 rounded px-1.5 py-1 text-left hover:bg-sand-100 aria-[current=true]:bg-clay-100" onClick={() => i !== undefined && p.onSelect(i)}>
+                    <button
+                      type="button"
+                      disabled={i === undefined}
+                      aria-current={i === p.selected ? "true" : undefined}
+                      className="flex w-full gap-2 rounded px-1.5 py-1 text-left hover:bg-sand-100 aria-[current=true]:bg-clay-100"
+                      onClick={() => i !== undefined && p.onSelect(i)}
+                    >
                       <VerdictIcon verdict={j.verdict} />
                       <span>
                         <span className="font-medium">
@@ -115,11 +146,18 @@ export function AnalysisPanel(p: Props) {
           ) : null}
           {o.hidden.length || o.laneConflicts.length ? (
             <p className="mt-2 text-xs text-ink-700">
-              {o.hidden.length ? `${o.hidden.length} stretch${o.hidden.length > 1 ? "es" : ""} hidden from the driver stand (dashed on the plan). ` : ""}
-              {o.laneConflicts.length ? `${o.laneConflicts.length} place${o.laneConflicts.length > 1 ? "s" : ""} where lanes come too close (dotted).` : ""}
+              {o.hidden.length
+                ? `${o.hidden.length} stretch${o.hidden.length > 1 ? "es" : ""} hidden from the driver stand (dashed on the plan). `
+                : ""}
+              {o.laneConflicts.length
+                ? `${o.laneConflicts.length} place${o.laneConflicts.length > 1 ? "s" : ""} where lanes come too close (dotted).`
+                : ""}
             </p>
           ) : null}
-          <p className="mt-3 text-xs text-ink-500">These are estimates from a model, not a safety certification. Follow your sanctioning body's current rulebook and your site's own risk assessment.</p>
+          <p className="mt-3 text-xs text-ink-500">
+            These are estimates from a model, not a safety certification. Follow your sanctioning body's
+            current rulebook and your site's own risk assessment.
+          </p>
         </div>
       ) : null}
     </div>

@@ -10,7 +10,10 @@ export function ScaleBar({ scale, units }: { scale: number; units: LengthUnit })
   const { step, metres } = niceStep(scale, units, 60);
   const px = metres * scale;
   return (
-    <div className="pointer-events-none absolute bottom-2 left-2 rounded bg-white/85 px-2 py-1 text-xs text-ink-700 shadow-sm" aria-label={`Scale: the bar is ${step} ${units}`}>
+    <div
+      className="pointer-events-none absolute bottom-2 left-2 rounded bg-white/85 px-2 py-1 text-xs text-ink-700 shadow-sm"
+      aria-label={`Scale: the bar is ${step} ${units}`}
+    >
       <div className="h-1.5 border-x-2 border-b-2 border-ink-700" style={{ width: `${px}px` }} />
       <span className="font-medium">
         {step} {units}
@@ -25,12 +28,23 @@ export function ScaleBar({ scale, units }: { scale: number; units: LengthUnit })
 export function SpeedLegend({ overlay, stale }: { overlay: AnalysisOverlay; stale: boolean }) {
   const { min, max } = overlay.speedRange;
   return (
-    <figure className={`pointer-events-none absolute right-2 bottom-2 rounded bg-white/90 px-2 py-1.5 text-xs text-ink-700 shadow-sm ${stale ? "opacity-60" : ""}`}>
+    <figure
+      className={`pointer-events-none absolute right-2 bottom-2 rounded bg-white/90 px-2 py-1.5 text-xs text-ink-700 shadow-sm ${stale ? "opacity-60" : ""}`}
+    >
       <figcaption className="font-semibold">Speed ({overlay.classId})</figcaption>
       <svg width="150" height="14" aria-hidden="true" className="mt-1 block">
         {Array.from({ length: SPEED_BINS }, (_, b) => {
           const s = binStyle(b);
-          return <rect key={b} x={(b * 150) / SPEED_BINS} y={7 - s.width / 2} width={150 / SPEED_BINS + 0.5} height={s.width} fill={s.colour} />;
+          return (
+            <rect
+              key={b}
+              x={(b * 150) / SPEED_BINS}
+              y={7 - s.width / 2}
+              width={150 / SPEED_BINS + 0.5}
+              height={s.width}
+              fill={s.colour}
+            />
+          );
         })}
       </svg>
       <div className="flex w-[150px] justify-between tabular-nums">
@@ -46,7 +60,8 @@ export function SpeedLegend({ overlay, stale }: { overlay: AnalysisOverlay; stal
 }
 
 export function ZoomControls({ onZoom, onFit }: { onZoom(factor: number): void; onFit(): void }) {
-  const cls = "h-8 min-w-8 rounded border border-ink-300 bg-white px-2 text-sm font-medium text-ink-900 shadow-sm hover:bg-sand-100";
+  const cls =
+    "h-8 min-w-8 rounded border border-ink-300 bg-white px-2 text-sm font-medium text-ink-900 shadow-sm hover:bg-sand-100";
   return (
     <div className="absolute top-2 right-2 flex gap-1">
       <button type="button" className={cls} onClick={() => onZoom(1.25)} aria-label="Zoom in">

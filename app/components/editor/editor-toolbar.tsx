@@ -29,7 +29,11 @@ interface Props {
 export function EditorToolbar(p: Props) {
   const where = p.sectionSelected ? "after the selected section" : "at the end of the lap";
   return (
-    <div role="toolbar" aria-label="Drawing tools" className="flex flex-wrap items-end gap-x-4 gap-y-2 rounded-md border border-ink-300/60 bg-white/70 p-2">
+    <div
+      role="toolbar"
+      aria-label="Drawing tools"
+      className="flex flex-wrap items-end gap-x-4 gap-y-2 rounded-md border border-ink-300/60 bg-white/70 p-2"
+    >
       <fieldset className="flex flex-wrap items-center gap-1.5">
         <legend className="sr-only">Add a section {where}</legend>
         <span className="text-xs text-ink-500">Add {where}:</span>
@@ -45,7 +49,12 @@ export function EditorToolbar(p: Props) {
         <label className="sr-only" htmlFor="add-jump-preset">
           Jump shape to add
         </label>
-        <select id="add-jump-preset" className="rounded-md border border-ink-300 bg-white px-1.5 py-1.5 text-sm" value={p.preset} onChange={(e) => p.onPreset(e.target.value as JumpPreset)}>
+        <select
+          id="add-jump-preset"
+          className="rounded-md border border-ink-300 bg-white px-1.5 py-1.5 text-sm"
+          value={p.preset}
+          onChange={(e) => p.onPreset(e.target.value as JumpPreset)}
+        >
           {JUMP_PRESETS.map((x) => (
             <option key={x} value={x}>
               {JUMP_PRESET_LABELS[x]}
@@ -63,7 +72,12 @@ export function EditorToolbar(p: Props) {
         <button type="button" className={toolClass} disabled={!p.sectionSelected} onClick={p.onDuplicate}>
           Duplicate
         </button>
-        <button type="button" className={toolClass} disabled={!p.sectionSelected} onClick={() => p.onMove(-1)}>
+        <button
+          type="button"
+          className={toolClass}
+          disabled={!p.sectionSelected}
+          onClick={() => p.onMove(-1)}
+        >
           Move earlier
         </button>
         <button type="button" className={toolClass} disabled={!p.sectionSelected} onClick={() => p.onMove(1)}>
@@ -71,25 +85,49 @@ export function EditorToolbar(p: Props) {
         </button>
       </div>
       <div className="flex items-center gap-1.5">
-        <button type="button" className={toolClass} disabled={!p.canUndo} onClick={p.onUndo} aria-keyshortcuts="Control+Z">
+        <button
+          type="button"
+          className={toolClass}
+          disabled={!p.canUndo}
+          onClick={p.onUndo}
+          aria-keyshortcuts="Control+Z"
+        >
           Undo
         </button>
-        <button type="button" className={toolClass} disabled={!p.canRedo} onClick={p.onRedo} aria-keyshortcuts="Control+Shift+Z">
+        <button
+          type="button"
+          className={toolClass}
+          disabled={!p.canRedo}
+          onClick={p.onRedo}
+          aria-keyshortcuts="Control+Shift+Z"
+        >
           Redo
         </button>
       </div>
       <div className="flex flex-wrap items-center gap-3 text-sm">
         <label className="inline-flex items-center gap-1.5">
-          <input type="checkbox" checked={p.snap.lengths} onChange={(e) => p.onSnap({ ...p.snap, lengths: e.target.checked })} />
+          <input
+            type="checkbox"
+            checked={p.snap.lengths}
+            onChange={(e) => p.onSnap({ ...p.snap, lengths: e.target.checked })}
+          />
           Snap lengths (0.1 m)
         </label>
         <label className="inline-flex items-center gap-1.5">
-          <input type="checkbox" checked={p.snap.angles} onChange={(e) => p.onSnap({ ...p.snap, angles: e.target.checked })} />
+          <input
+            type="checkbox"
+            checked={p.snap.angles}
+            onChange={(e) => p.onSnap({ ...p.snap, angles: e.target.checked })}
+          />
           Snap angles (5°)
         </label>
         <label className="inline-flex items-center gap-1.5">
           Plan in
-          <select className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm" value={p.units} onChange={(e) => p.onUnits(e.target.value as LengthUnit)}>
+          <select
+            className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
+            value={p.units}
+            onChange={(e) => p.onUnits(e.target.value as LengthUnit)}
+          >
             <option value="m">metres</option>
             <option value="ft">feet</option>
           </select>

@@ -26,7 +26,9 @@ export function HelpPanel() {
         </tbody>
       </table>
       <p className="text-xs text-ink-700">
-        Calibrating the photo: choose <em>Calibrate the scale</em>, click two points on the photo whose real distance you know, type that distance in metres and choose <em>Set the scale</em>. The first point stays where it is; then move the photo under the track.
+        Calibrating the photo: choose <em>Calibrate the scale</em>, click two points on the photo whose real
+        distance you know, type that distance in metres and choose <em>Set the scale</em>. The first point
+        stays where it is; then move the photo under the track.
       </p>
     </div>
   );

@@ -1,7 +1,12 @@
 import { useRef, useState } from "react";
 import { flyJump } from "~/analysis/flight";
 import { jumpProfile } from "~/analysis/jump-profile";
-import { addProfilePoint, dragProfileHandle, profileHandles, removeProfilePoint } from "~/lib/editor/profile-edit";
+import {
+  addProfilePoint,
+  dragProfileHandle,
+  profileHandles,
+  removeProfilePoint,
+} from "~/lib/editor/profile-edit";
 import type { SnapSettings } from "~/lib/editor/snap";
 import type { JumpSection } from "~/lib/layout-document";
 
@@ -35,8 +40,14 @@ export function JumpSideView({ section, snap, takeoffSpeed, onChange, onGestureE
   const sy = Math.min(sx * 4, (H - 2 * PAD - 10) / maxH);
   const X = (d: number) => PAD + d * sx;
   const Y = (h: number) => H - PAD - h * sy;
-  const ground = `M ${X(-0.2)} ${Y(0)} ` + p.d.map((d, k) => `L ${X(d)} ${Y(p.h[k])}`).join(" ") + ` L ${X(length)} ${Y(0)} L ${X(length)} ${H} L ${X(-0.2)} ${H} Z`;
-  const ramp = p.d.slice(p.landingStartIndex, p.landingEndIndex + 1).map((d, k) => `${k ? "L" : "M"} ${X(d)} ${Y(p.h[p.landingStartIndex + k])}`).join(" ");
+  const ground =
+    `M ${X(-0.2)} ${Y(0)} ` +
+    p.d.map((d, k) => `L ${X(d)} ${Y(p.h[k])}`).join(" ") +
+    ` L ${X(length)} ${Y(0)} L ${X(length)} ${H} L ${X(-0.2)} ${H} Z`;
+  const ramp = p.d
+    .slice(p.landingStartIndex, p.landingEndIndex + 1)
+    .map((d, k) => `${k ? "L" : "M"} ${X(d)} ${Y(p.h[p.landingStartIndex + k])}`)
+    .join(" ");
   const handles = profileHandles(section);
 
   const toProfile = (e: React.PointerEvent) => {
@@ -70,9 +81,30 @@ export function JumpSideView({ section, snap, takeoffSpeed, onChange, onGestureE
       >
         <path d={ground} fill="#e7e0d2" stroke="#8c7b5b" strokeWidth="1.5" />
         {ramp ? <path d={ramp} fill="none" stroke="#9c4518" strokeWidth="3" /> : null}
-        <line x1={X(p.sweetSpot)} x2={X(p.sweetSpot)} y1={Y(0) + 4} y2={PAD} stroke="#1f5c4c" strokeDasharray="2 3" />
-        {flight ? <polyline points={flight.map(([d, h]) => `${X(d)},${Y(h)}`).join(" ")} fill="none" stroke="#d2692f" strokeWidth="1.5" strokeDasharray="5 3" /> : null}
-        <text x={X(p.d[p.lipIndex])} y={Y(p.h[p.lipIndex]) - 8} fontSize="10" textAnchor="middle" fill="#9c4518">
+        <line
+          x1={X(p.sweetSpot)}
+          x2={X(p.sweetSpot)}
+          y1={Y(0) + 4}
+          y2={PAD}
+          stroke="#1f5c4c"
+          strokeDasharray="2 3"
+        />
+        {flight ? (
+          <polyline
+            points={flight.map(([d, h]) => `${X(d)},${Y(h)}`).join(" ")}
+            fill="none"
+            stroke="#d2692f"
+            strokeWidth="1.5"
+            strokeDasharray="5 3"
+          />
+        ) : null}
+        <text
+          x={X(p.d[p.lipIndex])}
+          y={Y(p.h[p.lipIndex]) - 8}
+          fontSize="10"
+          textAnchor="middle"
+          fill="#9c4518"
+        >
           lip
         </text>
         {handles.map((hd) => {
@@ -113,17 +145,32 @@ export function JumpSideView({ section, snap, takeoffSpeed, onChange, onGestureE
         })}
       </svg>
       <figcaption className="flex flex-wrap justify-between gap-2 text-xs text-ink-500">
-        <span>Heights drawn ×{(sy / sx).toFixed(1)} · length {p.length.toFixed(2)} m</span>
         <span>
-          <span className="text-clay-700">━</span> landing, ┆ planned touchdown{flight ? ", ╌ flight at the planned speed" : ""}
+          Heights drawn ×{(sy / sx).toFixed(1)} · length {p.length.toFixed(2)} m
+        </span>
+        <span>
+          <span className="text-clay-700">━</span> landing, ┆ planned touchdown
+          {flight ? ", ╌ flight at the planned speed" : ""}
         </span>
       </figcaption>
       {section.preset === "custom" ? (
         <div className="flex flex-wrap gap-2 text-xs">
-          <button type="button" className="rounded border border-ink-300 px-2 py-1 hover:bg-sand-100" disabled={picked === null && section.profile.length < 2} onClick={() => onChange(addProfilePoint(section, picked ?? 0), `profile-add-${Date.now()}`)}>
+          <button
+            type="button"
+            className="rounded border border-ink-300 px-2 py-1 hover:bg-sand-100"
+            disabled={picked === null && section.profile.length < 2}
+            onClick={() => onChange(addProfilePoint(section, picked ?? 0), `profile-add-${Date.now()}`)}
+          >
             Add a point after {picked === null ? "the first point" : `point ${picked + 1}`}
           </button>
-          <button type="button" className="rounded border border-ink-300 px-2 py-1 hover:bg-sand-100 disabled:opacity-50" disabled={picked === null} onClick={() => picked !== null && onChange(removeProfilePoint(section, picked), `profile-remove-${Date.now()}`)}>
+          <button
+            type="button"
+            className="rounded border border-ink-300 px-2 py-1 hover:bg-sand-100 disabled:opacity-50"
+            disabled={picked === null}
+            onClick={() =>
+              picked !== null && onChange(removeProfilePoint(section, picked), `profile-remove-${Date.now()}`)
+            }
+          >
             Remove {picked === null ? "a point" : `point ${picked + 1}`}
           </button>
         </div>
@@ -141,7 +188,10 @@ function flightPath(p: ReturnType<typeof jumpProfile>, speed: number): [number, 
     const pts: [number, number][] = [];
     for (let k = 0; k <= 24; k++) {
       const t = (f.airtime * k) / 24;
-      pts.push([lip.x + speed * Math.cos(p.faceAngle) * t, lip.z + speed * Math.sin(p.faceAngle) * t - (9.81 * t * t) / 2]);
+      pts.push([
+        lip.x + speed * Math.cos(p.faceAngle) * t,
+        lip.z + speed * Math.sin(p.faceAngle) * t - (9.81 * t * t) / 2,
+      ]);
     }
     return pts;
   } catch {

@@ -12,7 +12,13 @@ import { initialPlacement, type Background } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";
 import { canRedo, canUndo } from "~/lib/editor/history";
 import { editorReducer, initialEditorState, isDirty, type Selection } from "~/lib/editor/editor-state";
-import { changeSectionKind, insertSection, moveSection, newSection, type NewSectionKind } from "~/lib/editor/section-ops";
+import {
+  changeSectionKind,
+  insertSection,
+  moveSection,
+  newSection,
+  type NewSectionKind,
+} from "~/lib/editor/section-ops";
 import { addBoundaryPoint, addMarshalPoint, placeDriverStand } from "~/lib/editor/site-ops";
 import { DEFAULT_SNAP, type SnapSettings } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
@@ -65,12 +71,29 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);
 
-  const change = useCallback((next: LayoutDocument, gesture?: string, selection?: Selection) => dispatch({ type: "change", doc: next, gesture, selection }), []);
+  const change = useCallback(
+    (next: LayoutDocument, gesture?: string, selection?: Selection) =>
+      dispatch({ type: "change", doc: next, gesture, selection }),
+    [],
+  );
   const endGesture = useCallback(() => dispatch({ type: "end-gesture" }), []);
   const select = useCallback((selection: Selection) => dispatch({ type: "select", selection }), []);
-  const onSaved = useCallback((saved: LayoutDocument, v: number) => dispatch({ type: "saved", doc: saved, version: v }), []);
-  const onReloaded = useCallback((loaded: LayoutDocument, v: number) => dispatch({ type: "reloaded", doc: loaded, version: v }), []);
-  const saver = useSave({ layoutId: layout.id, present: doc, baseVersion: state.baseVersion, onSaved, onReloaded, beforeLeave: guard.allowNextNavigation });
+  const onSaved = useCallback(
+    (saved: LayoutDocument, v: number) => dispatch({ type: "saved", doc: saved, version: v }),
+    [],
+  );
+  const onReloaded = useCallback(
+    (loaded: LayoutDocument, v: number) => dispatch({ type: "reloaded", doc: loaded, version: v }),
+    [],
+  );
+  const saver = useSave({
+    layoutId: layout.id,
+    present: doc,
+    baseVersion: state.baseVersion,
+    onSaved,
+    onReloaded,
+    beforeLeave: guard.allowNextNavigation,
+  });
 
   const selected = state.selection?.kind === "section" ? state.selection.index : null;
   const add = (kind: NewSectionKind) => {
@@ -87,8 +110,13 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
     const out = closeLoop(doc);
     if (!out.ok) return setCloseMessage(`Could not close the loop: ${out.reason}.`);
     change(out.document);
-    const what = out.changes.map((c) => `section ${c.index + 1} ${c.field === "angleDeg" ? "angle" : c.field} ${c.from.toFixed(1)} → ${c.to.toFixed(1)}${c.field === "angleDeg" ? "°" : " m"}`);
-    setCloseMessage(what.length ? `Closed by changing ${what.join(", ")}. Undo brings the old values back.` : null);
+    const what = out.changes.map(
+      (c) =>
+        `section ${c.index + 1} ${c.field === "angleDeg" ? "angle" : c.field} ${c.from.toFixed(1)} → ${c.to.toFixed(1)}${c.field === "angleDeg" ? "°" : " m"}`,
+    );
+    setCloseMessage(
+      what.length ? `Closed by changing ${what.join(", ")}. Undo brings the old values back.` : null,
+    );
   };
   const planClick = (p: Point) => {
     if (mode === "marshal") {
@@ -127,8 +155,19 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
     !blocked,
   );
 
-  const overlayJump = selected !== null ? analysis.overlay?.jumps.find((j) => j.sectionId === doc.sections[selected]?.id) : undefined;
-  const saveText = saver.busy ? "Saving…" : saver.outcome.kind === "refused" ? saver.outcome.message : dirty ? "Unsaved changes" : saver.outcome.kind === "saved" ? `Saved as version ${saver.outcome.version}` : `Version ${state.baseVersion}, no unsaved changes`;
+  const overlayJump =
+    selected !== null
+      ? analysis.overlay?.jumps.find((j) => j.sectionId === doc.sections[selected]?.id)
+      : undefined;
+  const saveText = saver.busy
+    ? "Saving…"
+    : saver.outcome.kind === "refused"
+      ? saver.outcome.message
+      : dirty
+        ? "Unsaved changes"
+        : saver.outcome.kind === "saved"
+          ? `Saved as version ${saver.outcome.version}`
+          : `Version ${state.baseVersion}, no unsaved changes`;
 
   return (
     <div className="space-y-3">
@@ -138,12 +177,23 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
             <Link to={`/clubs/${club.id}`} className="underline">
               {club.name}
             </Link>{" "}
-            · <Link to={`/layouts/${layout.id}`} className="underline">Layout page</Link> · <Link to={`/layouts/${layout.id}/plan`} className="underline">Read-only plan</Link>
+            ·{" "}
+            <Link to={`/layouts/${layout.id}`} className="underline">
+              Layout page
+            </Link>{" "}
+            ·{" "}
+            <Link to={`/layouts/${layout.id}/plan`} className="underline">
+              Read-only plan
+            </Link>
           </p>
           <h1 className="truncate text-xl font-semibold">Editing {doc.name}</h1>
         </div>
         <div className="ml-auto flex flex-wrap items-center gap-2">
-          <span className={`text-sm ${saver.outcome.kind === "refused" ? "text-danger-700" : "text-ink-500"}`} role={saver.outcome.kind === "refused" ? "alert" : "status"} data-testid="save-status">
+          <span
+            className={`text-sm ${saver.outcome.kind === "refused" ? "text-danger-700" : "text-ink-500"}`}
+            role={saver.outcome.kind === "refused" ? "alert" : "status"}
+            data-testid="save-status"
+          >
             {saveText}
           </span>
           <Button variant="secondary" onClick={saver.saveCopy} disabled={saver.busy}>
@@ -188,7 +238,11 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         </p>
       ) : null}
       <div className="flex flex-col gap-3 lg:flex-row">
-        <div className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1" aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard" role="application">
+        <div
+          className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
+          aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard"
+          role="application"
+        >
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>
@@ -214,7 +268,10 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
             )}
           </ClientOnly>
         </div>
-        <aside className="space-y-2 lg:max-h-[calc(62vh+9rem)] lg:w-[22rem] lg:overflow-y-auto" aria-label="Editing panels">
+        <aside
+          className="space-y-2 lg:max-h-[calc(62vh+9rem)] lg:w-[22rem] lg:overflow-y-auto"
+          aria-label="Editing panels"
+        >
           <Panel title={selected !== null ? "Selected section" : "Sections"} open>
             {selected !== null ? (
               <SectionPanel
@@ -223,20 +280,55 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
                 resolved={sections[selected]}
                 snap={snap}
                 overlayJump={overlayJump}
-                onSection={(s, g) => change({ ...doc, sections: doc.sections.map((x, i) => (i === selected ? s : x)) }, g)}
+                onSection={(s, g) =>
+                  change({ ...doc, sections: doc.sections.map((x, i) => (i === selected ? s : x)) }, g)
+                }
                 onPreset={(p) => change(changeSectionKind(doc, selected, "jump", p))}
                 onGestureEnd={endGesture}
               />
             ) : (
               <p className="text-sm text-ink-500">Click a section on the plan or in the list to change it.</p>
             )}
-            <SectionsList sections={doc.sections} resolved={sections} selected={selected} onSelect={(index) => select({ kind: "section", index })} />
+            <SectionsList
+              sections={doc.sections}
+              resolved={sections}
+              selected={selected}
+              onSelect={(index) => select({ kind: "section", index })}
+            />
           </Panel>
           <Panel title="Live analysis" open>
-            <AnalysisPanel overlay={analysis.overlay} status={analysis.status} stale={analysis.overlayDoc !== doc} sections={doc.sections} classIds={doc.carClasses} classId={classId} skill={skill} selected={selected} onClass={setClassId} onSkill={setSkill} onSelect={(index) => select({ kind: "section", index })} />
+            <AnalysisPanel
+              overlay={analysis.overlay}
+              status={analysis.status}
+              stale={analysis.overlayDoc !== doc}
+              sections={doc.sections}
+              classIds={doc.carClasses}
+              classId={classId}
+              skill={skill}
+              selected={selected}
+              onClass={setClassId}
+              onSkill={setSkill}
+              onSelect={(index) => select({ kind: "section", index })}
+            />
           </Panel>
-          <Panel title="Site: width, stand, marshals, boundary" open={state.selection !== null && state.selection.kind !== "section" && state.selection.kind !== "photo"}>
-            <SitePanel doc={doc} selection={state.selection} mode={mode} bounds={bounds} onMode={setMode} onChange={change} onSelect={select} onGestureEnd={endGesture} />
+          <Panel
+            title="Site: width, stand, marshals, boundary"
+            open={
+              state.selection !== null &&
+              state.selection.kind !== "section" &&
+              state.selection.kind !== "photo"
+            }
+          >
+            <SitePanel
+              doc={doc}
+              selection={state.selection}
+              mode={mode}
+              bounds={bounds}
+              onMode={setMode}
+              onChange={change}
+              onSelect={select}
+              onGestureEnd={endGesture}
+            />
           </Panel>
           <Panel title="Site photo" open={mode === "calibrate" || state.selection?.kind === "photo"}>
             <PhotoPanel
@@ -257,7 +349,15 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         </aside>
       </div>
       <LeaveDialog blocker={guard.blocker} />
-      {saver.outcome.kind === "conflict" ? <ConflictDialog message={saver.outcome.message} busy={saver.busy} onReload={saver.reload} onCopy={saver.saveCopy} onClose={saver.dismiss} /> : null}
+      {saver.outcome.kind === "conflict" ? (
+        <ConflictDialog
+          message={saver.outcome.message}
+          busy={saver.busy}
+          onReload={saver.reload}
+          onCopy={saver.saveCopy}
+          onClose={saver.dismiss}
+        />
+      ) : null}
     </div>
   );
 }

@@ -22,7 +22,17 @@ export interface NumberFieldProps {
  * A number input that applies each valid value at once and shows why a value is refused beside
  * it (keeping what was typed, so nothing is lost while correcting it).
  */
-export function NumberField({ label, unit, value, decimals = 2, step, hint, onValue, onDone, disabled }: NumberFieldProps) {
+export function NumberField({
+  label,
+  unit,
+  value,
+  decimals = 2,
+  step,
+  hint,
+  onValue,
+  onDone,
+  disabled,
+}: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useState(() => format(value, decimals));
   const [error, setError] = useState<string | null>(null);

@@ -39,8 +39,16 @@ export function PhotoPanel(p: Props) {
     try {
       const form = new FormData();
       form.append("photo", file);
-      const response = await fetch(`/layouts/${p.layoutId}/photo`, { method: "POST", body: form, credentials: "same-origin" });
-      const body = (await response.json().catch(() => null)) as { fileId?: string; url?: string; error?: string } | null;
+      const response = await fetch(`/layouts/${p.layoutId}/photo`, {
+        method: "POST",
+        body: form,
+        credentials: "same-origin",
+      });
+      const body = (await response.json().catch(() => null)) as {
+        fileId?: string;
+        url?: string;
+        error?: string;
+      } | null;
       if (!response.ok || !body?.fileId || !body.url) {
         setUploadError(body?.error ?? `The upload failed (error ${response.status}).`);
         return;
@@ -110,19 +118,40 @@ export function PhotoPanel(p: Props) {
       {bg ? (
         <>
           <p className="text-xs text-ink-500 tabular-nums" data-testid="photo-scale">
-            Scale: 1 pixel = {bg.metresPerPixel.toPrecision(3)} m ({(1 / bg.metresPerPixel).toFixed(1)} pixels per metre)
+            Scale: 1 pixel = {bg.metresPerPixel.toPrecision(3)} m ({(1 / bg.metresPerPixel).toFixed(1)} pixels
+            per metre)
           </p>
           {calibrating ? (
-            <form className="space-y-2 rounded-md border border-clay-500 bg-clay-100/50 p-2" onSubmit={applyCalibration} aria-label="Calibrate the photo's scale">
+            <form
+              className="space-y-2 rounded-md border border-clay-500 bg-clay-100/50 p-2"
+              onSubmit={applyCalibration}
+              aria-label="Calibrate the photo's scale"
+            >
               <p className="text-xs font-medium" role="status">
-                {p.calibrationPoints.length === 0 ? "Click a first point on the photo whose distance to another you know (two fence posts, a building's corners)." : p.calibrationPoints.length === 1 ? "Now click the second point." : "Type the real distance between the two points."}
+                {p.calibrationPoints.length === 0
+                  ? "Click a first point on the photo whose distance to another you know (two fence posts, a building's corners)."
+                  : p.calibrationPoints.length === 1
+                    ? "Now click the second point."
+                    : "Type the real distance between the two points."}
               </p>
               {p.calibrationPoints.length === 2 ? (
                 <div className="space-y-1">
                   <label htmlFor="calibration-distance" className="block text-xs font-medium text-ink-700">
                     Distance between the points (m)
                   </label>
-                  <input id="calibration-distance" type="number" step="any" min="0" inputMode="decimal" autoFocus className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm" value={distance} aria-invalid={calError ? true : undefined} aria-describedby={calError ? "calibration-error" : undefined} onChange={(e) => setDistance(e.target.value)} />
+                  <input
+                    id="calibration-distance"
+                    type="number"
+                    step="any"
+                    min="0"
+                    inputMode="decimal"
+                    autoFocus
+                    className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
+                    value={distance}
+                    aria-invalid={calError ? true : undefined}
+                    aria-describedby={calError ? "calibration-error" : undefined}
+                    onChange={(e) => setDistance(e.target.value)}
+                  />
                   {calError ? (
                     <p id="calibration-error" role="alert" className="text-xs text-danger-700">
                       {calError}
@@ -132,21 +161,37 @@ export function PhotoPanel(p: Props) {
               ) : null}
               <div className="flex gap-1.5">
                 {p.calibrationPoints.length === 2 ? (
-                  <button type="submit" className="rounded-md bg-pine-700 px-2.5 py-1.5 text-sm font-medium text-white hover:bg-pine-800">
+                  <button
+                    type="submit"
+                    className="rounded-md bg-pine-700 px-2.5 py-1.5 text-sm font-medium text-white hover:bg-pine-800"
+                  >
                     Set the scale
                   </button>
                 ) : null}
-                <button type="button" className={toolClass} onClick={() => (p.onResetCalibration(), setCalError(null), p.onMode("select"))}>
+                <button
+                  type="button"
+                  className={toolClass}
+                  onClick={() => (p.onResetCalibration(), setCalError(null), p.onMode("select"))}
+                >
                   Cancel
                 </button>
               </div>
             </form>
           ) : (
             <div className="flex flex-wrap gap-1.5">
-              <button type="button" className={toolClass} onClick={() => (p.onResetCalibration(), p.onMode("calibrate"))}>
+              <button
+                type="button"
+                className={toolClass}
+                onClick={() => (p.onResetCalibration(), p.onMode("calibrate"))}
+              >
                 Calibrate the scale
               </button>
-              <button type="button" className={toolClass + (p.mode === "move-photo" ? " border-clay-500 bg-clay-100" : "")} aria-pressed={p.mode === "move-photo"} onClick={() => p.onMode(p.mode === "move-photo" ? "select" : "move-photo")}>
+              <button
+                type="button"
+                className={toolClass + (p.mode === "move-photo" ? " border-clay-500 bg-clay-100" : "")}
+                aria-pressed={p.mode === "move-photo"}
+                onClick={() => p.onMode(p.mode === "move-photo" ? "select" : "move-photo")}
+              >
                 {p.mode === "move-photo" ? "Done moving" : "Move the photo"}
               </button>
             </div>
@@ -155,12 +200,40 @@ export function PhotoPanel(p: Props) {
             <label htmlFor="photo-opacity" className="block text-xs font-medium text-ink-700">
               Opacity ({Math.round(bg.opacity * 100)} %)
             </label>
-            <input id="photo-opacity" type="range" min={0} max={100} step={5} className="w-full" value={Math.round(bg.opacity * 100)} onChange={(e) => p.onBackground({ ...bg, opacity: Number(e.target.value) / 100 }, "photo-opacity")} onPointerUp={p.onGestureEnd} onKeyUp={p.onGestureEnd} />
+            <input
+              id="photo-opacity"
+              type="range"
+              min={0}
+              max={100}
+              step={5}
+              className="w-full"
+              value={Math.round(bg.opacity * 100)}
+              onChange={(e) =>
+                p.onBackground({ ...bg, opacity: Number(e.target.value) / 100 }, "photo-opacity")
+              }
+              onPointerUp={p.onGestureEnd}
+              onKeyUp={p.onGestureEnd}
+            />
           </div>
-          <NumberField label="Rotation" unit="deg" value={bg.rotationDeg} decimals={1} onValue={(v) => (Math.abs(v) > 360 ? "must be between -360 and 360 deg" : (p.onBackground({ ...bg, rotationDeg: v }, "photo-rotation"), null))} onDone={p.onGestureEnd} />
+          <NumberField
+            label="Rotation"
+            unit="deg"
+            value={bg.rotationDeg}
+            decimals={1}
+            onValue={(v) =>
+              Math.abs(v) > 360
+                ? "must be between -360 and 360 deg"
+                : (p.onBackground({ ...bg, rotationDeg: v }, "photo-rotation"), null)
+            }
+            onDone={p.onGestureEnd}
+          />
           <div className="flex flex-wrap items-center gap-3">
             <label className="inline-flex items-center gap-1.5">
-              <input type="checkbox" checked={bg.hidden} onChange={(e) => p.onBackground({ ...bg, hidden: e.target.checked })} />
+              <input
+                type="checkbox"
+                checked={bg.hidden}
+                onChange={(e) => p.onBackground({ ...bg, hidden: e.target.checked })}
+              />
               Hide the photo
             </label>
             <button type="button" className={toolClass} onClick={() => p.onBackground(undefined)}>

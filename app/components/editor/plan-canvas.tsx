@@ -25,7 +25,15 @@ import { CalibrationMarks, VerdictMarkers } from "./canvas/verdict-markers";
 
 const RAD = 180 / Math.PI;
 
-type Press = { x: number; y: number; lastX: number; lastY: number; moved: boolean; target: Selection | "empty"; photo: boolean };
+type Press = {
+  x: number;
+  y: number;
+  lastX: number;
+  lastY: number;
+  moved: boolean;
+  target: Selection | "empty";
+  photo: boolean;
+};
 
 export default function PlanCanvas(props: PlanCanvasProps) {
   const { doc, sections, selection, editable, mode, overlay } = props;
@@ -50,7 +58,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   useEffect(() => {
     const el = wrapper.current;
     if (!el) return;
-    const observer = new ResizeObserver(([entry]) => setSize({ width: Math.floor(entry.contentRect.width), height: Math.floor(entry.contentRect.height) }));
+    const observer = new ResizeObserver(([entry]) =>
+      setSize({ width: Math.floor(entry.contentRect.width), height: Math.floor(entry.contentRect.height) }),
+    );
     observer.observe(el);
     return () => observer.disconnect();
   }, []);
@@ -78,7 +88,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   }, []);
 
   useEffect(() => {
-    const typing = (t: EventTarget | null) => t instanceof HTMLElement && (t.isContentEditable || ["INPUT", "TEXTAREA", "SELECT", "BUTTON"].includes(t.tagName));
+    const typing = (t: EventTarget | null) =>
+      t instanceof HTMLElement &&
+      (t.isContentEditable || ["INPUT", "TEXTAREA", "SELECT", "BUTTON"].includes(t.tagName));
     const down = (e: KeyboardEvent) => {
       if (e.code === "Space" && !typing(e.target)) {
         space.current = true;
@@ -136,7 +148,11 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     pr.lastX = p.x;
     pr.lastY = p.y;
     if (pr.photo && doc.background) {
-      props.onChange({ ...doc, background: moveBackground(doc.background, dx / view.scale, -dy / view.scale) }, photoGesture.current, { kind: "photo" });
+      props.onChange(
+        { ...doc, background: moveBackground(doc.background, dx / view.scale, -dy / view.scale) },
+        photoGesture.current,
+        { kind: "photo" },
+      );
     } else {
       setView((v) => (v ? panBy(v, dx, dy) : v));
     }
@@ -173,12 +189,29 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       data-testid="plan-canvas"
     >
       {view && size.width ? (
-        <Stage ref={stageRef} width={size.width} height={size.height} onDragStart={() => setDragging(true)} onDragEnd={() => setDragging(false)}>
+        <Stage
+          ref={stageRef}
+          width={size.width}
+          height={size.height}
+          onDragStart={() => setDragging(true)}
+          onDragEnd={() => setDragging(false)}
+        >
           <Layer listening={false}>
             <GridShape view={view} width={size.width} height={size.height} units={props.units} />
             <Group x={view.ox} y={view.oy} scaleX={view.scale} scaleY={-view.scale}>
-              {props.photoUrl && doc.background ? <PhotoImage url={props.photoUrl} background={doc.background} onSize={props.onPhotoSize} /> : null}
-              {doc.siteBoundary ? <Line points={doc.siteBoundary.flat()} closed stroke={PLAN.boundary} strokeWidth={2} dash={[10, 6]} strokeScaleEnabled={false} /> : null}
+              {props.photoUrl && doc.background ? (
+                <PhotoImage url={props.photoUrl} background={doc.background} onSize={props.onPhotoSize} />
+              ) : null}
+              {doc.siteBoundary ? (
+                <Line
+                  points={doc.siteBoundary.flat()}
+                  closed
+                  stroke={PLAN.boundary}
+                  strokeWidth={2}
+                  dash={[10, 6]}
+                  strokeScaleEnabled={false}
+                />
+              ) : null}
             </Group>
           </Layer>
           <Layer listening={!dragging}>
@@ -199,13 +232,40 @@ export default function PlanCanvas(props: PlanCanvasProps) {
               ))}
             </Group>
           </Layer>
-          <Layer listening={false}>{overlay ? <OverlayShape overlay={overlay} view={view} stale={props.overlayStale} /> : null}</Layer>
+          <Layer listening={false}>
+            {overlay ? <OverlayShape overlay={overlay} view={view} stale={props.overlayStale} /> : null}
+          </Layer>
           <Layer>
             <StartMarker doc={doc} view={view} />
-            {overlay ? <VerdictMarkers jumps={overlay.jumps} sectionIndex={sectionIndex} view={view} selectedIndex={selectedSection} /> : null}
-            <SiteMarkers doc={doc} view={view} selection={selection} editable={editable} snap={props.snap} onSelect={props.onSelect} onChange={props.onChange} onGestureEnd={props.onGestureEnd} />
+            {overlay ? (
+              <VerdictMarkers
+                jumps={overlay.jumps}
+                sectionIndex={sectionIndex}
+                view={view}
+                selectedIndex={selectedSection}
+              />
+            ) : null}
+            <SiteMarkers
+              doc={doc}
+              view={view}
+              selection={selection}
+              editable={editable}
+              snap={props.snap}
+              onSelect={props.onSelect}
+              onChange={props.onChange}
+              onGestureEnd={props.onGestureEnd}
+            />
             {editable && selectedSection !== null && sections[selectedSection] ? (
-              <SectionHandles doc={doc} resolved={sections[selectedSection]} index={selectedSection} view={view} snap={props.snap} units={props.units} onChange={props.onChange} onGestureEnd={props.onGestureEnd} />
+              <SectionHandles
+                doc={doc}
+                resolved={sections[selectedSection]}
+                index={selectedSection}
+                view={view}
+                snap={props.snap}
+                units={props.units}
+                onChange={props.onChange}
+                onGestureEnd={props.onGestureEnd}
+              />
             ) : null}
             <CalibrationMarks points={props.calibrationPoints} view={view} />
           </Layer>
@@ -213,7 +273,10 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       ) : null}
       {view ? <ScaleBar scale={view.scale} units={props.units} /> : null}
       {overlay ? <SpeedLegend overlay={overlay} stale={props.overlayStale} /> : null}
-      <ZoomControls onZoom={(f) => setView((v) => (v ? zoomAt(v, { x: size.width / 2, y: size.height / 2 }, f) : v))} onFit={fit} />
+      <ZoomControls
+        onZoom={(f) => setView((v) => (v ? zoomAt(v, { x: size.width / 2, y: size.height / 2 }, f) : v))}
+        onFit={fit}
+      />
     </div>
   );
 }

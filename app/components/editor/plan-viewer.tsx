@@ -44,23 +44,37 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
             <Link to={`/clubs/${club.id}`} className="underline">
               {club.name}
             </Link>{" "}
-            · <Link to={`/layouts/${layout.id}`} className="underline">Layout page</Link>
+            ·{" "}
+            <Link to={`/layouts/${layout.id}`} className="underline">
+              Layout page
+            </Link>
           </p>
           <h1 className="truncate text-xl font-semibold">Plan of {doc.name}</h1>
         </div>
         <div className="ml-auto flex items-center gap-3 text-sm">
           <label className="inline-flex items-center gap-1.5">
             Plan in
-            <select className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm" value={units} onChange={(e) => setUnits(e.target.value as LengthUnit)}>
+            <select
+              className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
+              value={units}
+              onChange={(e) => setUnits(e.target.value as LengthUnit)}
+            >
               <option value="m">metres</option>
               <option value="ft">feet</option>
             </select>
           </label>
-          <button type="button" className="rounded-md border border-ink-300 bg-white px-2.5 py-1.5 font-medium hover:bg-sand-100" onClick={() => setFitRequest((n) => n + 1)}>
+          <button
+            type="button"
+            className="rounded-md border border-ink-300 bg-white px-2.5 py-1.5 font-medium hover:bg-sand-100"
+            onClick={() => setFitRequest((n) => n + 1)}
+          >
             Fit
           </button>
           {canEdit ? (
-            <Link to={`/layouts/${layout.id}/edit`} className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800">
+            <Link
+              to={`/layouts/${layout.id}/edit`}
+              className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800"
+            >
               Edit the layout
             </Link>
           ) : null}
@@ -68,7 +82,11 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
       </header>
       <ClosureBar closure={closure} units={units} editable={false} message={null} />
       <div className="flex flex-col gap-3 lg:flex-row">
-        <div className="relative h-[62vh] min-h-[360px] overflow-hidden rounded-md border border-ink-300 lg:flex-1" role="img" aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}>
+        <div
+          className="relative h-[62vh] min-h-[360px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
+          role="img"
+          aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}
+        >
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>
@@ -96,12 +114,27 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
         </div>
         <aside className="space-y-2 lg:w-[22rem]" aria-label="About this plan">
           <Panel title="Jumps and verdicts" open>
-            <AnalysisPanel overlay={analysis.overlay} status={analysis.status} stale={false} sections={doc.sections} classIds={doc.carClasses} classId={classId} skill={skill} selected={selected} onClass={setClassId} onSkill={setSkill} onSelect={(index) => setSelection({ kind: "section", index })} />
+            <AnalysisPanel
+              overlay={analysis.overlay}
+              status={analysis.status}
+              stale={false}
+              sections={doc.sections}
+              classIds={doc.carClasses}
+              classId={classId}
+              skill={skill}
+              selected={selected}
+              onClass={setClassId}
+              onSkill={setSkill}
+              onSelect={(index) => setSelection({ kind: "section", index })}
+            />
           </Panel>
           <Panel title={`Sections (${doc.sections.length})`} open={selected !== null}>
             <ol className="max-h-64 space-y-0.5 overflow-y-auto text-sm">
               {doc.sections.map((s, i) => (
-                <li key={s.id} className={`rounded px-2 py-0.5 tabular-nums ${selected === i ? "bg-clay-100 font-semibold text-clay-700" : ""}`}>
+                <li
+                  key={s.id}
+                  className={`rounded px-2 py-0.5 tabular-nums ${selected === i ? "bg-clay-100 font-semibold text-clay-700" : ""}`}
+                >
                   {i + 1}. {describeSection(s, sections[i])}
                 </li>
               ))}
@@ -109,7 +142,10 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
           </Panel>
           {doc.marshalPoints.length ? (
             <Panel title={`Marshal points (${doc.marshalPoints.length})`}>
-              <p className="text-sm text-ink-700">Numbered on the plan. Stand out of the overshoot zone beyond landings and the outside of fast turns, stay low and face the traffic; closed shoes, eye protection and hi-vis.</p>
+              <p className="text-sm text-ink-700">
+                Numbered on the plan. Stand out of the overshoot zone beyond landings and the outside of fast
+                turns, stay low and face the traffic; closed shoes, eye protection and hi-vis.
+              </p>
             </Panel>
           ) : null}
         </aside>

@@ -5,7 +5,12 @@ import { checkSectionPatch } from "~/lib/editor/field-check";
 import { JUMP_PRESET_LABELS } from "~/lib/editor/jump-presets";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
-import { JUMP_PRESETS, type JumpPreset, type LayoutDocument, type LayoutSection } from "~/lib/layout-document";
+import {
+  JUMP_PRESETS,
+  type JumpPreset,
+  type LayoutDocument,
+  type LayoutSection,
+} from "~/lib/layout-document";
 import { JumpSideView } from "./jump-side-view";
 import { NumberField } from "./number-field";
 
@@ -21,7 +26,10 @@ interface Props {
   onGestureEnd(): void;
 }
 
-const JUMP_FIELDS: Record<Exclude<JumpPreset, "custom">, { key: string; label: string; unit: string; decimals?: number }[]> = {
+const JUMP_FIELDS: Record<
+  Exclude<JumpPreset, "custom">,
+  { key: string; label: string; unit: string; decimals?: number }[]
+> = {
   tabletop: [
     { key: "faceHeight", label: "Face height", unit: "m" },
     { key: "faceAngleDeg", label: "Face angle", unit: "deg", decimals: 1 },
@@ -31,7 +39,11 @@ const JUMP_FIELDS: Record<Exclude<JumpPreset, "custom">, { key: string; label: s
   double: gapFields(),
   triple: gapFields(),
   "step-down": gapFields(),
-  "step-up": [...gapFields().slice(0, 4), { key: "deckLength", label: "Deck length", unit: "m" }, { key: "landingAngleDeg", label: "Landing angle (off the deck)", unit: "deg", decimals: 1 }],
+  "step-up": [
+    ...gapFields().slice(0, 4),
+    { key: "deckLength", label: "Deck length", unit: "m" },
+    { key: "landingAngleDeg", label: "Landing angle (off the deck)", unit: "deg", decimals: 1 },
+  ],
   whoops: [
     { key: "count", label: "Number of bumps", unit: "bumps", decimals: 0 },
     { key: "bumpHeight", label: "Bump height", unit: "m" },
@@ -57,7 +69,16 @@ export function turnWord(radius: number, angleDeg: number): string {
 }
 
 /** The selected section's fields, checked like the file format checks them, with units. */
-export function SectionPanel({ doc, index, resolved, snap, overlayJump, onSection, onPreset, onGestureEnd }: Props) {
+export function SectionPanel({
+  doc,
+  index,
+  resolved,
+  snap,
+  overlayJump,
+  onSection,
+  onPreset,
+  onGestureEnd,
+}: Props) {
   const section = doc.sections[index];
   if (!section) return null;
   const apply = (field: string, value: unknown): string | null => {
@@ -66,17 +87,41 @@ export function SectionPanel({ doc, index, resolved, snap, overlayJump, onSectio
     onSection(out.section, `field-${section.id}-${field}`);
     return null;
   };
-  const num = (key: string, label: string, unit: string, value: number, decimals = 2, hint?: string, offset = 0) => (
-    <NumberField key={`${section.id}-${key}`} label={label} unit={unit} value={value} decimals={decimals} hint={hint ?? (unit === "m" ? feetHint(value) : undefined)} onValue={(v) => apply(key, v - offset)} onDone={onGestureEnd} />
+  const num = (
+    key: string,
+    label: string,
+    unit: string,
+    value: number,
+    decimals = 2,
+    hint?: string,
+    offset = 0,
+  ) => (
+    <NumberField
+      key={`${section.id}-${key}`}
+      label={label}
+      unit={unit}
+      value={value}
+      decimals={decimals}
+      hint={hint ?? (unit === "m" ? feetHint(value) : undefined)}
+      onValue={(v) => apply(key, v - offset)}
+      onDone={onGestureEnd}
+    />
   );
-  const title = section.kind === "turn" ? `${section.direction === "left" ? "Left" : "Right"} ${turnWord(section.radius, section.angleDeg)}` : section.kind === "jump" ? JUMP_PRESET_LABELS[section.preset] : "Straight";
+  const title =
+    section.kind === "turn"
+      ? `${section.direction === "left" ? "Left" : "Right"} ${turnWord(section.radius, section.angleDeg)}`
+      : section.kind === "jump"
+        ? JUMP_PRESET_LABELS[section.preset]
+        : "Straight";
   return (
     <div className="space-y-3">
       <p className="text-sm">
         <span className="font-semibold">
           Section {index + 1} of {doc.sections.length}: {title}
         </span>
-        {resolved ? <span className="text-ink-500"> · {resolved.length.toFixed(1)} m along the track</span> : null}
+        {resolved ? (
+          <span className="text-ink-500"> · {resolved.length.toFixed(1)} m along the track</span>
+        ) : null}
       </p>
       <div className="space-y-1">
         <label htmlFor="section-name" className="block text-xs font-medium text-ink-700">
@@ -102,7 +147,12 @@ export function SectionPanel({ doc, index, resolved, snap, overlayJump, onSectio
             <label htmlFor="turn-direction" className="block text-xs font-medium text-ink-700">
               Direction
             </label>
-            <select id="turn-direction" className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm" value={section.direction} onChange={(e) => apply("direction", e.target.value)}>
+            <select
+              id="turn-direction"
+              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
+              value={section.direction}
+              onChange={(e) => apply("direction", e.target.value)}
+            >
               <option value="left">Left</option>
               <option value="right">Right</option>
             </select>
@@ -115,7 +165,12 @@ export function SectionPanel({ doc, index, resolved, snap, overlayJump, onSectio
             <label htmlFor="jump-preset" className="block text-xs font-medium text-ink-700">
               Jump shape
             </label>
-            <select id="jump-preset" className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm" value={section.preset} onChange={(e) => onPreset(e.target.value as JumpPreset)}>
+            <select
+              id="jump-preset"
+              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
+              value={section.preset}
+              onChange={(e) => onPreset(e.target.value as JumpPreset)}
+            >
               {JUMP_PRESETS.map((p) => (
                 <option key={p} value={p}>
                   {JUMP_PRESET_LABELS[p]}
@@ -123,15 +178,44 @@ export function SectionPanel({ doc, index, resolved, snap, overlayJump, onSectio
               ))}
             </select>
           </div>
-          <JumpSideView section={section} snap={snap} takeoffSpeed={overlayJump?.takeoffSpeed} onChange={(s, g) => onSection(s, g)} onGestureEnd={onGestureEnd} />
+          <JumpSideView
+            section={section}
+            snap={snap}
+            takeoffSpeed={overlayJump?.takeoffSpeed}
+            onChange={(s, g) => onSection(s, g)}
+            onGestureEnd={onGestureEnd}
+          />
           <div className="grid grid-cols-2 gap-2">
             {section.preset === "custom"
               ? (["lipIndex", "landingStartIndex", "landingEndIndex"] as const).map((k) =>
-                  num(k, k === "lipIndex" ? "Lip is point" : k === "landingStartIndex" ? "Landing starts at point" : "Landing ends at point", "no.", section[k] + 1, 0, "Counting from 1", 1),
+                  num(
+                    k,
+                    k === "lipIndex"
+                      ? "Lip is point"
+                      : k === "landingStartIndex"
+                        ? "Landing starts at point"
+                        : "Landing ends at point",
+                    "no.",
+                    section[k] + 1,
+                    0,
+                    "Counting from 1",
+                    1,
+                  ),
                 )
-              : JUMP_FIELDS[section.preset].map((f) => num(f.key, f.label, f.unit, (section as unknown as Record<string, number>)[f.key], f.decimals ?? 2))}
+              : JUMP_FIELDS[section.preset].map((f) =>
+                  num(
+                    f.key,
+                    f.label,
+                    f.unit,
+                    (section as unknown as Record<string, number>)[f.key],
+                    f.decimals ?? 2,
+                  ),
+                )}
           </div>
-          <p className="text-xs text-ink-500">{jumpMoveBlocker(doc, index) ?? "Drag the diamond on the plan to move the jump along the track; the straights either side give and take the length."}</p>
+          <p className="text-xs text-ink-500">
+            {jumpMoveBlocker(doc, index) ??
+              "Drag the diamond on the plan to move the jump along the track; the straights either side give and take the length."}
+          </p>
         </>
       ) : null}
     </div>

@@ -27,7 +27,13 @@ const UNAVAILABLE_RETRY_MS = 30_000;
 /**
  * @param layoutId the saved layout the draft belongs to: the club's own track guidance then applies.
  */
-export function useAnalysis(doc: LayoutDocument, classId: string | undefined, skill: Skill, layoutId?: string, endpoint = "/api/analysis") {
+export function useAnalysis(
+  doc: LayoutDocument,
+  classId: string | undefined,
+  skill: Skill,
+  layoutId?: string,
+  endpoint = "/api/analysis",
+) {
   const [result, setResult] = useState<{ overlay: AnalysisOverlay; doc: LayoutDocument } | null>(null);
   const [status, setStatus] = useState<AnalysisStatus>({ state: "idle", message: null });
   const unavailableUntil = useRef(0);
@@ -47,10 +53,17 @@ export function useAnalysis(doc: LayoutDocument, classId: string | undefined, sk
         });
         if (response.status === 404 && !(response.headers.get("Content-Type") ?? "").includes("json")) {
           unavailableUntil.current = Date.now() + UNAVAILABLE_RETRY_MS;
-          setStatus({ state: "unavailable", message: "The analysis is not available on this server yet; closure is still worked out here." });
+          setStatus({
+            state: "unavailable",
+            message: "The analysis is not available on this server yet; closure is still worked out here.",
+          });
           return;
         }
-        const body = (await response.json().catch(() => null)) as { overlay?: AnalysisOverlay; error?: string; issues?: { path: string; message: string }[] } | null;
+        const body = (await response.json().catch(() => null)) as {
+          overlay?: AnalysisOverlay;
+          error?: string;
+          issues?: { path: string; message: string }[];
+        } | null;
         if (!response.ok || !body?.overlay) {
           setStatus({ state: "failed", message: failure(response.status, body) });
           return;
@@ -59,7 +72,10 @@ export function useAnalysis(doc: LayoutDocument, classId: string | undefined, sk
         setStatus({ state: "ready", message: null });
       } catch (error) {
         if (controller.signal.aborted) return;
-        setStatus({ state: "failed", message: `The analysis could not be reached (${(error as Error).message}). It is asked again after the next change.` });
+        setStatus({
+          state: "failed",
+          message: `The analysis could not be reached (${(error as Error).message}). It is asked again after the next change.`,
+        });
       }
     }, ANALYSIS_DELAY_MS);
     return () => {
@@ -71,9 +87,13 @@ export function useAnalysis(doc: LayoutDocument, classId: string | undefined, sk
   return { overlay: result?.overlay ?? null, overlayDoc: result?.doc ?? null, status };
 }
 
-function failure(status: number, body: { error?: string; issues?: { path: string; message: string }[] } | null): string {
+function failure(
+  status: number,
+  body: { error?: string; issues?: { path: string; message: string }[] } | null,
+): string {
   const issue = body?.issues?.[0];
-  if (status === 400 && issue) return `The analysis needs a complete layout: ${issue.path.replace(/^document\./, "")} ${issue.message}.`;
+  if (status === 400 && issue)
+    return `The analysis needs a complete layout: ${issue.path.replace(/^document\./, "")} ${issue.message}.`;
   if (status === 401) return "Your session has ended: sign in again in another tab, then make a change.";
   return body?.error ? `The analysis failed: ${body.error}` : `The analysis failed (error ${status}).`;
 }

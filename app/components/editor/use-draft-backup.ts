@@ -21,7 +21,9 @@ function read(layoutId: string): DraftBackup | null {
     const value = JSON.parse(raw) as DraftBackup;
     const parsed = parseLayoutDocument(value.document);
     // A draft may be incomplete (one section); keep it anyway: the editor can hold it.
-    return typeof value.savedAt === "number" ? { ...value, document: parsed.ok ? parsed.document : value.document } : null;
+    return typeof value.savedAt === "number"
+      ? { ...value, document: parsed.ok ? parsed.document : value.document }
+      : null;
   } catch {
     return null;
   }
@@ -31,7 +33,13 @@ function read(layoutId: string): DraftBackup | null {
  * Writes the present document a second after the last change while it differs from the saved one;
  * removes the copy once saved. Returns a copy found at start that differs from what was loaded.
  */
-export function useDraftBackup(layoutId: string, present: LayoutDocument, dirty: boolean, baseVersion: number, loaded: LayoutDocument) {
+export function useDraftBackup(
+  layoutId: string,
+  present: LayoutDocument,
+  dirty: boolean,
+  baseVersion: number,
+  loaded: LayoutDocument,
+) {
   const [found, setFound] = useState<DraftBackup | null>(null);
   useEffect(() => {
     const backup = read(layoutId);
@@ -54,7 +62,10 @@ export function useDraftBackup(layoutId: string, present: LayoutDocument, dirty:
     }
     const timer = window.setTimeout(() => {
       try {
-        window.localStorage.setItem(key(layoutId), JSON.stringify({ document: present, baseVersion, savedAt: Date.now() } satisfies DraftBackup));
+        window.localStorage.setItem(
+          key(layoutId),
+          JSON.stringify({ document: present, baseVersion, savedAt: Date.now() } satisfies DraftBackup),
+        );
       } catch {
         /* storage full or disabled: the prompt before leaving still guards the draft */
       }
@@ -67,6 +78,8 @@ export function useDraftBackup(layoutId: string, present: LayoutDocument, dirty:
 /** JSON with object keys sorted, so two equal documents compare equal whatever their key order. */
 export function stableJson(value: unknown): string {
   return JSON.stringify(value, (_key, v) =>
-    v && typeof v === "object" && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v,
+    v && typeof v === "object" && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
+      : v,
   );
 }

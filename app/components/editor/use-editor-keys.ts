@@ -14,7 +14,10 @@ export interface EditorKeyHandlers {
 
 /** The shortcuts, as the help panel lists them. */
 export const SHORTCUTS: { keys: string; action: string }[] = [
-  { keys: "Delete or Backspace", action: "Delete the selected section, marshal point, corner, stand or photo" },
+  {
+    keys: "Delete or Backspace",
+    action: "Delete the selected section, marshal point, corner, stand or photo",
+  },
   { keys: "Ctrl+Z (⌘Z)", action: "Undo" },
   { keys: "Ctrl+Shift+Z or Ctrl+Y", action: "Redo" },
   { keys: "Ctrl+D (⌘D)", action: "Duplicate the selected section" },
@@ -28,7 +31,10 @@ export const SHORTCUTS: { keys: string; action: string }[] = [
 ];
 
 function typingIn(target: EventTarget | null): boolean {
-  return target instanceof HTMLElement && (target.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(target.tagName));
+  return (
+    target instanceof HTMLElement &&
+    (target.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(target.tagName))
+  );
 }
 
 /** Editor shortcuts on the whole page, except while typing in a field or while a dialog is open. */

@@ -40,12 +40,20 @@ export function useLeaveGuard(dirty: boolean) {
 export function LeaveDialog({ blocker }: { blocker: ReturnType<typeof useBlocker> }) {
   if (blocker.state !== "blocked") return null;
   return (
-    <div role="alertdialog" aria-modal="true" aria-labelledby="leave-title" className="fixed inset-0 z-50 flex items-center justify-center bg-ink-900/40 p-4">
+    <div
+      role="alertdialog"
+      aria-modal="true"
+      aria-labelledby="leave-title"
+      className="fixed inset-0 z-50 flex items-center justify-center bg-ink-900/40 p-4"
+    >
       <div className="max-w-md rounded-lg bg-white p-5 shadow-xl">
         <h2 id="leave-title" className="text-lg font-semibold">
           Leave without saving?
         </h2>
-        <p className="mt-2 text-sm text-ink-700">The drawing has changes that are not saved as a version yet. This browser keeps a copy, but other directors will not see them.</p>
+        <p className="mt-2 text-sm text-ink-700">
+          The drawing has changes that are not saved as a version yet. This browser keeps a copy, but other
+          directors will not see them.
+        </p>
         <div className="mt-4 flex flex-wrap justify-end gap-2">
           <Button variant="secondary" autoFocus onClick={() => blocker.reset()}>
             Stay and keep editing

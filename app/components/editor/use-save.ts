@@ -10,7 +10,13 @@ import type { LayoutDocument } from "~/lib/layout-document";
 type SaveResponse =
   | { ok: true; intent: "save"; version: number }
   | { ok: true; intent: "save-copy"; layoutId: string; url: string; name: string }
-  | { ok: false; error: string; field?: string | null; issues?: { path: string; message: string }[]; conflict?: { yours: number; current: number } };
+  | {
+      ok: false;
+      error: string;
+      field?: string | null;
+      issues?: { path: string; message: string }[];
+      conflict?: { yours: number; current: number };
+    };
 
 export type SaveOutcome =
   | { kind: "none" }
@@ -71,11 +77,19 @@ export function useSave({ layoutId, present, baseVersion, onSaved, onReloaded, b
     save() {
       if (fetcher.state !== "idle") return;
       sent.current = present;
-      fetcher.submit({ intent: "save", document: present, baseVersion } as never, { method: "post", action, encType: "application/json" });
+      fetcher.submit({ intent: "save", document: present, baseVersion } as never, {
+        method: "post",
+        action,
+        encType: "application/json",
+      });
     },
     saveCopy() {
       if (fetcher.state !== "idle") return;
-      fetcher.submit({ intent: "save-copy", document: present } as never, { method: "post", action, encType: "application/json" });
+      fetcher.submit({ intent: "save-copy", document: present } as never, {
+        method: "post",
+        action,
+        encType: "application/json",
+      });
     },
     reload() {
       setDismissed(fetcher.data);

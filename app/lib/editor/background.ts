@@ -55,7 +55,8 @@ export function initialPlacement(fileId: string, width: number, height: number, 
   };
 }
 
-export type CalibrationResult = { ok: true; background: Background } | { ok: false; field: "distance" | "points"; message: string };
+export type CalibrationResult =
+  { ok: true; background: Background } | { ok: false; field: "distance" | "points"; message: string };
 
 /**
  * Sets the photo's scale so that the two clicked points lie `distance` m apart, keeping the first
@@ -65,19 +66,33 @@ export type CalibrationResult = { ok: true; background: Background } | { ok: fal
  * @param distance the real distance between them on the ground, m.
  */
 export function calibrate(bg: Background, a: Point, b: Point, distance: number): CalibrationResult {
-  if (!Number.isFinite(distance) || distance <= 0) return { ok: false, field: "distance", message: "Distance must be a number greater than 0 m." };
+  if (!Number.isFinite(distance) || distance <= 0)
+    return { ok: false, field: "distance", message: "Distance must be a number greater than 0 m." };
   if (distance > 10000) return { ok: false, field: "distance", message: "Distance must be at most 10000 m." };
   const pa = planToPixel(bg, a);
   const pb = planToPixel(bg, b);
   const pixels = Math.hypot(pb.u - pa.u, pb.v - pa.v);
-  if (pixels < 2) return { ok: false, field: "points", message: "The two points are too close together on the photo: click two points farther apart." };
+  if (pixels < 2)
+    return {
+      ok: false,
+      field: "points",
+      message: "The two points are too close together on the photo: click two points farther apart.",
+    };
   const metresPerPixel = Number((distance / pixels).toPrecision(8));
   if (metresPerPixel < 0.0001 || metresPerPixel > 10) {
-    return { ok: false, field: "distance", message: "That distance gives a scale outside 0.0001 to 10 m per pixel: check the distance and the points." };
+    return {
+      ok: false,
+      field: "distance",
+      message:
+        "That distance gives a scale outside 0.0001 to 10 m per pixel: check the distance and the points.",
+    };
   }
   const scaled = { ...bg, metresPerPixel };
   const moved = pixelToPlan(scaled, pa.u, pa.v);
-  return { ok: true, background: { ...scaled, x: round3(scaled.x + (a.x - moved.x)), y: round3(scaled.y + (a.y - moved.y)) } };
+  return {
+    ok: true,
+    background: { ...scaled, x: round3(scaled.x + (a.x - moved.x)), y: round3(scaled.y + (a.y - moved.y)) },
+  };
 }
 
 /** Moves the photo by (dx, dy) m. */

@@ -36,7 +36,10 @@ function turnSign(direction: TurnSection["direction"]): number {
 /** Centre of a turn's circle, m: `radius` to the inside of the start pose. */
 export function turnCentre(start: Pose, radius: number, direction: TurnSection["direction"]): Point {
   const s = turnSign(direction);
-  return { x: start.x - s * radius * Math.sin(start.heading), y: start.y + s * radius * Math.cos(start.heading) };
+  return {
+    x: start.x - s * radius * Math.sin(start.heading),
+    y: start.y + s * radius * Math.cos(start.heading),
+  };
 }
 
 /**
@@ -44,7 +47,12 @@ export function turnCentre(start: Pose, radius: number, direction: TurnSection["
  * start square to the start heading, so the radius is the distance along that line to the inside,
  * snapped and clamped to 1..300 m.
  */
-export function turnRadiusFromPoint(start: Pose, direction: TurnSection["direction"], p: Point, snap: SnapSettings): number {
+export function turnRadiusFromPoint(
+  start: Pose,
+  direction: TurnSection["direction"],
+  p: Point,
+  snap: SnapSettings,
+): number {
   const s = turnSign(direction);
   const nx = -s * Math.sin(start.heading);
   const ny = s * Math.cos(start.heading);
@@ -58,7 +66,14 @@ export function turnRadiusFromPoint(start: Pose, direction: TurnSection["directi
  * nearest the previous angle wins, so dragging past a full circle does not jump back to 0.
  * @param previousDeg the turn's angle before this move, deg.
  */
-export function turnAngleFromPoint(start: Pose, radius: number, direction: TurnSection["direction"], p: Point, previousDeg: number, snap: SnapSettings): number {
+export function turnAngleFromPoint(
+  start: Pose,
+  radius: number,
+  direction: TurnSection["direction"],
+  p: Point,
+  previousDeg: number,
+  snap: SnapSettings,
+): number {
   const c = turnCentre(start, radius, direction);
   const s = turnSign(direction);
   const a0 = Math.atan2(start.y - c.y, start.x - c.x);
@@ -66,7 +81,8 @@ export function turnAngleFromPoint(start: Pose, radius: number, direction: TurnS
   let sweep = (s * (a1 - a0)) / DEG;
   sweep = ((sweep % 360) + 360) % 360;
   let best = sweep;
-  for (const candidate of [sweep - 360, sweep + 360]) if (Math.abs(candidate - previousDeg) < Math.abs(best - previousDeg)) best = candidate;
+  for (const candidate of [sweep - 360, sweep + 360])
+    if (Math.abs(candidate - previousDeg) < Math.abs(best - previousDeg)) best = candidate;
   return clamp(snapAngle(best, snap), LIMITS.angleDeg[0], LIMITS.angleDeg[1]);
 }
 
@@ -81,9 +97,17 @@ export interface SectionHandles {
 }
 
 /** Where the handles of a section are drawn, m. */
-export function sectionHandles(r: ResolvedSection, section: LayoutDocument["sections"][number], movable: boolean): SectionHandles {
+export function sectionHandles(
+  r: ResolvedSection,
+  section: LayoutDocument["sections"][number],
+  movable: boolean,
+): SectionHandles {
   if (section.kind === "straight") return { end: { x: r.end.x, y: r.end.y } };
-  if (section.kind === "turn") return { centre: turnCentre(r.start, section.radius, section.direction), angle: { x: r.end.x, y: r.end.y } };
+  if (section.kind === "turn")
+    return {
+      centre: turnCentre(r.start, section.radius, section.direction),
+      angle: { x: r.end.x, y: r.end.y },
+    };
   if (!movable) return {};
   const d = dir(r.start.heading);
   return { move: { x: r.start.x + (d.x * r.length) / 2, y: r.start.y + (d.y * r.length) / 2 } };
@@ -94,7 +118,8 @@ export function jumpMoveBlocker(doc: Pick<LayoutDocument, "sections">, index: nu
   const before = doc.sections[index - 1];
   const after = doc.sections[index + 1];
   if (doc.sections[index]?.kind !== "jump") return "Only jumps move along their stretch.";
-  if (before?.kind !== "straight" || after?.kind !== "straight") return "A jump moves along the track when there is a straight right before it and right after it.";
+  if (before?.kind !== "straight" || after?.kind !== "straight")
+    return "A jump moves along the track when there is a straight right before it and right after it.";
   return null;
 }
 
@@ -104,12 +129,21 @@ export function jumpMoveBlocker(doc: Pick<LayoutDocument, "sections">, index: nu
  * straight before is snapped to 0.1 m (switchable) and both keep at least 0.5 m.
  * @returns the new document, or null when the jump has no straight on both sides.
  */
-export function moveJump<D extends Pick<LayoutDocument, "sections">>(doc: D, index: number, delta: number, snap: SnapSettings): D | null {
+export function moveJump<D extends Pick<LayoutDocument, "sections">>(
+  doc: D,
+  index: number,
+  delta: number,
+  snap: SnapSettings,
+): D | null {
   if (jumpMoveBlocker(doc, index)) return null;
   const before = doc.sections[index - 1] as Extract<D["sections"][number], { kind: "straight" }>;
   const after = doc.sections[index + 1] as Extract<D["sections"][number], { kind: "straight" }>;
   const total = before.length + after.length;
-  const newBefore = clamp(snapLength(before.length + delta, snap), LIMITS.length[0], total - LIMITS.length[0]);
+  const newBefore = clamp(
+    snapLength(before.length + delta, snap),
+    LIMITS.length[0],
+    total - LIMITS.length[0],
+  );
   if (newBefore < LIMITS.length[0]) return doc;
   const newAfter = Number((total - newBefore).toFixed(6));
   if (newBefore === before.length) return doc;

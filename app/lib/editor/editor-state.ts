@@ -43,7 +43,14 @@ export type EditorAction =
   | { type: "notice"; message: string | null };
 
 export function initialEditorState(doc: LayoutDocument, baseVersion: number): EditorState {
-  return { history: createHistory(doc), selection: null, gesture: null, saved: doc, baseVersion, notice: null };
+  return {
+    history: createHistory(doc),
+    selection: null,
+    gesture: null,
+    saved: doc,
+    baseVersion,
+    notice: null,
+  };
 }
 
 export function isDirty(s: EditorState): boolean {
@@ -55,7 +62,11 @@ export function validSelection(doc: LayoutDocument, sel: Selection): Selection {
   if (!sel) return null;
   switch (sel.kind) {
     case "section":
-      return sel.index < doc.sections.length ? sel : doc.sections.length ? { kind: "section", index: doc.sections.length - 1 } : null;
+      return sel.index < doc.sections.length
+        ? sel
+        : doc.sections.length
+          ? { kind: "section", index: doc.sections.length - 1 }
+          : null;
     case "marshal":
       return sel.index < doc.marshalPoints.length ? sel : null;
     case "boundary":
@@ -67,7 +78,12 @@ export function validSelection(doc: LayoutDocument, sel: Selection): Selection {
   }
 }
 
-function commit(s: EditorState, doc: LayoutDocument, selection: Selection = s.selection, gesture: string | null = null): EditorState {
+function commit(
+  s: EditorState,
+  doc: LayoutDocument,
+  selection: Selection = s.selection,
+  gesture: string | null = null,
+): EditorState {
   const continuing = gesture !== null && gesture === s.gesture;
   const history = continuing ? amend(s.history, doc) : record(s.history, doc);
   return { ...s, history, selection: validSelection(doc, selection), gesture, notice: null };
@@ -84,11 +100,23 @@ export function editorReducer(s: EditorState, a: EditorAction): EditorState {
       return { ...s, selection: validSelection(doc, a.selection), gesture: null };
     case "undo": {
       const history = undo(s.history);
-      return { ...s, history, gesture: null, notice: null, selection: validSelection(history.present, s.selection) };
+      return {
+        ...s,
+        history,
+        gesture: null,
+        notice: null,
+        selection: validSelection(history.present, s.selection),
+      };
     }
     case "redo": {
       const history = redo(s.history);
-      return { ...s, history, gesture: null, notice: null, selection: validSelection(history.present, s.selection) };
+      return {
+        ...s,
+        history,
+        gesture: null,
+        notice: null,
+        selection: validSelection(history.present, s.selection),
+      };
     }
     case "delete-selected":
       return deleteSelected(s);
@@ -107,7 +135,15 @@ export function editorReducer(s: EditorState, a: EditorAction): EditorState {
     case "reloaded": {
       // The draft stays one undo step back, so reloading never loses it.
       const history = record(s.history, a.doc);
-      return { ...s, history, saved: a.doc, baseVersion: a.version, gesture: null, selection: validSelection(a.doc, s.selection), notice: null };
+      return {
+        ...s,
+        history,
+        saved: a.doc,
+        baseVersion: a.version,
+        gesture: null,
+        selection: validSelection(a.doc, s.selection),
+        notice: null,
+      };
     }
     case "notice":
       return { ...s, notice: a.message };
@@ -122,7 +158,13 @@ function deleteSelected(s: EditorState): EditorState {
     case "section": {
       const next = deleteSection(doc, sel.index);
       if (!next) return { ...s, notice: "A layout keeps at least one section." };
-      return commit(s, next, next.sections.length ? { kind: "section", index: Math.min(sel.index, next.sections.length - 1) } : null);
+      return commit(
+        s,
+        next,
+        next.sections.length
+          ? { kind: "section", index: Math.min(sel.index, next.sections.length - 1) }
+          : null,
+      );
     }
     case "marshal":
       return commit(s, deleteMarshalPoint(doc, sel.index), null);
@@ -130,7 +172,12 @@ function deleteSelected(s: EditorState): EditorState {
       return commit(s, removeDriverStand(doc), null);
     case "boundary": {
       const next = deleteBoundaryPoint(doc, sel.index);
-      if (!next) return { ...s, notice: "A site boundary keeps at least three corners; remove the whole boundary from the site panel." };
+      if (!next)
+        return {
+          ...s,
+          notice:
+            "A site boundary keeps at least three corners; remove the whole boundary from the site panel.",
+        };
       return commit(s, next, null);
     }
     case "photo": {

@@ -26,7 +26,10 @@ export function sectionIssues(section: LayoutSection): FieldIssue[] {
   if (result.ok) return [];
   return result.issues
     .filter((i) => i.path.startsWith("sections[0]"))
-    .map((i) => ({ field: i.path.slice("sections[0]".length).replace(/^\./, "") || "section", message: i.message }));
+    .map((i) => ({
+      field: i.path.slice("sections[0]".length).replace(/^\./, "") || "section",
+      message: i.message,
+    }));
 }
 
 /**

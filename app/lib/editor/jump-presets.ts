@@ -20,15 +20,60 @@ export const JUMP_PRESET_LABELS: Record<JumpPreset, string> = {
 export function defaultJump(preset: JumpPreset, id: string): JumpSection {
   switch (preset) {
     case "tabletop":
-      return { id, kind: "jump", preset, faceHeight: 0.5, faceAngleDeg: 30, tableLength: 3, landingAngleDeg: 25 };
+      return {
+        id,
+        kind: "jump",
+        preset,
+        faceHeight: 0.5,
+        faceAngleDeg: 30,
+        tableLength: 3,
+        landingAngleDeg: 25,
+      };
     case "double":
-      return { id, kind: "jump", preset, faceHeight: 0.6, faceAngleDeg: 30, gap: 4, landingHeight: 0.6, landingAngleDeg: 25 };
+      return {
+        id,
+        kind: "jump",
+        preset,
+        faceHeight: 0.6,
+        faceAngleDeg: 30,
+        gap: 4,
+        landingHeight: 0.6,
+        landingAngleDeg: 25,
+      };
     case "triple":
-      return { id, kind: "jump", preset, faceHeight: 0.5, faceAngleDeg: 30, gap: 6, landingHeight: 0.5, landingAngleDeg: 25 };
+      return {
+        id,
+        kind: "jump",
+        preset,
+        faceHeight: 0.5,
+        faceAngleDeg: 30,
+        gap: 6,
+        landingHeight: 0.5,
+        landingAngleDeg: 25,
+      };
     case "step-up":
-      return { id, kind: "jump", preset, faceHeight: 0.4, faceAngleDeg: 30, gap: 2.5, landingHeight: 0.7, deckLength: 2, landingAngleDeg: 25 };
+      return {
+        id,
+        kind: "jump",
+        preset,
+        faceHeight: 0.4,
+        faceAngleDeg: 30,
+        gap: 2.5,
+        landingHeight: 0.7,
+        deckLength: 2,
+        landingAngleDeg: 25,
+      };
     case "step-down":
-      return { id, kind: "jump", preset, faceHeight: 0.8, faceAngleDeg: 30, gap: 3, landingHeight: 0.4, landingAngleDeg: 25 };
+      return {
+        id,
+        kind: "jump",
+        preset,
+        faceHeight: 0.8,
+        faceAngleDeg: 30,
+        gap: 3,
+        landingHeight: 0.4,
+        landingAngleDeg: 25,
+      };
     case "whoops":
       return { id, kind: "jump", preset, count: 6, bumpHeight: 0.25, spacing: 1.2 };
     case "custom":

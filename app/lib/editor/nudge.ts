@@ -24,7 +24,9 @@ export function nudge(doc: LayoutDocument, sel: Selection, dx: number, dy: numbe
       return m ? moveMarshalPoint(doc, sel.index, { x: m.x + dx, y: m.y + dy }) : doc;
     }
     case "stand":
-      return doc.driverStand ? placeDriverStand(doc, { x: doc.driverStand.x + dx, y: doc.driverStand.y + dy }) : doc;
+      return doc.driverStand
+        ? placeDriverStand(doc, { x: doc.driverStand.x + dx, y: doc.driverStand.y + dy })
+        : doc;
     case "boundary": {
       const p = doc.siteBoundary?.[sel.index];
       return p ? moveBoundaryPoint(doc, sel.index, { x: p[0] + dx, y: p[1] + dy }) : doc;

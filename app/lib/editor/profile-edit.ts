@@ -24,9 +24,12 @@ const run = (height: number, angleDeg: number) => height / Math.tan(angleDeg * D
 /** The draggable points of a jump's side view. */
 export function profileHandles(s: JumpSection): ProfileHandle[] {
   if (s.preset === "custom") {
-    return s.profile.slice(1).map(([d, h], k) => ({ id: `p${k + 1}`, d, h, label: `Profile point ${k + 2}: distance and height` }));
+    return s.profile
+      .slice(1)
+      .map(([d, h], k) => ({ id: `p${k + 1}`, d, h, label: `Profile point ${k + 2}: distance and height` }));
   }
-  if (s.preset === "whoops") return [{ id: "crest", d: s.spacing / 2, h: s.bumpHeight, label: "First bump: spacing and height" }];
+  if (s.preset === "whoops")
+    return [{ id: "crest", d: s.spacing / 2, h: s.bumpHeight, label: "First bump: spacing and height" }];
   const lipD = run(s.faceHeight, s.faceAngleDeg);
   const lip: ProfileHandle = { id: "lip", d: lipD, h: s.faceHeight, label: "Lip: face height and angle" };
   if (s.preset === "tabletop") {
@@ -34,31 +37,61 @@ export function profileHandles(s: JumpSection): ProfileHandle[] {
     return [
       lip,
       { id: "table", d: topEnd, h: s.faceHeight, label: "End of the table: table length" },
-      { id: "foot", d: topEnd + run(s.faceHeight, s.landingAngleDeg), h: 0, label: "Foot of the landing: landing angle" },
+      {
+        id: "foot",
+        d: topEnd + run(s.faceHeight, s.landingAngleDeg),
+        h: 0,
+        label: "Foot of the landing: landing angle",
+      },
     ];
   }
   const crestD = lipD + s.gap;
-  const crest: ProfileHandle = { id: "crest", d: crestD, h: s.landingHeight, label: "Landing crest: gap and landing height" };
+  const crest: ProfileHandle = {
+    id: "crest",
+    d: crestD,
+    h: s.landingHeight,
+    label: "Landing crest: gap and landing height",
+  };
   if (s.preset === "step-up") {
     const deckEnd = crestD + s.deckLength;
     return [
       lip,
       crest,
       { id: "deck", d: deckEnd, h: s.landingHeight, label: "End of the deck: deck length" },
-      { id: "foot", d: deckEnd + run(s.landingHeight, s.landingAngleDeg), h: 0, label: "Foot of the landing: landing angle" },
+      {
+        id: "foot",
+        d: deckEnd + run(s.landingHeight, s.landingAngleDeg),
+        h: 0,
+        label: "Foot of the landing: landing angle",
+      },
     ];
   }
-  return [lip, crest, { id: "foot", d: crestD + run(s.landingHeight, s.landingAngleDeg), h: 0, label: "Foot of the landing: landing angle" }];
+  return [
+    lip,
+    crest,
+    {
+      id: "foot",
+      d: crestD + run(s.landingHeight, s.landingAngleDeg),
+      h: 0,
+      label: "Foot of the landing: landing angle",
+    },
+  ];
 }
 
-const angleOf = (height: number, along: number) => (Math.atan2(height, Math.max(along, 1e-6)) / DEG);
+const angleOf = (height: number, along: number) => Math.atan2(height, Math.max(along, 1e-6)) / DEG;
 
 /**
  * The jump with one side-view handle dragged to (d, h).
  * @param d distance along the section, m; @param h height, m.
  * @returns the changed jump, or the same object when the move is refused.
  */
-export function dragProfileHandle(s: JumpSection, handleId: string, d: number, h: number, snap: SnapSettings): JumpSection {
+export function dragProfileHandle(
+  s: JumpSection,
+  handleId: string,
+  d: number,
+  h: number,
+  snap: SnapSettings,
+): JumpSection {
   const next = moved(s, handleId, d, h, snap);
   if (!next || next === s) return s;
   return sectionIssues(next).length === 0 ? next : s;
@@ -88,7 +121,8 @@ function moved(s: JumpSection, id: string, d: number, h: number, snap: SnapSetti
   const crestD = lipD + s.gap;
   if (s.preset === "step-up") {
     if (id === "deck") return { ...s, deckLength: clamp(L(d - crestD), 0.5, 10) };
-    if (id === "foot") return { ...s, landingAngleDeg: clamp(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), 5, 60) };
+    if (id === "foot")
+      return { ...s, landingAngleDeg: clamp(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), 5, 60) };
     return null;
   }
   if (id === "foot") return { ...s, landingAngleDeg: clamp(A(angleOf(s.landingHeight, d - crestD)), 5, 60) };
@@ -105,7 +139,10 @@ function movedCustom(s: CustomJumpSection, id: string, d: number, h: number): Cu
   const hi = k + 1 < p.length ? p[k + 1][0] - gap : 100;
   if (hi < lo) return null;
   const profile = p.map((pt) => [pt[0], pt[1]] as [number, number]);
-  profile[k] = [Number(clamp(d, lo, hi).toFixed(3)), k === p.length - 1 ? 0 : Number(clamp(h, -2, 3).toFixed(3))];
+  profile[k] = [
+    Number(clamp(d, lo, hi).toFixed(3)),
+    k === p.length - 1 ? 0 : Number(clamp(h, -2, 3).toFixed(3)),
+  ];
   return { ...s, profile };
 }
 
@@ -116,16 +153,39 @@ function movedCustom(s: CustomJumpSection, id: string, d: number, h: number): Cu
 export function addProfilePoint(s: CustomJumpSection, k: number): CustomJumpSection {
   const p = s.profile;
   if (k < 0 || k >= p.length - 1 || p.length >= 500) return s;
-  const mid: [number, number] = [Number(((p[k][0] + p[k + 1][0]) / 2).toFixed(3)), Number(((p[k][1] + p[k + 1][1]) / 2).toFixed(3))];
+  const mid: [number, number] = [
+    Number(((p[k][0] + p[k + 1][0]) / 2).toFixed(3)),
+    Number(((p[k][1] + p[k + 1][1]) / 2).toFixed(3)),
+  ];
   const profile = [...p.slice(0, k + 1), mid, ...p.slice(k + 1)] as [number, number][];
   const shift = (i: number) => (i > k ? i + 1 : i);
-  return { ...s, profile, lipIndex: shift(s.lipIndex), landingStartIndex: shift(s.landingStartIndex), landingEndIndex: shift(s.landingEndIndex) };
+  return {
+    ...s,
+    profile,
+    lipIndex: shift(s.lipIndex),
+    landingStartIndex: shift(s.landingStartIndex),
+    landingEndIndex: shift(s.landingEndIndex),
+  };
 }
 
 export function removeProfilePoint(s: CustomJumpSection, k: number): CustomJumpSection {
   const p = s.profile;
-  if (k <= 0 || k >= p.length - 1 || p.length <= 3 || k === s.lipIndex || k === s.landingStartIndex || k === s.landingEndIndex) return s;
+  if (
+    k <= 0 ||
+    k >= p.length - 1 ||
+    p.length <= 3 ||
+    k === s.lipIndex ||
+    k === s.landingStartIndex ||
+    k === s.landingEndIndex
+  )
+    return s;
   const shift = (i: number) => (i > k ? i - 1 : i);
-  const next = { ...s, profile: p.filter((_, i) => i !== k), lipIndex: shift(s.lipIndex), landingStartIndex: shift(s.landingStartIndex), landingEndIndex: shift(s.landingEndIndex) };
+  const next = {
+    ...s,
+    profile: p.filter((_, i) => i !== k),
+    lipIndex: shift(s.lipIndex),
+    landingStartIndex: shift(s.landingStartIndex),
+    landingEndIndex: shift(s.landingEndIndex),
+  };
   return sectionIssues(next).length === 0 ? next : s;
 }

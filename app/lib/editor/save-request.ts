@@ -19,8 +19,14 @@ const envelope = z.object({
   note: z.string({ error: "must be text" }).max(200, { error: "must be at most 200 characters" }).optional(),
 });
 
-export type SaveRequest = { intent: SaveIntent; document: LayoutDocument; baseVersion?: number; note?: string };
-export type SaveRequestResult = { ok: true; request: SaveRequest } | { ok: false; error: string; issues: LayoutIssue[] };
+export type SaveRequest = {
+  intent: SaveIntent;
+  document: LayoutDocument;
+  baseVersion?: number;
+  note?: string;
+};
+export type SaveRequestResult =
+  { ok: true; request: SaveRequest } | { ok: false; error: string; issues: LayoutIssue[] };
 
 /**
  * Checks a save request body (already read as JSON, or the fields of a form).
@@ -33,9 +39,14 @@ export function parseSaveRequest(body: unknown): SaveRequestResult {
   }
   const raw = body as Record<string, unknown>;
   const head = envelope.safeParse(raw);
-  const issues: LayoutIssue[] = head.success ? [] : head.error.issues.map((i) => ({ path: i.path.join(".") || "(body)", message: i.message }));
+  const issues: LayoutIssue[] = head.success
+    ? []
+    : head.error.issues.map((i) => ({ path: i.path.join(".") || "(body)", message: i.message }));
   if (head.success && head.data.intent === "save" && head.data.baseVersion === undefined) {
-    issues.push({ path: "baseVersion", message: "is required: the version of the layout the changes started from" });
+    issues.push({
+      path: "baseVersion",
+      message: "is required: the version of the layout the changes started from",
+    });
   }
   let document: LayoutDocument | undefined;
   if (raw.document === undefined || raw.document === null || raw.document === "") {
@@ -43,14 +54,25 @@ export function parseSaveRequest(body: unknown): SaveRequestResult {
   } else {
     const parsed = parseLayoutDocument(raw.document);
     if (parsed.ok) document = parsed.document;
-    else issues.push(...parsed.issues.map((i) => ({ path: i.path === "(document)" ? "document" : `document.${i.path}`, message: i.message })));
+    else
+      issues.push(
+        ...parsed.issues.map((i) => ({
+          path: i.path === "(document)" ? "document" : `document.${i.path}`,
+          message: i.message,
+        })),
+      );
   }
   if (issues.length || !head.success || !document) return fail(issues);
-  return { ok: true, request: { intent: head.data.intent, document, baseVersion: head.data.baseVersion, note: head.data.note } };
+  return {
+    ok: true,
+    request: { intent: head.data.intent, document, baseVersion: head.data.baseVersion, note: head.data.note },
+  };
 }
 
 function fail(issues: LayoutIssue[]): SaveRequestResult {
   const first = issues[0];
-  const error = first ? `Not saved: ${first.path} ${first.message}${issues.length > 1 ? ` (and ${issues.length - 1} more)` : ""}.` : "Not saved.";
+  const error = first
+    ? `Not saved: ${first.path} ${first.message}${issues.length > 1 ? ` (and ${issues.length - 1} more)` : ""}.`
+    : "Not saved.";
   return { ok: false, error, issues };
 }

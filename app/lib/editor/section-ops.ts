@@ -23,10 +23,20 @@ export function freeSectionId(doc: Pick<LayoutDocument, "sections">, kind: Layou
  * A new section with starting values: a 10 m straight, a 90 degree turn of 6 m radius, or a jump
  * of the preset.
  */
-export function newSection(doc: Pick<LayoutDocument, "sections">, kind: NewSectionKind, preset: JumpPreset = "tabletop"): LayoutSection {
+export function newSection(
+  doc: Pick<LayoutDocument, "sections">,
+  kind: NewSectionKind,
+  preset: JumpPreset = "tabletop",
+): LayoutSection {
   if (kind === "straight") return { id: freeSectionId(doc, "straight"), kind: "straight", length: 10 };
   if (kind === "jump") return defaultJump(preset, freeSectionId(doc, "jump"));
-  const turn: TurnSection = { id: freeSectionId(doc, "turn"), kind: "turn", radius: 6, angleDeg: 90, direction: kind === "turn-left" ? "left" : "right" };
+  const turn: TurnSection = {
+    id: freeSectionId(doc, "turn"),
+    kind: "turn",
+    radius: 6,
+    angleDeg: 90,
+    direction: kind === "turn-left" ? "left" : "right",
+  };
   return turn;
 }
 
@@ -34,8 +44,13 @@ export function newSection(doc: Pick<LayoutDocument, "sections">, kind: NewSecti
  * Inserts a section after the given index, or at the end when `afterIndex` is null.
  * @returns the new document and the new section's index.
  */
-export function insertSection<D extends Pick<LayoutDocument, "sections">>(doc: D, section: LayoutSection, afterIndex: number | null): { doc: D; index: number } {
-  const index = afterIndex === null ? doc.sections.length : Math.min(Math.max(afterIndex + 1, 0), doc.sections.length);
+export function insertSection<D extends Pick<LayoutDocument, "sections">>(
+  doc: D,
+  section: LayoutSection,
+  afterIndex: number | null,
+): { doc: D; index: number } {
+  const index =
+    afterIndex === null ? doc.sections.length : Math.min(Math.max(afterIndex + 1, 0), doc.sections.length);
   const sections = doc.sections.slice();
   sections.splice(index, 0, section);
   return { doc: { ...doc, sections }, index };
@@ -61,7 +76,10 @@ export function moveSection<D extends Pick<LayoutDocument, "sections">>(doc: D, 
 }
 
 /** Inserts a copy of a section (with a fresh id) right after it. */
-export function duplicateSection<D extends Pick<LayoutDocument, "sections">>(doc: D, index: number): { doc: D; index: number } | null {
+export function duplicateSection<D extends Pick<LayoutDocument, "sections">>(
+  doc: D,
+  index: number,
+): { doc: D; index: number } | null {
   const original = doc.sections[index];
   if (!original) return null;
   const copy = { ...structuredClone(original), id: freeSectionId(doc, original.kind) } as LayoutSection;
@@ -70,7 +88,11 @@ export function duplicateSection<D extends Pick<LayoutDocument, "sections">>(doc
 }
 
 /** Replaces a section's fields; the section keeps its id unless the patch names a new one. */
-export function updateSection<D extends Pick<LayoutDocument, "sections">>(doc: D, index: number, patch: Partial<LayoutSection>): D {
+export function updateSection<D extends Pick<LayoutDocument, "sections">>(
+  doc: D,
+  index: number,
+  patch: Partial<LayoutSection>,
+): D {
   const old = doc.sections[index];
   if (!old) return doc;
   const sections = doc.sections.slice();
@@ -82,12 +104,18 @@ export function updateSection<D extends Pick<LayoutDocument, "sections">>(doc: D
  * Turns a section into another kind in place (same id and position): a straight of the same plan
  * length, a turn of the same direction, or a jump of the preset.
  */
-export function changeSectionKind<D extends Pick<LayoutDocument, "sections">>(doc: D, index: number, kind: NewSectionKind, preset: JumpPreset = "tabletop"): D {
+export function changeSectionKind<D extends Pick<LayoutDocument, "sections">>(
+  doc: D,
+  index: number,
+  kind: NewSectionKind,
+  preset: JumpPreset = "tabletop",
+): D {
   const old = doc.sections[index];
   if (!old) return doc;
   const fresh = newSection({ sections: [] }, kind, preset);
   const next = { ...fresh, id: old.id, ...(old.name ? { name: old.name } : {}) } as LayoutSection;
-  if (next.kind === "straight" && old.kind === "turn") next.length = Math.max(0.5, Math.round(old.radius * old.angleDeg * (Math.PI / 180) * 10) / 10);
+  if (next.kind === "straight" && old.kind === "turn")
+    next.length = Math.max(0.5, Math.round(old.radius * old.angleDeg * (Math.PI / 180) * 10) / 10);
   if (next.kind === "straight" && old.kind === "straight") return doc;
   const sections = doc.sections.slice();
   sections[index] = next;

@@ -56,7 +56,15 @@ export function rectangleBoundary(doc: Doc, b: Bounds, margin = 5): Doc {
   const y0 = round(b.minY - margin);
   const x1 = round(b.maxX + margin);
   const y1 = round(b.maxY + margin);
-  return { ...doc, siteBoundary: [[x0, y0], [x1, y0], [x1, y1], [x0, y1]] };
+  return {
+    ...doc,
+    siteBoundary: [
+      [x0, y0],
+      [x1, y0],
+      [x1, y1],
+      [x0, y1],
+    ],
+  };
 }
 
 export function moveBoundaryPoint(doc: Doc, index: number, p: Point): Doc {

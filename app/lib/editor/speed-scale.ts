@@ -44,7 +44,12 @@ export function binStyle(bin: number, bins = SPEED_BINS): { colour: string; widt
  * Runs of consecutive samples in the same bin, each drawn as one polyline (overlapping by one
  * sample so the line has no gaps).
  */
-export function speedRuns(speed: ArrayLike<number>, min: number, max: number, bins = SPEED_BINS): { bin: number; from: number; to: number }[] {
+export function speedRuns(
+  speed: ArrayLike<number>,
+  min: number,
+  max: number,
+  bins = SPEED_BINS,
+): { bin: number; from: number; to: number }[] {
   const runs: { bin: number; from: number; to: number }[] = [];
   const n = speed.length;
   if (n < 2) return runs;

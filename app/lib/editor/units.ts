@@ -33,7 +33,11 @@ export function feetHint(metres: number): string {
  * @param pixelsPerMetre current zoom, px/m.
  * @returns the step in display units and in metres.
  */
-export function niceStep(pixelsPerMetre: number, unit: LengthUnit, minPixels: number): { step: number; metres: number } {
+export function niceStep(
+  pixelsPerMetre: number,
+  unit: LengthUnit,
+  minPixels: number,
+): { step: number; metres: number } {
   const pixelsPerUnit = pixelsPerMetre * fromDisplay(1, unit);
   const raw = minPixels / pixelsPerUnit;
   const power = 10 ** Math.floor(Math.log10(raw));

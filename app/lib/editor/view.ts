@@ -53,7 +53,10 @@ export function fitView(b: Bounds, width: number, height: number, padding = 24):
  * Everything worth showing: the track (centre line plus half the width), the site boundary, the
  * driver stand and the marshal points, m.
  */
-export function layoutBounds(doc: Pick<LayoutDocument, "trackWidth" | "siteBoundary" | "driverStand" | "marshalPoints">, line: CentreLine | null): Bounds {
+export function layoutBounds(
+  doc: Pick<LayoutDocument, "trackWidth" | "siteBoundary" | "driverStand" | "marshalPoints">,
+  line: CentreLine | null,
+): Bounds {
   const b: Bounds = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
   const add = (x: number, y: number, pad = 0) => {
     b.minX = Math.min(b.minX, x - pad);

@@ -1,7 +1,22 @@
 import { describe, expect, it } from "vitest";
-import { calibrate, initialPlacement, moveBackground, pixelToPlan, planToPixel, type Background } from "~/lib/editor/background";
+import {
+  calibrate,
+  initialPlacement,
+  moveBackground,
+  pixelToPlan,
+  planToPixel,
+  type Background,
+} from "~/lib/editor/background";
 
-const bg: Background = { fileId: "f1", x: 10, y: 50, metresPerPixel: 0.05, rotationDeg: 30, opacity: 0.5, hidden: false };
+const bg: Background = {
+  fileId: "f1",
+  x: 10,
+  y: 50,
+  metresPerPixel: 0.05,
+  rotationDeg: 30,
+  opacity: 0.5,
+  hidden: false,
+};
 
 describe("photo placement", () => {
   it("puts the top-left pixel at (x, y) and runs pixel rows down the plan", () => {
@@ -54,7 +69,10 @@ describe("calibration from two points and a distance", () => {
   it("refuses a missing distance or two points on top of each other, naming what is wrong", () => {
     const a = pixelToPlan(bg, 100, 100);
     expect(calibrate(bg, a, pixelToPlan(bg, 300, 100), 0)).toMatchObject({ ok: false, field: "distance" });
-    expect(calibrate(bg, a, pixelToPlan(bg, 300, 100), Number.NaN)).toMatchObject({ ok: false, field: "distance" });
+    expect(calibrate(bg, a, pixelToPlan(bg, 300, 100), Number.NaN)).toMatchObject({
+      ok: false,
+      field: "distance",
+    });
     expect(calibrate(bg, a, pixelToPlan(bg, 100.5, 100), 10)).toMatchObject({ ok: false, field: "points" });
   });
 });

@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { resolveSections } from "~/analysis/geometry";
 import type { LayoutDocument } from "~/lib/layout-document";
-import { alongTrack, jumpMoveBlocker, moveJump, sectionHandles, straightLengthFromPoint, turnAngleFromPoint, turnCentre, turnRadiusFromPoint } from "~/lib/editor/drag-maths";
+import {
+  alongTrack,
+  jumpMoveBlocker,
+  moveJump,
+  sectionHandles,
+  straightLengthFromPoint,
+  turnAngleFromPoint,
+  turnCentre,
+  turnRadiusFromPoint,
+} from "~/lib/editor/drag-maths";
 import { defaultJump } from "~/lib/editor/jump-presets";
 
 const SNAP = { lengths: true, angles: true };
@@ -42,7 +51,9 @@ describe("turn handles", () => {
     expect(turnAngleFromPoint(east, 5, "left", { x: 0, y: 10 }, 170, SNAP)).toBeCloseTo(180, 9);
     expect(turnAngleFromPoint(east, 5, "left", { x: -5, y: 5 }, 260, SNAP)).toBeCloseTo(270, 9);
     expect(turnAngleFromPoint(east, 5, "right", { x: 5, y: -5 }, 45, SNAP)).toBeCloseTo(90, 9);
-    expect(turnAngleFromPoint(east, 5, "left", { x: 5 * Math.sin(0.7), y: 5 - 5 * Math.cos(0.7) }, 40, FREE)).toBeCloseTo((0.7 * 180) / Math.PI, 9);
+    expect(
+      turnAngleFromPoint(east, 5, "left", { x: 5 * Math.sin(0.7), y: 5 - 5 * Math.cos(0.7) }, 40, FREE),
+    ).toBeCloseTo((0.7 * 180) / Math.PI, 9);
   });
 
   it("does not jump back to 0 when dragged past a full circle, nor to 360 when dragged below 0", () => {

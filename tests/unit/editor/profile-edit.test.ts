@@ -2,7 +2,12 @@ import { describe, expect, it } from "vitest";
 import { jumpProfile } from "~/analysis/jump-profile";
 import type { CustomJumpSection, JumpSection } from "~/lib/layout-document";
 import { defaultJump } from "~/lib/editor/jump-presets";
-import { addProfilePoint, dragProfileHandle, profileHandles, removeProfilePoint } from "~/lib/editor/profile-edit";
+import {
+  addProfilePoint,
+  dragProfileHandle,
+  profileHandles,
+  removeProfilePoint,
+} from "~/lib/editor/profile-edit";
 import { checkSectionPatch, sectionIssues } from "~/lib/editor/field-check";
 
 const SNAP = { lengths: true, angles: true };
@@ -77,12 +82,20 @@ describe("dragging side-view handles", () => {
 
 describe("checking a section patch like the file format does", () => {
   it("names the field and the unit of a value out of range", () => {
-    const doc = { sections: [{ id: "t1", kind: "turn", radius: 8, angleDeg: 90, direction: "left" } as const, { id: "s1", kind: "straight", length: 5 } as const] };
+    const doc = {
+      sections: [
+        { id: "t1", kind: "turn", radius: 8, angleDeg: 90, direction: "left" } as const,
+        { id: "s1", kind: "straight", length: 5 } as const,
+      ],
+    };
     const bad = checkSectionPatch(doc, 0, { radius: 0.2 });
     expect(bad).toEqual({ ok: false, issues: [{ field: "radius", message: "must be at least 1 m" }] });
     const taken = checkSectionPatch(doc, 0, { id: "s1" });
     expect(taken.ok).toBe(false);
-    expect(!taken.ok && taken.issues[0]).toEqual({ field: "id", message: "is already used by another section" });
+    expect(!taken.ok && taken.issues[0]).toEqual({
+      field: "id",
+      message: "is already used by another section",
+    });
     expect(checkSectionPatch(doc, 0, { radius: 12 })).toMatchObject({ ok: true, section: { radius: 12 } });
   });
 });

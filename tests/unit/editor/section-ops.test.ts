@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { JUMP_PRESETS, parseLayoutDocument } from "~/lib/layout-document";
 import { starterDocument } from "~/lib/starter-layout";
-import { changeSectionKind, deleteSection, duplicateSection, freeSectionId, insertSection, moveSection, newSection, updateSection } from "~/lib/editor/section-ops";
+import {
+  changeSectionKind,
+  deleteSection,
+  duplicateSection,
+  freeSectionId,
+  insertSection,
+  moveSection,
+  newSection,
+  updateSection,
+} from "~/lib/editor/section-ops";
 
 const base = () => starterDocument("Ops test", 3);
 
@@ -21,7 +30,8 @@ describe("adding sections", () => {
 
   it("gives every new section an id no other section has", () => {
     let doc = base();
-    for (let k = 0; k < 12; k++) doc = insertSection(doc, newSection(doc, k % 2 ? "turn-left" : "straight"), null).doc;
+    for (let k = 0; k < 12; k++)
+      doc = insertSection(doc, newSection(doc, k % 2 ? "turn-left" : "straight"), null).doc;
     const ids = doc.sections.map((s) => s.id);
     expect(new Set(ids).size).toBe(ids.length);
     expect(freeSectionId({ sections: [{ id: "s2", kind: "straight", length: 1 }] }, "straight")).toBe("s3");
@@ -29,7 +39,12 @@ describe("adding sections", () => {
 
   it("makes turns of the asked direction and jumps of every preset that pass the format's checks", () => {
     const doc = base();
-    expect(newSection(doc, "turn-right")).toMatchObject({ kind: "turn", direction: "right", radius: 6, angleDeg: 90 });
+    expect(newSection(doc, "turn-right")).toMatchObject({
+      kind: "turn",
+      direction: "right",
+      radius: 6,
+      angleDeg: 90,
+    });
     for (const preset of JUMP_PRESETS) {
       const jump = newSection(doc, "jump", preset);
       const withJump = insertSection(doc, jump, 0).doc;
@@ -67,10 +82,18 @@ describe("deleting, reordering, duplicating, changing", () => {
 
   it("changes fields and kinds in place, keeping the id", () => {
     const doc = base();
-    expect(updateSection(doc, 0, { length: 12.5 }).sections[0]).toEqual({ id: "s1", kind: "straight", length: 12.5 });
+    expect(updateSection(doc, 0, { length: 12.5 }).sections[0]).toEqual({
+      id: "s1",
+      kind: "straight",
+      length: 12.5,
+    });
     const asJump = changeSectionKind(doc, 0, "jump", "double");
     expect(asJump.sections[0]).toMatchObject({ id: "s1", kind: "jump", preset: "double" });
     // a turn becoming a straight keeps its plan length: 8 m * pi = 25.1 m
-    expect(changeSectionKind(doc, 1, "straight").sections[1]).toEqual({ id: "t1", kind: "straight", length: 25.1 });
+    expect(changeSectionKind(doc, 1, "straight").sections[1]).toEqual({
+      id: "t1",
+      kind: "straight",
+      length: 25.1,
+    });
   });
 });

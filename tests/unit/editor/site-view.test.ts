@@ -37,7 +37,12 @@ describe("site operations", () => {
 
   it("draws a boundary around the layout, bends the nearest edge and keeps three corners", () => {
     const withBox = rectangleBoundary(doc(), { minX: 0, minY: 0, maxX: 30, maxY: 16 }, 5);
-    expect(withBox.siteBoundary).toEqual([[-5, -5], [35, -5], [35, 21], [-5, 21]]);
+    expect(withBox.siteBoundary).toEqual([
+      [-5, -5],
+      [35, -5],
+      [35, 21],
+      [-5, 21],
+    ]);
     // a point just below the bottom edge bends that edge: inserted after corner 0
     const bent = addBoundaryPoint(withBox, { x: 15, y: -8 })!;
     expect(bent.index).toBe(1);
@@ -85,7 +90,10 @@ describe("plan view camera", () => {
     expect(b.minY).toBeCloseTo(-1.5, 1);
     expect(b.maxY).toBeCloseTo(17.5, 1);
     const v = fitView(b, 800, 500, 20);
-    for (const [x, y] of [[b.minX, b.minY], [b.maxX, b.maxY]]) {
+    for (const [x, y] of [
+      [b.minX, b.minY],
+      [b.maxX, b.maxY],
+    ]) {
       const s = worldToScreen(v, { x, y });
       expect(s.x).toBeGreaterThanOrEqual(19.99);
       expect(s.x).toBeLessThanOrEqual(780.01);

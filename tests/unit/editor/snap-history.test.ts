@@ -1,5 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { canRedo, canUndo, createHistory, amend, record, redo, undo, HISTORY_LIMIT } from "~/lib/editor/history";
+import {
+  canRedo,
+  canUndo,
+  createHistory,
+  amend,
+  record,
+  redo,
+  undo,
+  HISTORY_LIMIT,
+} from "~/lib/editor/history";
 import { clamp, snapAngle, snapHeight, snapLength, snapTo } from "~/lib/editor/snap";
 import { formatLength, fromDisplay, niceStep, toDisplay } from "~/lib/editor/units";
 

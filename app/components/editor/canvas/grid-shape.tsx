@@ -8,7 +8,17 @@ import { PLAN } from "../colours";
  * The plan grid in screen space: lines at a round step of the display unit at least 24 px apart,
  * every fifth line darker. One shape draws every line, so the grid costs one draw call.
  */
-export const GridShape = memo(function GridShape({ view, width, height, units }: { view: View; width: number; height: number; units: LengthUnit }) {
+export const GridShape = memo(function GridShape({
+  view,
+  width,
+  height,
+  units,
+}: {
+  view: View;
+  width: number;
+  height: number;
+  units: LengthUnit;
+}) {
   return (
     <Shape
       listening={false}

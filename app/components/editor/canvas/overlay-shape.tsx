@@ -10,7 +10,15 @@ import { PLAN } from "../colours";
  * speed, stretches hidden from the driver stand (dashed, labelled) and lanes too close together
  * (dotted, with the distance). Faded while a newer drawing is being analysed.
  */
-export const OverlayShape = memo(function OverlayShape({ overlay, view, stale }: { overlay: AnalysisOverlay; view: View; stale: boolean }) {
+export const OverlayShape = memo(function OverlayShape({
+  overlay,
+  view,
+  stale,
+}: {
+  overlay: AnalysisOverlay;
+  view: View;
+  stale: boolean;
+}) {
   return (
     <Shape
       listening={false}
@@ -42,7 +50,13 @@ export const OverlayShape = memo(function OverlayShape({ overlay, view, stale }:
           ctx.lineWidth = 4;
           ctx.stroke();
           const [mx, my] = stretch.points[Math.floor(stretch.points.length / 2)];
-          label(ctx, `Hidden from the stand (${stretch.length.toFixed(0)} m)`, sx(mx), sy(my) - 10, PLAN.hidden);
+          label(
+            ctx,
+            `Hidden from the stand (${stretch.length.toFixed(0)} m)`,
+            sx(mx),
+            sy(my) - 10,
+            PLAN.hidden,
+          );
         }
         ctx.setLineDash([2, 4]);
         for (const c of overlay.laneConflicts) {
@@ -52,7 +66,13 @@ export const OverlayShape = memo(function OverlayShape({ overlay, view, stale }:
           ctx.strokeStyle = PLAN.conflict;
           ctx.lineWidth = 2.5;
           ctx.stroke();
-          label(ctx, `Lanes ${c.distance.toFixed(1)} m apart`, (sx(c.a[0]) + sx(c.b[0])) / 2, (sy(c.a[1]) + sy(c.b[1])) / 2, PLAN.conflict);
+          label(
+            ctx,
+            `Lanes ${c.distance.toFixed(1)} m apart`,
+            (sx(c.a[0]) + sx(c.b[0])) / 2,
+            (sy(c.a[1]) + sy(c.b[1])) / 2,
+            PLAN.conflict,
+          );
         }
         ctx.setLineDash([]);
       }}

@@ -7,7 +7,15 @@ import type { Background } from "~/lib/editor/background";
  * (x, y) m, each pixel metresPerPixel wide, turned by rotationDeg. Sits inside the plan group
  * (Y up), hence the negative Y scale that keeps the photo the right way up.
  */
-export function PhotoImage({ url, background, onSize }: { url: string; background: Background; onSize?(w: number, h: number): void }) {
+export function PhotoImage({
+  url,
+  background,
+  onSize,
+}: {
+  url: string;
+  background: Background;
+  onSize?(w: number, h: number): void;
+}) {
   const [image, setImage] = useState<HTMLImageElement | null>(null);
   useEffect(() => {
     const img = new window.Image();
@@ -26,7 +34,15 @@ export function PhotoImage({ url, background, onSize }: { url: string; backgroun
   }, [url]);
   if (!image || background.hidden) return null;
   return (
-    <Group x={background.x} y={background.y} rotation={background.rotationDeg} scaleX={background.metresPerPixel} scaleY={-background.metresPerPixel} opacity={background.opacity} listening={false}>
+    <Group
+      x={background.x}
+      y={background.y}
+      rotation={background.rotationDeg}
+      scaleX={background.metresPerPixel}
+      scaleY={-background.metresPerPixel}
+      opacity={background.opacity}
+      listening={false}
+    >
       <KonvaImage name="site-photo" image={image} perfectDrawEnabled={false} />
     </Group>
   );

@@ -30,14 +30,18 @@ export function localDrawing(section: LayoutSection, trackWidth: number): LocalS
   const drawing = sectionDrawing(section, trackWidth);
   const size = Math.min(1.2, trackWidth / 3);
   const h = drawing.mid.headingDeg * DEG;
-  const at = (ax: number, ay: number) => [drawing.mid.x + ax * Math.cos(h) - ay * Math.sin(h), drawing.mid.y + ax * Math.sin(h) + ay * Math.cos(h)];
+  const at = (ax: number, ay: number) => [
+    drawing.mid.x + ax * Math.cos(h) - ay * Math.sin(h),
+    drawing.mid.y + ax * Math.sin(h) + ay * Math.cos(h),
+  ];
   drawing.chevron = [...at(-size * 0.5, -size * 0.45), ...at(0, 0), ...at(-size * 0.5, size * 0.45)];
   return drawing;
 }
 
 function sectionDrawing(section: LayoutSection, trackWidth: number): LocalSectionDrawing {
   const half = trackWidth / 2;
-  if (section.kind === "turn") return turnDrawing(section.radius, section.angleDeg * DEG, section.direction === "left" ? 1 : -1, half);
+  if (section.kind === "turn")
+    return turnDrawing(section.radius, section.angleDeg * DEG, section.direction === "left" ? 1 : -1, half);
   const profile = section.kind === "jump" ? jumpProfile(section) : null;
   const length = section.kind === "straight" ? section.length : profile!.length;
   const drawing: LocalSectionDrawing = {

@@ -1,7 +1,17 @@
 import { useRef } from "react";
 import { Circle, Line, Rect, RegularPolygon, Text } from "react-konva";
 import { advancePose, type ResolvedSection } from "~/analysis/geometry";
-import { alongTrack, jumpMoveBlocker, moveJump, sectionHandles, straightLengthFromPoint, turnAngleFromPoint, turnCentre, turnRadiusFromPoint, type Point } from "~/lib/editor/drag-maths";
+import {
+  alongTrack,
+  jumpMoveBlocker,
+  moveJump,
+  sectionHandles,
+  straightLengthFromPoint,
+  turnAngleFromPoint,
+  turnCentre,
+  turnRadiusFromPoint,
+  type Point,
+} from "~/lib/editor/drag-maths";
 import { updateSection } from "~/lib/editor/section-ops";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { formatLength, type LengthUnit } from "~/lib/editor/units";
@@ -56,18 +66,45 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
     const sign = section.direction === "left" ? 1 : -1;
     return (
       <>
-        <Line points={[centre.x, centre.y, ...xy(toScreen(resolved.start)), centre.x, centre.y, ...xy(toScreen(handles.angle))]} stroke={PLAN.handleStroke} strokeWidth={1} dash={[4, 4]} listening={false} />
+        <Line
+          points={[
+            centre.x,
+            centre.y,
+            ...xy(toScreen(resolved.start)),
+            centre.x,
+            centre.y,
+            ...xy(toScreen(handles.angle)),
+          ]}
+          stroke={PLAN.handleStroke}
+          strokeWidth={1}
+          dash={[4, 4]}
+          listening={false}
+        />
         <DragPoint
           name="handle handle-radius"
           at={centre}
           {...common}
           onDragMove={(s) => {
-            const radius = turnRadiusFromPoint(resolved.start, section.direction, screenToWorld(view, s), snap);
+            const radius = turnRadiusFromPoint(
+              resolved.start,
+              section.direction,
+              screenToWorld(view, s),
+              snap,
+            );
             if (radius !== section.radius) onChange(updateSection(doc, index, { radius }), gesture.current);
             return toScreen(turnCentre(resolved.start, radius, section.direction));
           }}
         >
-          <Rect x={-7} y={-7} width={14} height={14} fill={PLAN.handleFill} stroke={PLAN.handleStroke} strokeWidth={2} hitStrokeWidth={14} />
+          <Rect
+            x={-7}
+            y={-7}
+            width={14}
+            height={14}
+            fill={PLAN.handleFill}
+            stroke={PLAN.handleStroke}
+            strokeWidth={2}
+            hitStrokeWidth={14}
+          />
           <Tip text={`R ${formatLength(section.radius, units)}`} />
         </DragPoint>
         <DragPoint
@@ -75,9 +112,19 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
           at={toScreen(handles.angle)}
           {...common}
           onDragMove={(s) => {
-            const angleDeg = turnAngleFromPoint(resolved.start, section.radius, section.direction, screenToWorld(view, s), section.angleDeg, snap);
-            if (angleDeg !== section.angleDeg) onChange(updateSection(doc, index, { angleDeg }), gesture.current);
-            return toScreen(advancePose(resolved.start, section.radius * angleDeg * DEG, sign / section.radius));
+            const angleDeg = turnAngleFromPoint(
+              resolved.start,
+              section.radius,
+              section.direction,
+              screenToWorld(view, s),
+              section.angleDeg,
+              snap,
+            );
+            if (angleDeg !== section.angleDeg)
+              onChange(updateSection(doc, index, { angleDeg }), gesture.current);
+            return toScreen(
+              advancePose(resolved.start, section.radius * angleDeg * DEG, sign / section.radius),
+            );
           }}
         >
           <Knob label={`${section.angleDeg.toFixed(0)}°`} />
@@ -98,12 +145,24 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
           const next = moveJump(doc, index, delta, snap);
           if (!next || next === doc) return toScreen(mid);
           onChange(next, gesture.current);
-          const moved = (next.sections[index - 1] as { length: number }).length - (doc.sections[index - 1] as { length: number }).length;
-          return toScreen({ x: mid.x + moved * Math.cos(resolved.start.heading), y: mid.y + moved * Math.sin(resolved.start.heading) });
+          const moved =
+            (next.sections[index - 1] as { length: number }).length -
+            (doc.sections[index - 1] as { length: number }).length;
+          return toScreen({
+            x: mid.x + moved * Math.cos(resolved.start.heading),
+            y: mid.y + moved * Math.sin(resolved.start.heading),
+          });
         }}
       >
-        <RegularPolygon sides={4} radius={10} fill={PLAN.handleFill} stroke={PLAN.handleStroke} strokeWidth={2} hitStrokeWidth={14} />
-        <Tip text="Move along the track" />
+        <RegularPolygon
+          sides={4}
+          radius={10}
+          fill={PLAN.handleFill}
+          stroke={PLAN.handleStroke}
+          strokeWidth={2}
+          hitStrokeWidth={14}
+        />
+        <Tip text="Move along the track" below />
       </DragPoint>
     );
   }
@@ -117,12 +176,29 @@ function xy(p: Point): [number, number] {
 function Knob({ label }: { label: string }) {
   return (
     <>
-      <Circle radius={8} fill={PLAN.handleFill} stroke={PLAN.handleStroke} strokeWidth={2.5} hitStrokeWidth={16} />
+      <Circle
+        radius={8}
+        fill={PLAN.handleFill}
+        stroke={PLAN.handleStroke}
+        strokeWidth={2.5}
+        hitStrokeWidth={16}
+      />
       <Tip text={label} />
     </>
   );
 }
 
-function Tip({ text }: { text: string }) {
-  return <Text x={12} y={-20} text={text} fontSize={12} fontStyle="600" fontFamily="Inter, sans-serif" fill={PLAN.handleStroke} listening={false} />;
+function Tip({ text, below = false }: { text: string; below?: boolean }) {
+  return (
+    <Text
+      x={12}
+      y={below ? 10 : -20}
+      text={text}
+      fontSize={12}
+      fontStyle="600"
+      fontFamily="Inter, sans-serif"
+      fill={PLAN.handleStroke}
+      listening={false}
+    />
+  );
 }

@@ -29,7 +29,12 @@ export const SectionShape = memo(function SectionShape(p: SectionShapeProps) {
   const drawing = useMemo(() => localDrawing(p.section, p.trackWidth), [p.section, p.trackWidth]);
   const { selected, scale, showLabel, index } = p;
   const sceneFunc = useCallback(
-    (context: Konva.Context, shape: Konva.Shape) => drawSection(context._context, shape, drawing, { selected, scale, label: showLabel || selected ? String(index + 1) : null }),
+    (context: Konva.Context, shape: Konva.Shape) =>
+      drawSection(context._context, shape, drawing, {
+        selected,
+        scale,
+        label: showLabel || selected ? String(index + 1) : null,
+      }),
     [drawing, selected, scale, showLabel, index],
   );
   const hitFunc = useCallback(
@@ -40,7 +45,18 @@ export const SectionShape = memo(function SectionShape(p: SectionShapeProps) {
     [drawing],
   );
   // The fill only tells konva the hit area is filled; the scene is painted by drawSection.
-  return <Shape name={`section-${index}`} x={p.x} y={p.y} rotation={p.headingDeg} sceneFunc={sceneFunc} hitFunc={hitFunc} fill="#000" perfectDrawEnabled={false} />;
+  return (
+    <Shape
+      name={`section-${index}`}
+      x={p.x}
+      y={p.y}
+      rotation={p.headingDeg}
+      sceneFunc={sceneFunc}
+      hitFunc={hitFunc}
+      fill="#000"
+      perfectDrawEnabled={false}
+    />
+  );
 });
 
 function path(ctx: CanvasRenderingContext2D, pts: number[], closed: boolean) {
@@ -50,7 +66,12 @@ function path(ctx: CanvasRenderingContext2D, pts: number[], closed: boolean) {
   if (closed) ctx.closePath();
 }
 
-function drawSection(ctx: CanvasRenderingContext2D, shape: Konva.Shape, d: LocalSectionDrawing, o: { selected: boolean; scale: number; label: string | null }) {
+function drawSection(
+  ctx: CanvasRenderingContext2D,
+  shape: Konva.Shape,
+  d: LocalSectionDrawing,
+  o: { selected: boolean; scale: number; label: string | null },
+) {
   const px = 1 / o.scale; // one screen pixel in section units (m)
   path(ctx, d.band, true);
   ctx.fillStyle = PLAN.band;
@@ -102,7 +123,13 @@ function drawSection(ctx: CanvasRenderingContext2D, shape: Konva.Shape, d: Local
 }
 
 /** The section number beside its middle, upright and at a fixed size on screen. */
-function drawLabel(ctx: CanvasRenderingContext2D, shape: Konva.Shape, d: LocalSectionDrawing, text: string, selected: boolean) {
+function drawLabel(
+  ctx: CanvasRenderingContext2D,
+  shape: Konva.Shape,
+  d: LocalSectionDrawing,
+  text: string,
+  selected: boolean,
+) {
   const at = ctx.getTransform().transformPoint(new DOMPoint(d.mid.x, d.mid.y));
   const ratio = shape.getLayer()?.getCanvas().getPixelRatio() ?? 1;
   ctx.save();

@@ -24,7 +24,16 @@ interface Props {
  * The driver stand, the numbered marshal points and (while editing) the site boundary's corners,
  * in screen space so their symbols and numbers keep their size at any zoom.
  */
-export function SiteMarkers({ doc, view, selection, editable, snap, onSelect, onChange, onGestureEnd }: Props) {
+export function SiteMarkers({
+  doc,
+  view,
+  selection,
+  editable,
+  snap,
+  onSelect,
+  onChange,
+  onGestureEnd,
+}: Props) {
   const gesture = useRef("");
   const begin = (what: string) => () => {
     gesture.current = `${what}-${Date.now()}-${Math.random()}`;
@@ -34,7 +43,8 @@ export function SiteMarkers({ doc, view, selection, editable, snap, onSelect, on
     return { x: snapLength(w.x, snap), y: snapLength(w.y, snap) };
   };
   const toScreen = (p: Point) => worldToScreen(view, p);
-  const isSel = (kind: string, index?: number) => selection?.kind === kind && (index === undefined || ("index" in selection && selection.index === index));
+  const isSel = (kind: string, index?: number) =>
+    selection?.kind === kind && (index === undefined || ("index" in selection && selection.index === index));
   return (
     <>
       {editable
@@ -53,7 +63,16 @@ export function SiteMarkers({ doc, view, selection, editable, snap, onSelect, on
               }}
               onDragEnd={onGestureEnd}
             >
-              <Rect x={-5} y={-5} width={10} height={10} fill={isSel("boundary", i) ? PLAN.selected : PLAN.paper} stroke={PLAN.boundary} strokeWidth={1.5} hitStrokeWidth={12} />
+              <Rect
+                x={-5}
+                y={-5}
+                width={10}
+                height={10}
+                fill={isSel("boundary", i) ? PLAN.selected : PLAN.paper}
+                stroke={PLAN.boundary}
+                strokeWidth={1.5}
+                hitStrokeWidth={12}
+              />
             </DragPoint>
           ))
         : null}
@@ -71,9 +90,29 @@ export function SiteMarkers({ doc, view, selection, editable, snap, onSelect, on
           }}
           onDragEnd={onGestureEnd}
         >
-          <Rect x={-9} y={-9} width={18} height={18} cornerRadius={3} fill={PLAN.stand} stroke={isSel("stand") ? PLAN.selected : PLAN.paper} strokeWidth={isSel("stand") ? 3 : 1.5} />
+          <Rect
+            x={-9}
+            y={-9}
+            width={18}
+            height={18}
+            cornerRadius={3}
+            fill={PLAN.stand}
+            stroke={isSel("stand") ? PLAN.selected : PLAN.paper}
+            strokeWidth={isSel("stand") ? 3 : 1.5}
+          />
           <Line points={[-5, 3, 0, -4, 5, 3]} stroke={PLAN.paper} strokeWidth={2} listening={false} />
-          <Text x={-40} y={12} width={80} align="center" text="Driver stand" fontSize={11} fontStyle="600" fontFamily="Inter, sans-serif" fill={PLAN.stand} listening={false} />
+          <Text
+            x={-40}
+            y={12}
+            width={80}
+            align="center"
+            text="Driver stand"
+            fontSize={11}
+            fontStyle="600"
+            fontFamily="Inter, sans-serif"
+            fill={PLAN.stand}
+            listening={false}
+          />
         </DragPoint>
       ) : null}
       {doc.marshalPoints.map((m, i) => (
@@ -91,8 +130,24 @@ export function SiteMarkers({ doc, view, selection, editable, snap, onSelect, on
           }}
           onDragEnd={onGestureEnd}
         >
-          <Circle radius={11} fill={PLAN.marshal} stroke={isSel("marshal", i) ? PLAN.text : PLAN.paper} strokeWidth={isSel("marshal", i) ? 3 : 1.5} />
-          <Text x={-11} y={-6} width={22} align="center" text={String(i + 1)} fontSize={12} fontStyle="700" fontFamily="Inter, sans-serif" fill="#ffffff" listening={false} />
+          <Circle
+            radius={11}
+            fill={PLAN.marshal}
+            stroke={isSel("marshal", i) ? PLAN.text : PLAN.paper}
+            strokeWidth={isSel("marshal", i) ? 3 : 1.5}
+          />
+          <Text
+            x={-11}
+            y={-6}
+            width={22}
+            align="center"
+            text={String(i + 1)}
+            fontSize={12}
+            fontStyle="700"
+            fontFamily="Inter, sans-serif"
+            fill="#ffffff"
+            listening={false}
+          />
         </DragPoint>
       ))}
     </>
@@ -112,7 +167,15 @@ export function StartMarker({ doc, view }: { doc: LayoutDocument; view: View }) 
     <Group listening={false}>
       <Line points={pts} stroke={PLAN.text} strokeWidth={5} />
       <Line points={pts} stroke="#ffffff" strokeWidth={5} dash={[4, 4]} />
-      <Text x={c.x + nx + 4} y={c.y + ny - 6} text="Start" fontSize={11} fontStyle="700" fontFamily="Inter, sans-serif" fill={PLAN.text} />
+      <Text
+        x={c.x + nx + 4}
+        y={c.y + ny - 6}
+        text="Start"
+        fontSize={11}
+        fontStyle="700"
+        fontFamily="Inter, sans-serif"
+        fill={PLAN.text}
+      />
     </Group>
   );
 }

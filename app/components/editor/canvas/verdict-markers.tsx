@@ -12,7 +12,17 @@ export const VERDICT_SHAPE = { "set-up": "triangle", straight: "circle", "cannot
  * the air", a circle for "take it straight", a square with a cross for "cannot clear", each with
  * its short text. The flight from lip to landing is a dashed line. Clicking selects the jump.
  */
-export function VerdictMarkers({ jumps, sectionIndex, view, selectedIndex }: { jumps: OverlayJump[]; sectionIndex: Map<string, number>; view: View; selectedIndex: number | null }) {
+export function VerdictMarkers({
+  jumps,
+  sectionIndex,
+  view,
+  selectedIndex,
+}: {
+  jumps: OverlayJump[];
+  sectionIndex: Map<string, number>;
+  view: View;
+  selectedIndex: number | null;
+}) {
   return (
     <>
       {jumps.map((j) => {
@@ -24,19 +34,56 @@ export function VerdictMarkers({ jumps, sectionIndex, view, selectedIndex }: { j
         const selected = index === selectedIndex;
         return (
           <Group key={j.sectionId} name={`verdict verdict-${index}`}>
-            {j.landing ? <Line points={[lip.x, lip.y, at.x, at.y]} stroke={colour} strokeWidth={1.5} dash={[3, 3]} listening={false} /> : null}
+            {j.landing ? (
+              <Line
+                points={[lip.x, lip.y, at.x, at.y]}
+                stroke={colour}
+                strokeWidth={1.5}
+                dash={[3, 3]}
+                listening={false}
+              />
+            ) : null}
             <Group x={at.x} y={at.y} name={`verdict-${index}`}>
-              {j.verdict === "set-up" ? <RegularPolygon sides={3} radius={10} fill={colour} stroke="#ffffff" strokeWidth={1.5} /> : null}
-              {j.verdict === "straight" ? <Circle radius={8} fill={colour} stroke="#ffffff" strokeWidth={1.5} /> : null}
+              {j.verdict === "set-up" ? (
+                <RegularPolygon sides={3} radius={10} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
+              ) : null}
+              {j.verdict === "straight" ? (
+                <Circle radius={8} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
+              ) : null}
               {j.verdict === "cannot-clear" ? (
                 <>
-                  <Rect x={-8} y={-8} width={16} height={16} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
-                  <Line points={[-4, -4, 4, 4, 0, 0, -4, 4, 4, -4]} stroke="#ffffff" strokeWidth={2} listening={false} />
+                  <Rect
+                    x={-8}
+                    y={-8}
+                    width={16}
+                    height={16}
+                    fill={colour}
+                    stroke="#ffffff"
+                    strokeWidth={1.5}
+                  />
+                  <Line
+                    points={[-4, -4, 4, 4, 0, 0, -4, 4, 4, -4]}
+                    stroke="#ffffff"
+                    strokeWidth={2}
+                    listening={false}
+                  />
                 </>
               ) : null}
               <Label x={13} y={-9}>
-                <Tag fill={selected ? PLAN.selected : "rgba(251, 249, 245, 0.95)"} stroke={colour} strokeWidth={1} cornerRadius={3} />
-                <Text text={shorten(j.label)} fontSize={11} fontStyle="600" fontFamily="Inter, sans-serif" padding={3} fill={selected ? "#ffffff" : colour} />
+                <Tag
+                  fill={selected ? PLAN.selected : "rgba(251, 249, 245, 0.95)"}
+                  stroke={colour}
+                  strokeWidth={1}
+                  cornerRadius={3}
+                />
+                <Text
+                  text={shorten(j.label)}
+                  fontSize={11}
+                  fontStyle="600"
+                  fontFamily="Inter, sans-serif"
+                  padding={3}
+                  fill={selected ? "#ffffff" : colour}
+                />
               </Label>
             </Group>
           </Group>
@@ -55,12 +102,27 @@ export function CalibrationMarks({ points, view }: { points: Point[]; view: View
   const s = points.map((p) => worldToScreen(view, p));
   return (
     <Group listening={false}>
-      {s.length === 2 ? <Line points={[s[0].x, s[0].y, s[1].x, s[1].y]} stroke={PLAN.selected} strokeWidth={2} dash={[6, 4]} /> : null}
+      {s.length === 2 ? (
+        <Line
+          points={[s[0].x, s[0].y, s[1].x, s[1].y]}
+          stroke={PLAN.selected}
+          strokeWidth={2}
+          dash={[6, 4]}
+        />
+      ) : null}
       {s.map((p, k) => (
         <Group key={k} x={p.x} y={p.y}>
           <Line points={[-10, 0, 10, 0]} stroke={PLAN.selected} strokeWidth={2} />
           <Line points={[0, -10, 0, 10]} stroke={PLAN.selected} strokeWidth={2} />
-          <Text x={6} y={-18} text={String(k + 1)} fontSize={13} fontStyle="700" fontFamily="Inter, sans-serif" fill={PLAN.selected} />
+          <Text
+            x={6}
+            y={-18}
+            text={String(k + 1)}
+            fontSize={13}
+            fontStyle="700"
+            fontFamily="Inter, sans-serif"
+            fill={PLAN.selected}
+          />
         </Group>
       ))}
     </Group>
