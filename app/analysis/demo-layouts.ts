@@ -3,8 +3,9 @@
  * track or person). Both are closed loops; docs/examples/ holds the same documents as files.
  *
  * The summer layout is a serpentine of six legs in front of the driver stand: nine jumps of seven
- * kinds; the first double, the kicker table and the hairpin table land into hairpins, the others
- * onto straights. Jumps whose landing faces away from the stand are kept low, and the tall
+ * kinds; the first double, the big hairpin double and the hairpin table land into hairpins, the
+ * others onto straights. The hairpin double is long enough in the air (about 1 s) that an expert
+ * gains by setting the car up for the hairpin; the smaller jumps are not. Jumps whose landing faces away from the stand are kept low, and the tall
  * step-up sits on a near leg, so that no stretch of track is hidden from the stand.
  */
 import type { LayoutDocument } from "~/lib/layout-document";
@@ -69,21 +70,17 @@ export const SUMMER_LAYOUT: LayoutDocument = {
       landingHeight: 0.45,
       landingAngleDeg: 25,
     },
-    { id: "straight-7", kind: "straight", length: 18.0555 },
+    { id: "straight-7", kind: "straight", length: 12.499 },
     {
-      id: "kicker-table",
+      id: "hairpin-double",
       kind: "jump",
-      name: "Kicker table",
-      preset: "custom",
-      profile: [
-        [0, 0],
-        [0.55, 0.3],
-        [2.3, 0.3],
-        [3.2, 0],
-      ],
-      lipIndex: 1,
-      landingStartIndex: 2,
-      landingEndIndex: 3,
+      name: "Hairpin double",
+      preset: "double",
+      faceHeight: 0.45,
+      faceAngleDeg: 35,
+      gap: 7,
+      landingHeight: 0.45,
+      landingAngleDeg: 22,
     },
     { id: "straight-8", kind: "straight", length: 1 },
     { id: "east-hairpin-2", kind: "turn", radius: 3, angleDeg: 180, direction: "left" },
