@@ -13,6 +13,8 @@ export default [
   // JSON API (401/403/404 as JSON) and file downloads: resource routes that check the session themselves.
   route("api/health", "routes/api-health.ts"),
   route("api/layouts/:layoutId", "routes/api-layout.ts"),
+  route("api/layouts/:layoutId/analysis", "routes/api-layout-analysis.ts"),
+  route("api/analysis", "routes/api-analysis.ts"),
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
 
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
@@ -29,6 +31,7 @@ export default [
     ]),
     route("layouts/:layoutId", "routes/layout-page.tsx"),
     route("layouts/:layoutId/settings", "routes/layout-settings.tsx"),
+    route("layouts/:layoutId/jumps/:sectionId", "routes/jump-page.tsx"),
     route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
     route("layouts/:layoutId/plan", "routes/layout-view.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),

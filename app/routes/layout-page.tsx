@@ -3,10 +3,13 @@ import type { Route } from "./+types/layout-page";
 import { requireLayoutAccess } from "~/auth/permissions.server";
 import { redirectWithNotice } from "~/auth/session.server";
 import { refusal } from "~/clubs/rule-error.server";
+import { parseJumpSort } from "~/components/analysis/jump-sort";
+import { LayoutAnalysisSection } from "~/components/analysis/layout-analysis-section";
 import { LayoutMeta, LayoutMetaFields, StatusBadge } from "~/components/layout-meta";
 import { Button } from "~/components/ui/button";
 import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form";
 import type { LayoutStatus } from "~/db/schema";
+import { pageAnalysis } from "~/layouts/analysis-page.server";
 import {
   changeLayoutStatus,
   deleteLayout,
@@ -21,24 +24,46 @@ export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.layout.name ?? "Layout"} · Loftline` },
 ];
 
-/** Members see a published layout; only directors see drafts and archived ones (others get 404). */
+/**
+ * Members see a published layout; only directors see drafts and archived ones (others get 404).
+ * The analysis follows the query: `class`, `skill`, and the jumps table's `sort` and `dir`; a
+ * parameter that is not understood is named on the page (status 400) and the defaults are shown.
+ */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { layout, club, role } = await requireLayoutAccess(request, params.layoutId);
-  return {
-    club,
-    isDirector: role === "director",
-    layout: {
-      id: layout.id,
-      name: layout.name,
-      surface: layout.surface,
-      trackWidth: layout.trackWidth,
-      status: layout.status,
-      version: layout.version,
-      createdAt: layout.createdAt,
-      updatedAt: layout.updatedAt,
-    },
-    createdByName: await layoutCreatorName(layout.createdBy),
+  const query = new URL(request.url).searchParams;
+  const isDirector = role === "director";
+  const page = await pageAnalysis(layout, query);
+  const sort = parseJumpSort(query);
+  const problems = sort.problem ? [...page.problems, sort.problem] : page.problems;
+  const { driverStand, marshalPoints, siteBoundary, trackWidth } = page.document;
+  const analysis = {
+    layoutId: layout.id,
+    clubId: club.id,
+    isDirector,
+    document: { driverStand, marshalPoints, siteBoundary, trackWidth },
+    classId: page.classId,
+    skill: page.skill,
+    classes: page.classes,
+    problems,
+    sort,
+    result: page.result,
   };
+  const createdByName = await layoutCreatorName(layout.createdBy);
+  const facts = {
+    id: layout.id,
+    name: layout.name,
+    surface: layout.surface,
+    trackWidth: layout.trackWidth,
+    status: layout.status,
+    version: layout.version,
+    createdAt: layout.createdAt,
+    updatedAt: layout.updatedAt,
+  };
+  return data(
+    { analysis, club, isDirector, layout: facts, createdByName },
+    { status: problems.length ? 400 : 200 },
+  );
 }
 
 const DONE: Record<string, string> = {
@@ -75,7 +100,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function LayoutPage({ loaderData, actionData }: Route.ComponentProps) {
-  const { club, layout, isDirector, createdByName } = loaderData;
+  const { club, layout, isDirector, createdByName, analysis } = loaderData;
   const errors: FieldErrors | undefined = actionData?.errors;
   const values = actionData?.values;
   return (
@@ -94,6 +119,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
       <FormMessage>
         {[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}
       </FormMessage>
+      <LayoutAnalysisSection data={analysis} layoutName={layout.name} />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <section
           aria-labelledby="about"
@@ -103,9 +129,6 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
             About this layout
           </h2>
           <LayoutMeta {...layout} clubName={club.name} createdByName={createdByName} />
-          <p className="mt-4 text-sm text-ink-500">
-            The track drawing and the jump analysis will appear on this page.
-          </p>
         </section>
         {isDirector ? <DirectorTools layout={layout} errors={errors} values={values} /> : null}
       </div>

@@ -1,5 +1,11 @@
+import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
+import { WET_WEATHER_LAYOUT } from "~/analysis/demo-layouts";
 import { loadClubGuidance } from "~/clubs/guidance.server";
+import { getDb } from "~/db/client.server";
+import { layouts } from "~/db/schema";
+import { analyseStoredLayout } from "~/layouts/analysis.server";
+import { createLayoutFromDocument } from "~/layouts/documents.server";
 import { action, loader } from "~/routes/club-settings";
 import { useTestDatabase } from "./helpers/db";
 import { makeClubWithRoles } from "./helpers/factories";
@@ -101,5 +107,28 @@ describe("club track guidance settings", () => {
       guidanceSet: "club",
       overrides: { minLapLength: 150 },
     });
+  });
+});
+
+describe("the rule checks follow the club's settings", () => {
+  it("checks a saved layout against the club's override and says where the value comes from", async () => {
+    const { club, director } = await makeClubWithRoles();
+    // The wet-weather demo layout is 3.2 m wide: it passes the national set's 3 m (engine.md).
+    const layout = await createLayoutFromDocument(club.id, WET_WEATHER_LAYOUT, director.id);
+    const width = async () => {
+      const [row] = await (await getDb()).select().from(layouts).where(eq(layouts.id, layout.id));
+      const run = await analyseStoredLayout(row, { classIds: ["buggy-2wd-10"], skill: "club" });
+      return run.analysis.rules.checks.find((c) => c.id === "minTrackWidth")!;
+    };
+    await post(club.id, { guidanceSet: "national", ...EMPTY_OVERRIDES }, director.cookie);
+    expect(await width()).toMatchObject({ value: 3, status: "pass" });
+    await post(
+      club.id,
+      { guidanceSet: "national", ...EMPTY_OVERRIDES, minTrackWidth: "3.5" },
+      director.cookie,
+    );
+    const overridden = await width();
+    expect(overridden).toMatchObject({ value: 3.5, measured: 3.2, status: "fail" });
+    expect(overridden.source).toMatch(/^Club setting/);
   });
 });

@@ -1,0 +1,68 @@
+import { SKILL_LEVELS, type JumpAnalysis } from "~/analysis/layout-analysis-types";
+import { metres, percent, SKILL_LABELS, signedSeconds, VERDICT_WORDS, verdictKind } from "./format";
+import { VerdictIcon } from "./verdict-mark";
+
+/** The verdict for each skill level with its numbers and the sentence for drivers. */
+export function JumpVerdictsTable({ jump }: { jump: JumpAnalysis }) {
+  return (
+    <div className="overflow-x-auto rounded-lg border border-sand-200 bg-white">
+      <table className="w-full min-w-[44rem] text-sm">
+        <caption className="sr-only">Verdict per skill level</caption>
+        <thead className="bg-sand-100 text-left text-ink-700">
+          <tr>
+            <th scope="col" className="px-3 py-2">
+              Skill
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Verdict
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Track saved
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Time saved
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Clean landings
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Expected gain
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {SKILL_LEVELS.map((level) => {
+            const v = jump.verdicts[level];
+            const kind = verdictKind(jump, level);
+            return (
+              <tr key={level} className="border-t border-sand-200 align-top">
+                <th scope="row" className="px-3 py-2 text-left font-medium">
+                  {SKILL_LABELS[level]}
+                </th>
+                <td className="px-3 py-2">
+                  <span className="flex items-center gap-1.5 font-medium">
+                    <VerdictIcon kind={kind} />
+                    {VERDICT_WORDS[kind]}
+                  </span>
+                  <span className="block text-xs text-ink-700">{v.text}</span>
+                </td>
+                <td className="px-3 py-2 tabular-nums">
+                  {jump.plan?.feasible ? metres(v.trackLengthSaved) : "\u2013"}
+                </td>
+                <td className="px-3 py-2 tabular-nums">
+                  {jump.plan?.feasible ? `${v.timeSaved.toFixed(2)} s` : "\u2013"}
+                </td>
+                <td className="px-3 py-2 tabular-nums">
+                  {jump.plan?.feasible ? percent(v.successRate) : "\u2013"}
+                </td>
+                <td className="px-3 py-2 tabular-nums">
+                  {jump.plan?.feasible ? signedSeconds(v.expectedGain) : "\u2013"}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

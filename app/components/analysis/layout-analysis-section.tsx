@@ -1,0 +1,164 @@
+import { Link } from "react-router";
+import type { ClassAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
+import { Cautions } from "~/components/cautions";
+import type { AnalysisOverlay } from "~/lib/analysis-overlay";
+import type { LayoutDocument } from "~/lib/layout-document";
+import { AnalysisPickers } from "./analysis-pickers";
+import { AnalysisSummary } from "./analysis-summary";
+import { jumpName, skillPhrase } from "./format";
+import { sortJumps, type JumpSort, type JumpSortKey } from "./jump-sort";
+import { JumpsTable } from "./jumps-table";
+import { PlanView } from "./plan-view";
+import { RuleChecksTable } from "./rule-checks-table";
+import type { SummaryData } from "./summary-data";
+
+export type LayoutAnalysisData = {
+  layoutId: string;
+  clubId: string;
+  isDirector: boolean;
+  document: Pick<LayoutDocument, "driverStand" | "marshalPoints" | "siteBoundary" | "trackWidth">;
+  classId: string;
+  skill: SkillLevel;
+  classes: { classId: string; label: string }[];
+  problems: string[];
+  sort: JumpSort;
+  result:
+    | { ok: true; summary: SummaryData; chosen: ClassAnalysis; overlay: AnalysisOverlay }
+    | { ok: false; message: string };
+};
+
+/**
+ * The layout page's analysis: class and skill pickers, links (export, plan, editor, JSON), the
+ * safety cautions, the summary, the plan with speeds, the jumps table and the rule checks.
+ */
+export function LayoutAnalysisSection({
+  data: d,
+  layoutName,
+}: {
+  data: LayoutAnalysisData;
+  layoutName: string;
+}) {
+  const query = (extra: Record<string, string>) => {
+    const p = new URLSearchParams({ class: d.classId, skill: d.skill, ...extra });
+    return `?${p.toString()}`;
+  };
+  const keep: Record<string, string> =
+    d.sort.key === "order" && d.sort.dir === "asc" ? {} : { sort: d.sort.key, dir: d.sort.dir };
+  const jumpHref = (sectionId: string) =>
+    `/layouts/${d.layoutId}/jumps/${encodeURIComponent(sectionId)}${query({})}`;
+  const sortHref = (key: JumpSortKey, dir: "asc" | "desc") => `${query({ sort: key, dir })}#jumps-heading`;
+  return (
+    <section aria-labelledby="analysis-heading" className="space-y-8">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h2 id="analysis-heading" className="text-xl font-semibold">
+            Analysis
+          </h2>
+          <p className="text-sm text-ink-500">
+            For the {d.classes.find((c) => c.classId === d.classId)?.label ?? d.classId}, verdicts for{" "}
+            {skillPhrase(d.skill)}. Model estimates.
+          </p>
+        </div>
+        <AnalysisPickers
+          key={`${d.classId}-${d.skill}`}
+          classes={d.classes}
+          classId={d.classId}
+          skill={d.skill}
+          keep={keep}
+        />
+      </div>
+      <nav aria-label="Layout tools" className="flex flex-wrap gap-x-5 gap-y-2 text-sm">
+        <Link to={`/layouts/${d.layoutId}/plan`} className="text-pine-700 hover:underline">
+          Open the plan
+        </Link>
+        {d.isDirector ? (
+          <Link to={`/layouts/${d.layoutId}/edit`} className="text-pine-700 hover:underline">
+            Edit the drawing
+          </Link>
+        ) : null}
+        <a href={`/layouts/${d.layoutId}/export`} download className="text-pine-700 hover:underline">
+          Export the layout file (.json)
+        </a>
+        <a href={`/api/layouts/${d.layoutId}/analysis${query({})}`} className="text-pine-700 hover:underline">
+          This analysis as JSON
+        </a>
+      </nav>
+      {d.problems.length ? (
+        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
+          {d.problems.join(" ")}
+        </p>
+      ) : null}
+      <Cautions compact />
+      {d.result.ok ? (
+        <Results data={d} result={d.result} layoutName={layoutName} jumpHref={jumpHref} sortHref={sortHref} />
+      ) : (
+        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
+          {d.result.message}
+        </p>
+      )}
+    </section>
+  );
+}
+
+function Results({
+  data: d,
+  result,
+  layoutName,
+  jumpHref,
+  sortHref,
+}: {
+  data: LayoutAnalysisData;
+  result: Extract<LayoutAnalysisData["result"], { ok: true }>;
+  layoutName: string;
+  jumpHref: (id: string) => string;
+  sortHref: (key: JumpSortKey, dir: "asc" | "desc") => string;
+}) {
+  const jumps = result.chosen.jumps;
+  const numbers = Object.fromEntries(jumps.map((j, i) => [j.sectionId, i + 1]));
+  const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
+  return (
+    <>
+      <AnalysisSummary analysis={result.summary} />
+      <section aria-labelledby="plan-heading" className="space-y-2">
+        <h2 id="plan-heading" className="text-lg font-semibold">
+          Plan with speeds
+        </h2>
+        <PlanView
+          overlay={result.overlay}
+          site={d.document}
+          numbers={numbers}
+          names={names}
+          jumpHref={jumpHref}
+          title={layoutName}
+          classLabel={result.chosen.label}
+        />
+      </section>
+      <section aria-labelledby="jumps-heading" className="space-y-2">
+        <h2 id="jumps-heading" className="text-lg font-semibold">
+          Jumps ({jumps.length})
+        </h2>
+        {jumps.length ? (
+          <JumpsTable
+            jumps={sortJumps(jumps, d.sort, d.skill)}
+            numbers={numbers}
+            skill={d.skill}
+            sort={d.sort}
+            sortHref={sortHref}
+            jumpHref={jumpHref}
+          />
+        ) : (
+          <p className="text-sm text-ink-700">This layout has no jumps.</p>
+        )}
+        <p className="text-xs text-ink-500">
+          EFH: equivalent fall height, the drop onto flat ground that would hit as hard as the landing.
+          Expected gain: time won per pass by trying the set-up, after the time lost to failed landings (3 s
+          each, an estimate).
+        </p>
+      </section>
+      <RuleChecksTable
+        report={result.summary.rules}
+        settingsHref={d.isDirector ? `/clubs/${d.clubId}/settings` : undefined}
+      />
+    </>
+  );
+}

@@ -1,0 +1,9 @@
+import type { ClassAnalysis, LayoutAnalysis } from "~/analysis/layout-analysis-types";
+
+/** The part of a layout analysis the summary and the rule checks show (no per-sample data). */
+export type SummaryData = Pick<
+  LayoutAnalysis,
+  "lapLength" | "closure" | "trackWidth" | "startStraight" | "note" | "rules"
+> & {
+  classes: Pick<ClassAnalysis, "classId" | "label" | "lapTime" | "speed" | "cannotClear" | "tightTurns">[];
+};

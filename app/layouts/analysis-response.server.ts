@@ -1,0 +1,49 @@
+/**
+ * JSON answers of the analysis API: the body text made once per memo entry, the cache header,
+ * and 400 answers that name the field.
+ */
+import type { LayoutIssue } from "~/lib/layout-document";
+import { AnalysisInputError } from "./analysis.server";
+
+/** A 400 answer listing every issue, each naming its field. */
+export function badRequest(issues: LayoutIssue[], error?: string): Response {
+  const text =
+    error ??
+    `Check ${issues.length === 1 ? "this field" : "these fields"}: ${issues.map((i) => `${i.path} ${i.message}`).join("; ")}.`;
+  return Response.json({ error: text, issues }, { status: 400 });
+}
+
+/**
+ * Turns a refusal of the analysis into a 400 naming the field: the checks of this module, and the
+ * engine's RangeErrors, whose messages start with the field ("skill: must be ...").
+ * @param prefix put before an engine field that belongs to the document ("document.").
+ */
+export function analysisRefusal(error: unknown, prefix = ""): Response {
+  if (error instanceof AnalysisInputError) return badRequest(error.issues);
+  if (error instanceof RangeError) {
+    const match = /^([A-Za-z][\w.[\]]*): (.+)$/.exec(error.message);
+    const issue = match
+      ? {
+          path: ["classId", "skill", "class"].includes(match[1]) ? match[1] : prefix + match[1],
+          message: match[2],
+        }
+      : {
+          path: prefix ? prefix.replace(/\.$/, "") : "(document)",
+          message: `cannot be analysed: ${error.message}`,
+        };
+    return badRequest([issue]);
+  }
+  throw error;
+}
+
+/** A JSON body already made, with the memo's hit or miss in X-Analysis-Cache. */
+export function jsonText(body: string, hit: boolean, extra: Record<string, string> = {}): Response {
+  return new Response(body, {
+    headers: {
+      "Content-Type": "application/json; charset=utf-8",
+      "Cache-Control": "private, no-cache",
+      "X-Analysis-Cache": hit ? "hit" : "miss",
+      ...extra,
+    },
+  });
+}

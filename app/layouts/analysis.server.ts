@@ -1,0 +1,135 @@
+/**
+ * Runs the layout analysis for the pages and the API: checks the requested classes and skill,
+ * applies the club's track guidance, and goes through the process-wide memo
+ * (app/analysis-cache.server.ts) so a repeat costs nothing. The engine's own cache underneath
+ * keeps each jump's costly parts, so an edited draft recomputes only what changed.
+ */
+import { createAnalysisCache } from "~/analysis/analysis-cache";
+import { CAR_PRESET_IDS, carPreset } from "~/analysis/cars";
+import { analyseLayout } from "~/analysis/layout-analysis";
+import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis/layout-analysis-types";
+import { buildOverlay } from "~/analysis/overlay";
+import {
+  canonicalJson,
+  entryByAlias,
+  memoAnalysis,
+  setAlias,
+  type AnalysisInputs,
+  type CacheEntry,
+} from "~/analysis-cache.server";
+import { loadClubGuidance, type ClubGuidance } from "~/clubs/guidance.server";
+import type { layouts } from "~/db/schema";
+import type { AnalysisOverlay } from "~/lib/analysis-overlay";
+import type { LayoutDocument, LayoutIssue } from "~/lib/layout-document";
+import { loadLayoutDocument } from "./documents.server";
+
+type LayoutRow = typeof layouts.$inferSelect;
+
+/** The engine's memo of per-jump work (speed windows, flights, plans), shared by every request. */
+const engineCache = createAnalysisCache(4000);
+
+/** A request that names a field wrongly: answered 400 with the issues. */
+export class AnalysisInputError extends Error {
+  constructor(readonly issues: LayoutIssue[]) {
+    super(issues.map((i) => `${i.path}: ${i.message}`).join("; "));
+    this.name = "AnalysisInputError";
+  }
+}
+
+const KNOWN_CLASSES = CAR_PRESET_IDS.join(", ");
+
+/** Checks a skill level given as text (a query parameter or a JSON field named `field`). */
+export function parseSkill(value: unknown, field: string, fallback: SkillLevel = "club"): SkillLevel {
+  if (value === undefined || value === null || value === "") return fallback;
+  if (typeof value === "string" && (SKILL_LEVELS as readonly string[]).includes(value))
+    return value as SkillLevel;
+  throw new AnalysisInputError([{ path: field, message: `must be one of ${SKILL_LEVELS.join(", ")}` }]);
+}
+
+/** Checks a car class id (a query parameter or a JSON field named `field`); undefined when absent. */
+export function parseClassId(value: unknown, field: string): string | undefined {
+  if (value === undefined || value === null || value === "") return undefined;
+  if (typeof value === "string" && carPreset(value)) return value;
+  const shown = typeof value === "string" ? `"${value.slice(0, 40)}"` : "that value";
+  throw new AnalysisInputError([
+    { path: field, message: `${shown} is not a known car class (known: ${KNOWN_CLASSES})` },
+  ]);
+}
+
+/** Every car class the document names must be known to the engine. */
+function checkDocumentClasses(doc: LayoutDocument, prefix: string): void {
+  const issues = doc.carClasses.flatMap((id, i) =>
+    carPreset(id)
+      ? []
+      : [
+          {
+            path: `${prefix}carClasses[${i}]`,
+            message: `"${id}" is not a known car class (known: ${KNOWN_CLASSES})`,
+          },
+        ],
+  );
+  if (issues.length) throw new AnalysisInputError(issues);
+}
+
+export interface AnalysisRun {
+  analysis: LayoutAnalysis;
+  entry: CacheEntry<LayoutAnalysis>;
+  /** True when the memo already held the result. */
+  hit: boolean;
+}
+
+/**
+ * Analyses a document (a draft or a stored layout's) for the given classes (default: the
+ * document's own) with a club's guidance (default: the document's own set, no overrides).
+ * @param fieldPrefix how the document's fields are named in issues ("document." in the API).
+ * @throws AnalysisInputError naming the field for an unknown class.
+ */
+export function analyseDocument(
+  document: LayoutDocument,
+  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance; fieldPrefix?: string },
+): AnalysisRun {
+  checkDocumentClasses(document, opts.fieldPrefix ?? "");
+  const guidance = opts.guidance ?? { guidanceSet: document.guidance, overrides: {} };
+  const inputs: AnalysisInputs = {
+    document,
+    classIds: opts.classIds ?? document.carClasses,
+    skill: opts.skill,
+    guidance: guidance.guidanceSet,
+    overrides: guidance.overrides,
+  };
+  const { entry, hit } = memoAnalysis(inputs, () =>
+    analyseLayout(
+      { ...document, guidance: guidance.guidanceSet },
+      { classIds: inputs.classIds, skill: inputs.skill, overrides: guidance.overrides, cache: engineCache },
+    ),
+  );
+  return { analysis: entry.value, entry, hit };
+}
+
+/**
+ * A stored layout's analysis at its current version with its club's guidance. A warm repeat is
+ * answered from the memo by the layout's id and version, without reading the document.
+ * @param classIds undefined for the document's own classes.
+ */
+export async function analyseStoredLayout(
+  layout: LayoutRow,
+  opts: { classIds?: readonly string[]; skill: SkillLevel },
+): Promise<AnalysisRun & { guidance: ClubGuidance }> {
+  const guidance = await loadClubGuidance(layout.clubId);
+  const alias = canonicalJson([layout.id, layout.version, guidance, opts.classIds ?? "*", opts.skill]);
+  const known = entryByAlias<LayoutAnalysis>(alias);
+  if (known) return { analysis: known.value, entry: known, hit: true, guidance };
+  const { document } = await loadLayoutDocument(layout);
+  const run = analyseDocument(document, { ...opts, guidance });
+  setAlias(alias, run.entry.key);
+  return { ...run, guidance };
+}
+
+/** The overlay of a class (default the first analysed), made once per memo entry. */
+export function overlayFor(
+  run: AnalysisRun,
+  classId: string | undefined,
+  skill: SkillLevel,
+): AnalysisOverlay {
+  return buildOverlay(run.analysis, classId ?? run.analysis.classes[0].classId, skill);
+}

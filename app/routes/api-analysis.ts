@@ -1,0 +1,68 @@
+import type { Route } from "./+types/api-analysis";
+import { requireLayoutAccess, requireUser } from "~/auth/permissions.server";
+import { cachedBody } from "~/analysis-cache.server";
+import type { ClubGuidance } from "~/clubs/guidance.server";
+import { loadClubGuidance } from "~/clubs/guidance.server";
+import { analyseDocument, overlayFor, parseClassId, parseSkill } from "~/layouts/analysis.server";
+import { analysisRefusal, badRequest, jsonText } from "~/layouts/analysis-response.server";
+import { ONE_MEGABYTE, readJsonBody } from "~/lib/json-body.server";
+import { parseLayoutDocument } from "~/lib/layout-document";
+
+/** Only POST has a meaning here. */
+export function loader(_: Route.LoaderArgs) {
+  return Response.json(
+    { error: "Send a layout document with POST: { document, classId?, skill?, layoutId? }." },
+    { status: 405, headers: { Allow: "POST" } },
+  );
+}
+
+/**
+ * POST /api/analysis: the analysis of a draft layout document, nothing saved (the editor calls it
+ * while a director drags). Body `{ document, classId?, skill?, layoutId? }`, at most 1 MB (413
+ * beyond). Answers `{ analysis, overlay }`: every class of the document, or only `classId`; the
+ * overlay for `classId` or the first class. With `layoutId` (a layout the user may open) the
+ * club's track guidance applies, otherwise the document's own set. Signed-in users only (401);
+ * a bad document or field answers 400 with `{ error, issues: [{ path, message }] }`.
+ */
+export async function action({ request }: Route.ActionArgs) {
+  if (request.method !== "POST") return loader({} as Route.LoaderArgs);
+  await requireUser(request, { api: true });
+  const body = await readJsonBody(request, ONE_MEGABYTE);
+  if (typeof body !== "object" || body === null || Array.isArray(body))
+    return badRequest([{ path: "(body)", message: "must be a JSON object { document, classId?, skill? }" }]);
+  const input = body as Record<string, unknown>;
+  if (input.document === undefined) return badRequest([{ path: "document", message: "is required" }]);
+  const parsed = parseLayoutDocument(typeof input.document === "string" ? null : input.document);
+  if (!parsed.ok) {
+    const issues = parsed.issues.map((i) => ({
+      path: i.path === "(document)" ? "document" : `document.${i.path}`,
+      message: i.message,
+    }));
+    return badRequest(issues, `The layout document is not complete: ${issues.length} problem(s) found.`);
+  }
+  try {
+    const classId = parseClassId(input.classId, "classId");
+    const skill = parseSkill(input.skill, "skill");
+    let guidance: ClubGuidance | undefined;
+    if (input.layoutId !== undefined) {
+      if (typeof input.layoutId !== "string")
+        return badRequest([{ path: "layoutId", message: "must be a layout id" }]);
+      const { layout } = await requireLayoutAccess(request, input.layoutId, "member", { api: true });
+      guidance = await loadClubGuidance(layout.clubId);
+    }
+    const run = analyseDocument(parsed.document, {
+      classIds: classId ? [classId] : undefined,
+      skill,
+      guidance,
+      fieldPrefix: "document.",
+    });
+    const text = cachedBody(run.entry, "post", () => ({
+      analysis: run.analysis,
+      overlay: overlayFor(run, classId, skill),
+    }));
+    return jsonText(text, run.hit);
+  } catch (error) {
+    if (error instanceof Response) throw error;
+    return analysisRefusal(error, "document.");
+  }
+}
