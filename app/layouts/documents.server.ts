@@ -96,8 +96,16 @@ export async function saveLayoutDocument(
   });
 }
 
-/** Creates a new draft layout from a document (import). One transaction: row and first version. */
-export async function createLayoutFromDocument(clubId: string, document: LayoutDocument, userId: string) {
+/**
+ * Creates a new draft layout from a document (an import, or a copy saved from the editor). One
+ * transaction: row and first version.
+ */
+export async function createLayoutFromDocument(
+  clubId: string,
+  document: LayoutDocument,
+  userId: string,
+  note = "Imported",
+) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [layout] = await tx
@@ -116,7 +124,7 @@ export async function createLayoutFromDocument(clubId: string, document: LayoutD
       layoutId: layout.id,
       number: 1,
       document: JSON.stringify(document),
-      note: "Imported",
+      note,
       createdBy: userId,
     });
     return layout;

@@ -57,6 +57,7 @@ export async function action({ request, params }: Route.ActionArgs) {
         club.id,
         { ...document, name: copyName(document.name) },
         user.id,
+        "Saved as a copy from the editor",
       );
       return data(
         { ok: true as const, intent, layoutId: copy.id, url: `/layouts/${copy.id}/edit`, name: copy.name },
