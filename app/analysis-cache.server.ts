@@ -8,6 +8,7 @@
  * a warm request for a saved layout skips reading and checking its document as well.
  */
 import { createHash } from "node:crypto";
+import { gzipSync } from "node:zlib";
 import type { GuidanceOverrides, GuidanceSetId } from "~/analysis/rules";
 import type { SkillLevel } from "~/analysis/layout-analysis-types";
 import type { LayoutDocument } from "~/lib/layout-document";
@@ -72,11 +73,17 @@ export class LruMap<K, V> {
   }
 }
 
+/** A JSON answer made once: UTF-8 bytes, and the same gzip-compressed when first asked for. */
+export interface CachedBody {
+  bytes: Uint8Array;
+  gzip(): Uint8Array;
+}
+
 /** One remembered analysis and the JSON bodies already made from it (by what they hold). */
 export interface CacheEntry<T> {
   key: string;
   value: T;
-  bodies: Map<string, string>;
+  bodies: Map<string, CachedBody>;
 }
 
 /** Most analyses kept; a full analysis of a large layout is some tens of kilobytes. */
@@ -119,11 +126,28 @@ export function setAlias(alias: string, key: string): void {
   aliases.set(alias, key);
 }
 
-/** A JSON body made once per entry and purpose. */
-export function cachedBody<T>(entry: CacheEntry<T>, purpose: string, make: () => unknown): string {
+/** Significant digits of the numbers in JSON answers: far finer than any model estimate. */
+export const JSON_DIGITS = 6;
+
+/** Writes fractional numbers to JSON_DIGITS significant digits (whole numbers as they are). */
+function compactNumber(_key: string, value: unknown): unknown {
+  return typeof value === "number" && !Number.isInteger(value) && Number.isFinite(value)
+    ? Number(value.toPrecision(JSON_DIGITS))
+    : value;
+}
+
+const encoder = new TextEncoder();
+
+/**
+ * A JSON body made once per entry and purpose: a repeat neither serialises, encodes nor compresses
+ * again (clients that accept gzip get the compressed bytes, made on the first such request).
+ */
+export function cachedBody<T>(entry: CacheEntry<T>, purpose: string, make: () => unknown): CachedBody {
   let body = entry.bodies.get(purpose);
   if (body === undefined) {
-    body = JSON.stringify(make());
+    const bytes = encoder.encode(JSON.stringify(make(), compactNumber));
+    let gzipped: Uint8Array | undefined;
+    body = { bytes, gzip: () => (gzipped ??= gzipSync(bytes)) };
     entry.bodies.set(purpose, body);
   }
   return body;

@@ -2,6 +2,7 @@
  * JSON answers of the analysis API: the body text made once per memo entry, the cache header,
  * and 400 answers that name the field.
  */
+import type { CachedBody } from "~/analysis-cache.server";
 import type { LayoutIssue } from "~/lib/layout-document";
 import { AnalysisInputError } from "./analysis.server";
 
@@ -36,11 +37,24 @@ export function analysisRefusal(error: unknown, prefix = ""): Response {
   throw error;
 }
 
-/** A JSON body already made, with the memo's hit or miss in X-Analysis-Cache. */
-export function jsonText(body: string, hit: boolean, extra: Record<string, string> = {}): Response {
-  return new Response(body, {
+/**
+ * A JSON body already made, gzip-compressed when the client accepts it, with the memo's hit or
+ * miss in X-Analysis-Cache.
+ */
+export function jsonText(
+  request: Request,
+  body: CachedBody,
+  hit: boolean,
+  extra: Record<string, string> = {},
+): Response {
+  const gzip = /\bgzip\b/.test(request.headers.get("Accept-Encoding") ?? "");
+  const bytes = gzip ? body.gzip() : body.bytes;
+  return new Response(bytes as Uint8Array<ArrayBuffer>, {
     headers: {
       "Content-Type": "application/json; charset=utf-8",
+      "Content-Length": String(bytes.byteLength),
+      ...(gzip ? { "Content-Encoding": "gzip" } : {}),
+      Vary: "Accept-Encoding",
       "Cache-Control": "private, no-cache",
       "X-Analysis-Cache": hit ? "hit" : "miss",
       ...extra,

@@ -18,7 +18,9 @@ import {
   type CacheEntry,
 } from "~/analysis-cache.server";
 import { loadClubGuidance, type ClubGuidance } from "~/clubs/guidance.server";
-import type { layouts } from "~/db/schema";
+import { eq } from "drizzle-orm";
+import { getDb } from "~/db/client.server";
+import { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/lib/analysis-overlay";
 import type { LayoutDocument, LayoutIssue } from "~/lib/layout-document";
 import { loadLayoutDocument } from "./documents.server";
@@ -106,22 +108,35 @@ export function analyseDocument(
   return { analysis: entry.value, entry, hit };
 }
 
+/** What the memo needs to know of a stored layout; the rest is read only when the memo misses. */
+export type LayoutRef = Pick<LayoutRow, "id" | "clubId" | "version">;
+
+async function fullRow(layout: LayoutRef | LayoutRow): Promise<LayoutRow> {
+  if ("createdAt" in layout) return layout;
+  const db = await getDb();
+  const [row] = await db.select().from(layouts).where(eq(layouts.id, layout.id));
+  if (!row) throw Response.json({ error: "No such layout." }, { status: 404 });
+  return row;
+}
+
 /**
  * A stored layout's analysis at its current version with its club's guidance. A warm repeat is
  * answered from the memo by the layout's id and version, without reading the document.
- * @param classIds undefined for the document's own classes.
+ * @param opts.classIds undefined for the document's own classes; opts.guidance when already read.
  */
 export async function analyseStoredLayout(
-  layout: LayoutRow,
-  opts: { classIds?: readonly string[]; skill: SkillLevel },
+  layout: LayoutRef | LayoutRow,
+  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance },
 ): Promise<AnalysisRun & { guidance: ClubGuidance }> {
-  const guidance = await loadClubGuidance(layout.clubId);
-  const alias = canonicalJson([layout.id, layout.version, guidance, opts.classIds ?? "*", opts.skill]);
-  const known = entryByAlias<LayoutAnalysis>(alias);
+  const guidance = opts.guidance ?? (await loadClubGuidance(layout.clubId));
+  const aliasOf = (version: number) =>
+    canonicalJson([layout.id, version, guidance, opts.classIds ?? "*", opts.skill]);
+  const known = entryByAlias<LayoutAnalysis>(aliasOf(layout.version));
   if (known) return { analysis: known.value, entry: known, hit: true, guidance };
-  const { document } = await loadLayoutDocument(layout);
-  const run = analyseDocument(document, { ...opts, guidance });
-  setAlias(alias, run.entry.key);
+  const row = await fullRow(layout);
+  const { document } = await loadLayoutDocument(row);
+  const run = analyseDocument(document, { classIds: opts.classIds, skill: opts.skill, guidance });
+  setAlias(aliasOf(row.version), run.entry.key);
   return { ...run, guidance };
 }
 

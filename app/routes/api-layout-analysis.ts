@@ -1,8 +1,8 @@
 import type { Route } from "./+types/api-layout-analysis";
-import { requireLayoutAccess } from "~/auth/permissions.server";
 import { cachedBody } from "~/analysis-cache.server";
 import { analyseStoredLayout, overlayFor, parseClassId, parseSkill } from "~/layouts/analysis.server";
 import { analysisRefusal, jsonText } from "~/layouts/analysis-response.server";
+import { apiLayoutAccess } from "~/layouts/api-access.server";
 
 /**
  * GET /api/layouts/:layoutId/analysis?class=ID&skill=novice|club|expert: a saved layout's
@@ -13,12 +13,16 @@ import { analysisRefusal, jsonText } from "~/layouts/analysis-response.server";
  * memo; `If-None-Match` with the last ETag answers 304.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout } = await requireLayoutAccess(request, params.layoutId, "member", { api: true });
+  const { layout, guidance } = await apiLayoutAccess(request, params.layoutId);
   const query = new URL(request.url).searchParams;
   try {
     const classId = parseClassId(query.get("class"), "class");
     const skill = parseSkill(query.get("skill"), "skill");
-    const run = await analyseStoredLayout(layout, { classIds: classId ? [classId] : undefined, skill });
+    const run = await analyseStoredLayout(layout, {
+      classIds: classId ? [classId] : undefined,
+      skill,
+      guidance,
+    });
     const etag = `"${run.entry.key.slice(0, 32)}.${layout.version}"`;
     if (request.headers.get("If-None-Match") === etag)
       return new Response(null, {
@@ -38,7 +42,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         overlay,
       };
     });
-    return jsonText(text, run.hit, { ETag: etag });
+    return jsonText(request, text, run.hit, { ETag: etag });
   } catch (error) {
     if (error instanceof Response) throw error;
     return analysisRefusal(error);

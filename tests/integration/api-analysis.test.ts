@@ -1,3 +1,4 @@
+import { gunzipSync } from "node:zlib";
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/analysis/demo-layouts";
@@ -5,14 +6,16 @@ import type { LayoutAnalysis } from "~/analysis/layout-analysis-types";
 import { analysisCacheStats } from "~/analysis-cache.server";
 import { getDb } from "~/db/client.server";
 import { seedDemoData } from "~/db/demo-data.server";
-import { layouts, memberships } from "~/db/schema";
+import { layouts, memberships, users } from "~/db/schema";
+import { requireLayoutAccess } from "~/auth/permissions.server";
+import { apiLayoutAccess } from "~/layouts/api-access.server";
 import { createLayoutFromDocument, saveLayoutDocument } from "~/layouts/documents.server";
 import type { AnalysisOverlay } from "~/lib/analysis-overlay";
 import { action as postAnalysis } from "~/routes/api-analysis";
 import { loader as getLayout } from "~/routes/api-layout";
 import { loader as getAnalysis } from "~/routes/api-layout-analysis";
 import { useTestDatabase } from "./helpers/db";
-import { makeClubWithRoles } from "./helpers/factories";
+import { addMember, makeClubWithRoles, makeUser } from "./helpers/factories";
 import { args, getRequest, jsonRequest, run } from "./helpers/requests";
 
 useTestDatabase();
@@ -178,6 +181,20 @@ describe("GET /api/layouts/:layoutId/analysis", () => {
       ),
     );
     expect(notModified.status).toBe(304);
+    // A client that accepts gzip gets the same JSON compressed (made once, like the plain bytes).
+    const zipped = (await getAnalysis(
+      args(
+        getRequest(`/api/layouts/${summer.id}/analysis?class=buggy-2wd-10&skill=expert`, driver.cookie, {
+          "Accept-Encoding": "gzip, br",
+        }),
+        {
+          layoutId: summer.id,
+        },
+      ),
+    )) as Response;
+    expect(zipped.headers.get("Content-Encoding")).toBe("gzip");
+    const unzipped = JSON.parse(gunzipSync(new Uint8Array(await zipped.arrayBuffer())).toString("utf8"));
+    expect(unzipped).toEqual(body);
 
     // A saved change is a new version: analysed afresh, with the new lap length.
     const longer = structuredClone(SUMMER_LAYOUT);
@@ -186,5 +203,47 @@ describe("GET /api/layouts/:layoutId/analysis", () => {
     const after = await get(summer.id, "?class=buggy-2wd-10&skill=expert", driver.cookie);
     expect(after.headers.get("X-Analysis-Cache")).toBe("miss");
     expect((after.data as Answer).analysis.lapLength).toBeCloseTo(body.analysis.lapLength + 10, 1);
+  });
+});
+
+describe("the API's one-query layout check", () => {
+  it("answers exactly as requireLayoutAccess does for every role, status and visitor", async () => {
+    const { club, director, marshal, driver, outsider } = await makeClubWithRoles();
+    const ghost = await makeUser({ name: "Gone Member" });
+    await addMember(club.id, ghost.id, "driver");
+    const db = await getDb();
+    await db.delete(users).where(eq(users.id, ghost.id)); // a cookie left behind by a deleted account
+    const ids: Record<string, string> = { missing: "no-such-layout" };
+    for (const status of ["draft", "published", "archived"] as const) {
+      const layout = await createLayoutFromDocument(club.id, WET_WEATHER_LAYOUT, director.id);
+      await db.update(layouts).set({ status }).where(eq(layouts.id, layout.id));
+      ids[status] = layout.id;
+    }
+    const visitors: Record<string, string | undefined> = {
+      "signed out": undefined,
+      director: director.cookie,
+      marshal: marshal.cookie,
+      driver: driver.cookie,
+      outsider: outsider.cookie,
+      "deleted account": ghost.cookie,
+    };
+    const seen = new Set<number>();
+    for (const [who, cookie] of Object.entries(visitors)) {
+      for (const [what, id] of Object.entries(ids)) {
+        const general = await run(() =>
+          requireLayoutAccess(getRequest("/x", cookie), id, "member", { api: true }),
+        );
+        const single = await run(() => apiLayoutAccess(getRequest("/x", cookie), id));
+        expect([who, what, single.status, single.data]).toEqual([
+          who,
+          what,
+          general.status,
+          general.status === 200 ? single.data : general.data,
+        ]);
+        if (single.status === 200) expect((single.data as { layout: { id: string } }).layout.id).toBe(id);
+        seen.add(single.status);
+      }
+    }
+    expect([...seen].sort()).toEqual([200, 401, 403, 404]);
   });
 });
