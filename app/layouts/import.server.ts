@@ -23,7 +23,15 @@ export type ImportField = "file" | "json";
 
 export type ImportReading =
   | { ok: true; document: LayoutDocument; source: ImportField; notes: string[] }
-  | { ok: false; status: 400 | 413; field: ImportField; message: string; issues: LayoutIssue[] };
+  | {
+      ok: false;
+      status: 400 | 413;
+      field: ImportField;
+      message: string;
+      issues: LayoutIssue[];
+      /** Pasted text sent back, so the form shows it again to be corrected. */
+      pasted?: string;
+    };
 
 const TOO_LARGE = `The file is too large: a layout file is at most ${MAX_LAYOUT_FILE_BYTES / ONE_MEGABYTE} MB.`;
 
@@ -32,8 +40,9 @@ function refuse(
   field: ImportField,
   message: string,
   issues: LayoutIssue[] = [],
+  pasted?: string,
 ): ImportReading {
-  return { ok: false, status, field, message, issues };
+  return { ok: false, status, field, message, issues, ...(pasted === undefined ? {} : { pasted }) };
 }
 
 /** Reads the uploaded or pasted text from a multipart or urlencoded form. */
@@ -93,12 +102,8 @@ export async function readLayoutImport(request: Request, clubId: string): Promis
   const parsed = parseLayoutDocument(read.text.replace(/^\uFEFF/, ""));
   if (!parsed.ok) {
     const n = parsed.issues.length;
-    return refuse(
-      400,
-      read.field,
-      `The file is not a valid Loftline layout: ${n} problem${n === 1 ? "" : "s"} found. Nothing was imported.`,
-      parsed.issues,
-    );
+    const message = `The file is not a valid Loftline layout: ${n} problem${n === 1 ? "" : "s"} found. Nothing was imported.`;
+    return refuse(400, read.field, message, parsed.issues, read.field === "json" ? read.text : undefined);
   }
   const notes: string[] = [];
   let document = parsed.document;

@@ -22,8 +22,8 @@ export async function action({ request, params }: Route.ActionArgs) {
   const { club, user } = await requireClubRole(request, params.clubId, "director");
   const reading = await readLayoutImport(request, club.id);
   if (!reading.ok) {
-    const { status, field, message, issues } = reading;
-    return data({ field, message, issues }, { status });
+    const { status, field, message, issues, pasted } = reading;
+    return data({ field, message, issues, pasted }, { status });
   }
   const layout = await createLayoutFromDocument(club.id, reading.document, user.id);
   const notice = [`${reading.document.name} is imported as a draft.`, ...reading.notes].join(" ");

@@ -123,6 +123,17 @@ describe("layout export and import", () => {
     );
     expect(empty.status).toBe(400);
     expect(empty.data).toMatchObject({ field: "json" });
+    // Pasted text that is refused comes back, so the director corrects it rather than pastes again.
+    const pasted = '{"format":"loftline-layout","formatVersion":1}';
+    const refused = await run(() =>
+      importAction(
+        args(formRequest(`/clubs/${club.id}/layouts/import`, { json: pasted }, director.cookie), {
+          clubId: club.id,
+        }),
+      ),
+    );
+    expect(refused.status).toBe(400);
+    expect(refused.data).toMatchObject({ field: "json", pasted });
     expect(await layoutCount(club.id)).toBe(0);
   });
 

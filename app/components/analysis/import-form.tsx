@@ -10,6 +10,8 @@ export type ImportResult = {
   field: "file" | "json";
   message: string;
   issues: { path: string; message: string }[];
+  /** The pasted text, shown again to be corrected. */
+  pasted?: string;
 };
 
 /** The import form; also shown on the club's layout list for directors. */
@@ -49,6 +51,7 @@ export function ImportForm({ clubId, result }: { clubId: string; result?: Import
             id="import-json"
             name="json"
             rows={6}
+            defaultValue={result?.pasted}
             spellCheck={false}
             className="block w-full rounded-md border border-ink-300 bg-white px-3 py-2 font-mono text-xs"
             aria-invalid={jsonErrors ? true : undefined}
