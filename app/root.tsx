@@ -66,6 +66,7 @@ const ERROR_TEXT: Record<number, { title: string; body: string }> = {
   404: { title: "Not found", body: "There is nothing here, or it is not shared with you." },
   409: { title: "Changed meanwhile", body: "Someone else saved a newer version. Reload to see it." },
   413: { title: "Too large", body: "That upload is larger than allowed." },
+  422: { title: "Cannot analyse this layout", body: "The saved drawing could not be analysed. Open it in the editor to fix it." },
   429: { title: "Too many attempts", body: "Wait a few minutes and try again." },
 };
 

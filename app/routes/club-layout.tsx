@@ -28,6 +28,11 @@ export default function ClubLayout({ loaderData }: Route.ComponentProps) {
           <NavLink to={`/clubs/${club.id}/members`} className={tabClass}>
             Members
           </NavLink>
+          {role === "director" ? (
+            <NavLink to={`/clubs/${club.id}/settings`} className={tabClass}>
+              Track guidance
+            </NavLink>
+          ) : null}
         </nav>
       </div>
       <Outlet />
