@@ -26,7 +26,10 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export const meta: Route.MetaFunction = () => [
   { title: "Loftline: plan the track, fly every jump" },
-  { name: "description", content: "Track layouts, jump analysis and marshal planning for off-road RC clubs." },
+  {
+    name: "description",
+    content: "Track layouts, jump analysis and marshal planning for off-road RC clubs.",
+  },
 ];
 
 export function Layout({ children }: { children: React.ReactNode }) {
@@ -43,7 +46,10 @@ export function Layout({ children }: { children: React.ReactNode }) {
       <body className="min-h-screen font-sans">
         <SiteHeader user={root?.user ?? null} showDevTools={root?.showDevTools ?? false} />
         {root?.notice ? (
-          <div role="status" className="no-print border-b border-pine-100 bg-pine-50 px-4 py-2 text-center text-sm text-pine-800">
+          <div
+            role="status"
+            className="no-print border-b border-pine-100 bg-pine-50 px-4 py-2 text-center text-sm text-pine-800"
+          >
             {root.notice}
           </div>
         ) : null}
@@ -60,13 +66,22 @@ export default function App() {
 }
 
 const ERROR_TEXT: Record<number, { title: string; body: string }> = {
-  400: { title: "That request was not right", body: "Something in it could not be read. Go back and check the form." },
+  400: {
+    title: "That request was not right",
+    body: "Something in it could not be read. Go back and check the form.",
+  },
   401: { title: "Please sign in", body: "This page is for signed-in club members." },
-  403: { title: "Not allowed", body: "Your role in this club does not allow this. Ask one of the club's race directors." },
+  403: {
+    title: "Not allowed",
+    body: "Your role in this club does not allow this. Ask one of the club's race directors.",
+  },
   404: { title: "Not found", body: "There is nothing here, or it is not shared with you." },
   409: { title: "Changed meanwhile", body: "Someone else saved a newer version. Reload to see it." },
   413: { title: "Too large", body: "That upload is larger than allowed." },
-  422: { title: "Cannot analyse this layout", body: "The saved drawing could not be analysed. Open it in the editor to fix it." },
+  422: {
+    title: "Cannot analyse this layout",
+    body: "The saved drawing could not be analysed. Open it in the editor to fix it.",
+  },
   429: { title: "Too many attempts", body: "Wait a few minutes and try again." },
 };
 

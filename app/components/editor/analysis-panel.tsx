@@ -1,3 +1,4 @@
+import { CAR_PRESETS } from "~/analysis/cars";
 import type { AnalysisOverlay, OverlayJump } from "~/lib/analysis-overlay";
 import type { LayoutSection } from "~/lib/layout-document";
 import { SKILLS, type AnalysisStatus, type Skill } from "./use-analysis";
@@ -7,6 +8,8 @@ const VERDICT_TEXT: Record<OverlayJump["verdict"], string> = {
   straight: "Take it straight",
   "cannot-clear": "Cannot clear",
 };
+
+const SKILL_LABELS: Record<Skill, string> = { novice: "Novice", club: "Club racer", expert: "Expert" };
 
 /** The verdict's symbol, the same shape as its marker on the plan. */
 export function VerdictIcon({ verdict }: { verdict: OverlayJump["verdict"] }) {
@@ -55,7 +58,7 @@ export function AnalysisPanel(p: Props) {
           >
             {p.classIds.map((c) => (
               <option key={c} value={c}>
-                {c}
+                {CAR_PRESETS[c]?.label ?? c}
               </option>
             ))}
           </select>
@@ -69,7 +72,7 @@ export function AnalysisPanel(p: Props) {
           >
             {SKILLS.map((s) => (
               <option key={s} value={s}>
-                {s}
+                {SKILL_LABELS[s]}
               </option>
             ))}
           </select>
@@ -97,7 +100,8 @@ export function AnalysisPanel(p: Props) {
       {o ? (
         <div className={p.stale ? "opacity-70" : ""}>
           <p className="tabular-nums">
-            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for {o.classId}
+            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for the{" "}
+            {CAR_PRESETS[o.classId]?.label ?? o.classId}
           </p>
           <h3 className="mt-2 font-semibold">Jumps ({o.jumps.length})</h3>
           {o.jumps.length ? (

@@ -1,6 +1,7 @@
 /**
  * The plan's DOM overlays (no konva): the scale bar, the speed legend and the zoom buttons.
  */
+import { CAR_PRESETS } from "~/analysis/cars";
 import type { AnalysisOverlay } from "~/lib/analysis-overlay";
 import { binStyle, legendTicks, SPEED_BINS } from "~/lib/editor/speed-scale";
 import { niceStep, type LengthUnit } from "~/lib/editor/units";
@@ -31,7 +32,9 @@ export function SpeedLegend({ overlay, stale }: { overlay: AnalysisOverlay; stal
     <figure
       className={`pointer-events-none absolute right-2 bottom-2 rounded bg-white/90 px-2 py-1.5 text-xs text-ink-700 shadow-sm ${stale ? "opacity-60" : ""}`}
     >
-      <figcaption className="font-semibold">Speed ({overlay.classId})</figcaption>
+      <figcaption className="font-semibold">
+        Speed ({CAR_PRESETS[overlay.classId]?.label ?? overlay.classId})
+      </figcaption>
       <svg width="150" height="14" aria-hidden="true" className="mt-1 block">
         {Array.from({ length: SPEED_BINS }, (_, b) => {
           const s = binStyle(b);
