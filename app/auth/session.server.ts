@@ -9,7 +9,9 @@ function sessionSecret(): string {
   if (config.isProduction && process.env.LOFTLINE_DEMO !== "1") {
     throw new Error("SESSION_SECRET must be set in production.");
   }
-  console.warn("[loftline] SESSION_SECRET is not set: using the development default. Never do this in production.");
+  console.warn(
+    "[loftline] SESSION_SECRET is not set: using the development default. Never do this in production.",
+  );
   return DEV_SECRET;
 }
 
@@ -39,7 +41,12 @@ export async function getSession(request: Request) {
 }
 
 /** Starts a session for the user and redirects, with an optional flash notice. */
-export async function createUserSession(request: Request, userId: string, redirectTo: string, notice?: string) {
+export async function createUserSession(
+  request: Request,
+  userId: string,
+  redirectTo: string,
+  notice?: string,
+) {
   const session = await getSession(request);
   session.set("userId", userId);
   if (notice) session.flash("notice", notice);

@@ -41,7 +41,10 @@ export function SiteHeader({ user, showDevTools }: Props) {
               <Link to="/sign-in" className="text-pine-700 hover:underline">
                 Sign in
               </Link>
-              <Link to="/sign-up" className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800">
+              <Link
+                to="/sign-up"
+                className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800"
+              >
                 Create an account
               </Link>
             </>

@@ -12,7 +12,9 @@ export class StaleVersionError extends Error {
     readonly expected: number,
     readonly current: number,
   ) {
-    super(`The layout was saved by someone else meanwhile (you started from version ${expected}, it is now at ${current}).`);
+    super(
+      `The layout was saved by someone else meanwhile (you started from version ${expected}, it is now at ${current}).`,
+    );
   }
 }
 
@@ -21,7 +23,9 @@ export class StaleVersionError extends Error {
  * changed from the metadata form), so they are laid over the stored document. A layout that has
  * never been drawn gets the starter loop.
  */
-export async function loadLayoutDocument(layout: LayoutRow): Promise<{ document: LayoutDocument; versionNumber: number | null }> {
+export async function loadLayoutDocument(
+  layout: LayoutRow,
+): Promise<{ document: LayoutDocument; versionNumber: number | null }> {
   const db = await getDb();
   const [latest] = await db
     .select({ document: layoutVersions.document, number: layoutVersions.number })
@@ -38,7 +42,12 @@ export async function loadLayoutDocument(layout: LayoutRow): Promise<{ document:
     document = starterDocument(layout.name, layout.trackWidth);
   }
   return {
-    document: { ...document, name: layout.name, surface: layout.surface as LayoutDocument["surface"], trackWidth: layout.trackWidth },
+    document: {
+      ...document,
+      name: layout.name,
+      surface: layout.surface as LayoutDocument["surface"],
+      trackWidth: layout.trackWidth,
+    },
     versionNumber: latest?.number ?? null,
   };
 }
@@ -82,7 +91,10 @@ export async function saveLayoutDocument(
       .where(and(eq(layouts.id, layoutId), eq(layouts.version, baseVersion)))
       .returning({ version: layouts.version });
     if (updated.length === 0) {
-      const [row] = await tx.select({ version: layouts.version }).from(layouts).where(eq(layouts.id, layoutId));
+      const [row] = await tx
+        .select({ version: layouts.version })
+        .from(layouts)
+        .where(eq(layouts.id, layoutId));
       throw new StaleVersionError(baseVersion, row?.version ?? -1);
     }
     await tx.insert(layoutVersions).values({

@@ -61,11 +61,9 @@ export type CarProfile = z.infer<typeof carProfileSchema>;
 
 /** A car given either as a preset id or as an attitude car object. */
 export const carRefSchema = z.union([
-  z
-    .string()
-    .refine((id) => carPreset(id) !== undefined, {
-      message: `unknown car preset (known: ${CAR_PRESET_IDS.join(", ")})`,
-    }),
+  z.string().refine((id) => carPreset(id) !== undefined, {
+    message: `unknown car preset (known: ${CAR_PRESET_IDS.join(", ")})`,
+  }),
   attitudeCarSchema,
 ]);
 

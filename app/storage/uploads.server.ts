@@ -12,7 +12,11 @@ import { fileStore } from "./storage.server";
 
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 
-export type UploadKind = { field: string; maxBytes: number; types: Record<string, { ext: string; magic?: number[] }> };
+export type UploadKind = {
+  field: string;
+  maxBytes: number;
+  types: Record<string, { ext: string; magic?: number[] }>;
+};
 
 /** Site photos: PNG or JPEG, checked by their first bytes as well as the declared type. */
 export const SITE_PHOTO: UploadKind = {
@@ -48,11 +52,15 @@ export async function receiveUpload(
   let upload: { bytes: Uint8Array; type: string; name: string } | undefined;
   let fields: FormData;
   try {
-    fields = await parseFormData(request, { maxFileSize: kind.maxBytes, maxFiles: 1 }, async (file: FileUpload) => {
-      if (file.fieldName !== kind.field) return null;
-      upload = { bytes: new Uint8Array(await file.arrayBuffer()), type: file.type, name: file.name };
-      return null;
-    });
+    fields = await parseFormData(
+      request,
+      { maxFileSize: kind.maxBytes, maxFiles: 1 },
+      async (file: FileUpload) => {
+        if (file.fieldName !== kind.field) return null;
+        upload = { bytes: new Uint8Array(await file.arrayBuffer()), type: file.type, name: file.name };
+        return null;
+      },
+    );
   } catch (err) {
     if (err instanceof MaxFileSizeExceededError || err instanceof MaxTotalSizeExceededError) {
       throw fail(413, kind.field, `The file is too large: at most ${kind.maxBytes / (1024 * 1024)} MB.`);
@@ -61,7 +69,9 @@ export async function receiveUpload(
     throw fail(400, kind.field, "The upload could not be read.");
   }
   if (!upload || upload.bytes.length === 0) throw fail(400, kind.field, "Choose a file to upload.");
-  const accepted = Object.keys(kind.types).map((t) => t.replace("image/", "").toUpperCase()).join(" or ");
+  const accepted = Object.keys(kind.types)
+    .map((t) => t.replace("image/", "").toUpperCase())
+    .join(" or ");
   const type = kind.types[upload.type];
   if (!type || (type.magic && !type.magic.every((b, i) => upload!.bytes[i] === b))) {
     throw fail(415, kind.field, `Only ${accepted} files are accepted.`);

@@ -15,9 +15,15 @@ describe("one local database file shared by concurrent requests", () => {
     const names = await Promise.all(
       Array.from({ length: 6 }, (_, i) =>
         db.transaction(async (tx) => {
-          const [club] = await tx.insert(clubs).values({ name: `Club ${i}` }).returning();
+          const [club] = await tx
+            .insert(clubs)
+            .values({ name: `Club ${i}` })
+            .returning();
           await pause(20); // another request's turn would come here
-          await tx.update(clubs).set({ name: `Club ${i} renamed` }).where(eq(clubs.id, club.id));
+          await tx
+            .update(clubs)
+            .set({ name: `Club ${i} renamed` })
+            .where(eq(clubs.id, club.id));
           return `Club ${i} renamed`;
         }),
       ),

@@ -48,7 +48,11 @@ describe("layout documents stored per version", () => {
 
   it("imports a document as a new draft layout with its first version", async () => {
     const { club, director } = await makeClubWithRoles();
-    const layout = await createLayoutFromDocument(club.id, starterDocument("Imported loop", 2.8), director.id);
+    const layout = await createLayoutFromDocument(
+      club.id,
+      starterDocument("Imported loop", 2.8),
+      director.id,
+    );
     expect(layout.status).toBe("draft");
     const loaded = await loadLayoutDocument(layout);
     expect(loaded.versionNumber).toBe(1);

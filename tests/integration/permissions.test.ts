@@ -9,7 +9,8 @@ useTestDatabase();
 describe("permission helpers against a real database", () => {
   it("lets a director manage, refuses marshals and drivers with 403, outsiders with 403", async () => {
     const { club, director, marshal, driver, outsider } = await makeClubWithRoles();
-    const asRole = (cookie: string) => run(() => requireClubRole(getRequest("/x", cookie), club.id, "director"));
+    const asRole = (cookie: string) =>
+      run(() => requireClubRole(getRequest("/x", cookie), club.id, "director"));
     expect((await asRole(director.cookie)).status).toBe(200);
     expect((await asRole(marshal.cookie)).status).toBe(403);
     expect((await asRole(driver.cookie)).status).toBe(403);
@@ -35,9 +36,15 @@ describe("permission helpers against a real database", () => {
     const { club, director, marshal, driver } = await makeClubWithRoles();
     const draft = await makeLayout(club.id, { status: "draft" });
     const published = await makeLayout(club.id, { status: "published" });
-    expect((await run(() => requireLayoutAccess(getRequest("/", director.cookie), draft.id))).status).toBe(200);
-    expect((await run(() => requireLayoutAccess(getRequest("/", marshal.cookie), draft.id))).status).toBe(404);
+    expect((await run(() => requireLayoutAccess(getRequest("/", director.cookie), draft.id))).status).toBe(
+      200,
+    );
+    expect((await run(() => requireLayoutAccess(getRequest("/", marshal.cookie), draft.id))).status).toBe(
+      404,
+    );
     expect((await run(() => requireLayoutAccess(getRequest("/", driver.cookie), draft.id))).status).toBe(404);
-    expect((await run(() => requireLayoutAccess(getRequest("/", driver.cookie), published.id))).status).toBe(200);
+    expect((await run(() => requireLayoutAccess(getRequest("/", driver.cookie), published.id))).status).toBe(
+      200,
+    );
   });
 });

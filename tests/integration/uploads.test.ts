@@ -20,7 +20,10 @@ describe("uploads to local disk", () => {
   it("stores a PNG under the data folder and reads it back", async () => {
     const { club, director } = await makeClubWithRoles();
     const bytes = new Uint8Array([...PNG_HEADER, 1, 2, 3, 4]);
-    const stored = await receiveUpload(uploadRequest(bytes, "image/png"), SITE_PHOTO, { clubId: club.id, userId: director.id });
+    const stored = await receiveUpload(uploadRequest(bytes, "image/png"), SITE_PHOTO, {
+      clubId: club.id,
+      userId: director.id,
+    });
     expect(stored.contentType).toBe("image/png");
     const back = await readStoredFile(stored.fileId);
     expect(Array.from(back!.bytes)).toEqual(Array.from(bytes));
@@ -31,7 +34,9 @@ describe("uploads to local disk", () => {
     const { club, director } = await makeClubWithRoles();
     const big = new Uint8Array(10 * 1024 * 1024 + 10);
     big.set(PNG_HEADER);
-    const r = await run(() => receiveUpload(uploadRequest(big, "image/png"), SITE_PHOTO, { clubId: club.id, userId: director.id }));
+    const r = await run(() =>
+      receiveUpload(uploadRequest(big, "image/png"), SITE_PHOTO, { clubId: club.id, userId: director.id }),
+    );
     expect(r.status).toBe(413);
     expect(r.data).toMatchObject({ field: "photo" });
   });
@@ -39,9 +44,17 @@ describe("uploads to local disk", () => {
   it("refuses a GIF, or a text file claiming to be a PNG, with 415", async () => {
     const { club, director } = await makeClubWithRoles();
     const owner = { clubId: club.id, userId: director.id };
-    const gif = await run(() => receiveUpload(uploadRequest(new Uint8Array([0x47, 0x49, 0x46, 0x38]), "image/gif", "a.gif"), SITE_PHOTO, owner));
+    const gif = await run(() =>
+      receiveUpload(
+        uploadRequest(new Uint8Array([0x47, 0x49, 0x46, 0x38]), "image/gif", "a.gif"),
+        SITE_PHOTO,
+        owner,
+      ),
+    );
     expect(gif.status).toBe(415);
-    const fake = await run(() => receiveUpload(uploadRequest(new TextEncoder().encode("hello"), "image/png"), SITE_PHOTO, owner));
+    const fake = await run(() =>
+      receiveUpload(uploadRequest(new TextEncoder().encode("hello"), "image/png"), SITE_PHOTO, owner),
+    );
     expect(fake.status).toBe(415);
     expect((fake.data as { error: string }).error).toMatch(/PNG or JPEG/);
   });
@@ -51,7 +64,10 @@ describe("uploads to local disk", () => {
     const body = new FormData();
     body.set("note", "no file");
     const r = await run(() =>
-      receiveUpload(new Request("http://localhost/upload", { method: "POST", body }), SITE_PHOTO, { clubId: club.id, userId: director.id }),
+      receiveUpload(new Request("http://localhost/upload", { method: "POST", body }), SITE_PHOTO, {
+        clubId: club.id,
+        userId: director.id,
+      }),
     );
     expect(r.status).toBe(400);
   });

@@ -12,7 +12,12 @@ export function Field({
   errors,
   hint,
   ...props
-}: { label: string; name: string; errors?: string[]; hint?: ReactNode } & InputHTMLAttributes<HTMLInputElement>) {
+}: {
+  label: string;
+  name: string;
+  errors?: string[];
+  hint?: ReactNode;
+} & InputHTMLAttributes<HTMLInputElement>) {
   const id = props.id ?? `field-${name}`;
   const errorId = `${id}-error`;
   return (
@@ -40,7 +45,12 @@ export function SelectField({
   errors,
   children,
   ...props
-}: { label: string; name: string; errors?: string[]; children: ReactNode } & SelectHTMLAttributes<HTMLSelectElement>) {
+}: {
+  label: string;
+  name: string;
+  errors?: string[];
+  children: ReactNode;
+} & SelectHTMLAttributes<HTMLSelectElement>) {
   const id = props.id ?? `field-${name}`;
   const errorId = `${id}-error`;
   return (

@@ -66,7 +66,12 @@ export async function run(fn: () => unknown): Promise<Outcome> {
   }
   if (isDataWithResponseInit(value)) {
     const headers = new Headers(value.init?.headers);
-    return { status: value.init?.status ?? 200, data: value.data, headers, location: headers.get("Location") };
+    return {
+      status: value.init?.status ?? 200,
+      data: value.data,
+      headers,
+      location: headers.get("Location"),
+    };
   }
   return { status: 200, data: value, headers: new Headers(), location: null };
 }
