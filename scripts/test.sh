@@ -39,9 +39,16 @@ stage() {
 }
 
 stage "chromium" ensure_chromium
-stage "unit and integration tests" ./node_modules/.bin/vitest run
+# Each runner's output is also kept, to add up its test counts for the closing line.
+runner_log=$(mktemp)
+trap 'rm -f "$runner_log"' EXIT
+counted() {
+  "$@" 2>&1 | tee -a "$runner_log"
+}
+
+stage "unit and integration tests" counted ./node_modules/.bin/vitest run
 if stage "build" ./node_modules/.bin/react-router build; then
-  stage "browser tests" ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
+  stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else
   names+=("browser tests")
   results+=("skipped")
@@ -59,4 +66,11 @@ for i in "${!names[@]}"; do
   esac
   printf '  %-28s %-28s %4ss\n' "${names[$i]}" "$status" "${seconds[$i]}"
 done
+# One plain line with every test counted: "Tests: N passed, N failed".
+sed -e 's/\x1b\[[0-9;]*m//g' "$runner_log" | awk '
+  /^ *Tests +[0-9]/ {
+    if (match($0, /[0-9]+ passed/)) passed += substr($0, RSTART, RLENGTH) + 0
+    if (match($0, /[0-9]+ failed/)) failedn += substr($0, RSTART, RLENGTH) + 0
+  }
+  END { printf "Tests: %d passed, %d failed\n", passed, failedn }'
 exit "$failed"
