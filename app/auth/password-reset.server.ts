@@ -98,7 +98,10 @@ export async function resetPassword(
         ),
       );
   const [, claimed] = await db.batch([
-    db.update(users).set({ passwordHash }).where(inArray(users.id, owner())),
+    db
+      .update(users)
+      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(inArray(users.id, owner())),
     db
       .update(passwordResets)
       .set({ usedAt: new Date(now) })

@@ -14,10 +14,13 @@ export async function getUser(request: Request): Promise<SessionUser | null> {
   if (!userId) return null;
   const db = await getDb();
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name })
+    .select({ id: users.id, email: users.email, name: users.name, sessionVersion: users.sessionVersion })
     .from(users)
     .where(eq(users.id, userId));
-  return user ?? null;
+  // A session from before the last password reset no longer counts (the reset signs out every
+  // other browser). Sessions without a version began before any reset.
+  if (!user || user.sessionVersion !== (session.get("sessionVersion") ?? 0)) return null;
+  return { id: user.id, email: user.email, name: user.name };
 }
 
 /**

@@ -1,4 +1,7 @@
 import { createCookieSessionStorage, redirect } from "react-router";
+import { eq } from "drizzle-orm";
+import { getDb } from "~/db/client.server";
+import { users } from "~/db/schema";
 import { config } from "~/lib/config.server";
 
 const DEV_SECRET = "loftline-development-secret-change-me";
@@ -15,7 +18,8 @@ function sessionSecret(): string {
   return DEV_SECRET;
 }
 
-type SessionData = { userId: string };
+/** `sessionVersion` is the user's value when the session began; a password reset raises it. */
+type SessionData = { userId: string; sessionVersion: number };
 type SessionFlash = { notice: string };
 
 let storage: ReturnType<typeof createCookieSessionStorage<SessionData, SessionFlash>> | undefined;
@@ -48,7 +52,13 @@ export async function createUserSession(
   notice?: string,
 ) {
   const session = await getSession(request);
+  const db = await getDb();
+  const [user] = await db
+    .select({ sessionVersion: users.sessionVersion })
+    .from(users)
+    .where(eq(users.id, userId));
   session.set("userId", userId);
+  session.set("sessionVersion", user?.sessionVersion ?? 0);
   if (notice) session.flash("notice", notice);
   throw redirect(safeRedirect(redirectTo), {
     headers: { "Set-Cookie": await sessionStorage().commitSession(session) },

@@ -26,6 +26,8 @@ export const users = sqliteTable("users", {
   email: text("email").notNull().unique(),
   name: text("name").notNull(),
   passwordHash: text("password_hash").notNull(),
+  /** Raised when the password is reset: sessions signed with an older value are signed out. */
+  sessionVersion: integer("session_version").notNull().default(0),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });

@@ -24,6 +24,7 @@ function buildAccessQuery(db: Database) {
   return db
     .select({
       userId: users.id,
+      sessionVersion: users.sessionVersion,
       layout: {
         id: layouts.id,
         clubId: layouts.clubId,
@@ -60,7 +61,8 @@ export async function apiLayoutAccess(
   const userId = session.get("userId");
   if (!userId) throw deny(401, "Sign in first.");
   const [row] = await (await accessQuery()).execute({ userId, layoutId: layoutId ?? "" });
-  if (!row) throw deny(401, "Sign in first.");
+  // As in getUser: a session from before the last password reset no longer counts.
+  if (!row || row.sessionVersion !== (session.get("sessionVersion") ?? 0)) throw deny(401, "Sign in first.");
   if (
     !row.layout?.id ||
     row.layout.status === null ||

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { useTestDatabase } from "./helpers/db";
-import { makeUser } from "./helpers/factories";
+import { makeClub, makeLayout, makeUser } from "./helpers/factories";
 import { extractLink, extractPath, mailsTo, useFakeSmtp, waitForMail } from "./helpers/mail";
 import { args, formRequest, getRequest, run } from "./helpers/requests";
 import { getUser } from "~/auth/permissions.server";
@@ -12,6 +12,7 @@ import {
   RESET_TOKEN_LIFETIME_MS,
 } from "~/auth/password-reset.server";
 import { passwordResets } from "~/db/schema";
+import { apiLayoutAccess } from "~/layouts/api-access.server";
 import * as forgot from "~/routes/forgot-password";
 import * as reset from "~/routes/reset-password";
 import * as signIn from "~/routes/sign-in";
@@ -69,6 +70,31 @@ describe("password reset by e-mail", () => {
 
     expect(await signInStatus(u.email, "brand new password")).toBe(302);
     expect(await signInStatus(u.email, u.password)).toBe(401);
+  });
+
+  it("signs out every other browser: a session from before the reset no longer counts", async () => {
+    const u = await makeUser({ email: uniqueEmail("elsewhere") });
+    // u.cookie stands for a browser signed in before the reset (say, a lost phone).
+    expect((await getUser(getRequest("/", u.cookie)))?.id).toBe(u.id);
+    await askForReset(u.email);
+    const path = extractPath((await waitForMail(u.email, SUBJECT)).text);
+    const done = await submitNew(path, "another new password");
+    expect(done.status).toBe(302);
+    const fresh = done.headers.get("Set-Cookie")!.split(";")[0];
+
+    expect(await getUser(getRequest("/", u.cookie))).toBeNull();
+    expect((await getUser(getRequest("/", fresh)))?.id).toBe(u.id);
+    const club = await makeClub(u.id);
+    const layout = await makeLayout(club.id);
+    const api = (cookie: string) =>
+      run(() => apiLayoutAccess(getRequest(`/api/layouts/${layout.id}/analysis`, cookie), layout.id));
+    expect((await api(u.cookie)).status).toBe(401);
+    expect((await api(fresh)).status).toBe(200);
+    // Signing in again with the new password gives a session that counts.
+    const again = await run(() =>
+      signIn.action(args(formRequest("/sign-in", { email: u.email, password: "another new password" }))),
+    );
+    expect((await getUser(getRequest("/", again.headers.get("Set-Cookie")!.split(";")[0])))?.id).toBe(u.id);
   });
 
   it("refuses a used link with 410 and changes nothing", async () => {
