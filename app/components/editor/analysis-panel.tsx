@@ -106,8 +106,9 @@ export function AnalysisPanel(p: Props) {
           <h3 className="mt-2 font-semibold">Jumps ({o.jumps.length})</h3>
           {o.jumps.length ? (
             <ul className="mt-1 space-y-1" aria-label="Jumps and their verdicts">
-              {o.jumps.map((j) => {
+              {o.jumps.map((j, k) => {
                 const i = index.get(j.sectionId);
+                const name = i !== undefined ? p.sections[i].name : undefined;
                 return (
                   <li key={j.sectionId}>
                     <button
@@ -120,8 +121,11 @@ export function AnalysisPanel(p: Props) {
                       <VerdictIcon verdict={j.verdict} />
                       <span>
                         <span className="font-medium">
-                          {i !== undefined ? `${i + 1}. ` : ""}
-                          {VERDICT_TEXT[j.verdict]}
+                          J{k + 1} {VERDICT_TEXT[j.verdict]}
+                        </span>
+                        <span className="block text-xs text-ink-700">
+                          {name ?? "Jump"}
+                          {i !== undefined ? ` · section ${i + 1}` : ""}
                         </span>
                         <span className="block text-xs text-ink-700">{j.label}</span>
                         <span className="block text-xs tabular-nums text-ink-500">
