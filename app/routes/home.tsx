@@ -15,7 +15,7 @@ export const meta: Route.MetaFunction = () => [
   {
     name: "description",
     content:
-      "For off-road RC racing clubs: draw the layout to scale, fly every jump for each class of car, and give marshals a corner-risk sheet.",
+      "For off-road RC racing clubs: draw the layout to scale, fly every jump for each class of car, and see which landings lead into turns.",
   },
 ];
 
@@ -32,16 +32,16 @@ const ROLES = [
     title: "For the drivers",
     points: [
       "Read the published layout before practice and know which jumps lead into turns.",
-      "For each jump and your own car: takeoff speed, time in the air and where you land.",
+      "For each jump and each class of car: takeoff speed, time in the air and where you land.",
       "Whether to take it straight, or how to set the car up in the air for the turn, and how much timing slack you have.",
     ],
   },
   {
     title: "For the marshals",
     points: [
-      "A corner-risk sheet: where cars are likely to crash, and why, in plain words.",
-      "Numbered marshal points spread around the lap and kept out of overshoot zones, with what to watch at each.",
-      "Print it for the track side or keep it as a PDF.",
+      "The plan with every jump's landing, the overshoot zone beyond it and the numbered marshal points.",
+      "Which stretches the driver stand cannot see, and where lanes pass close together.",
+      "Coming next: a printable corner-risk sheet that says where cars crash and where to stand.",
     ],
   },
 ] as const;
