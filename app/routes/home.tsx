@@ -39,7 +39,7 @@ const ROLES = [
   {
     title: "For the marshals",
     points: [
-      "The plan with every jump's landing, the overshoot zone beyond it and the numbered marshal points.",
+      "The plan with every jump, the driver stand and the numbered marshal points; each jump's side view shows the overshoot zone.",
       "Which stretches the driver stand cannot see, and where lanes pass close together.",
       "Coming next: a printable corner-risk sheet that says where cars crash and where to stand.",
     ],
