@@ -4,7 +4,6 @@
  * and the panels only dispatch changes.
  */
 import { lazy, Suspense, useCallback, useMemo, useReducer, useState } from "react";
-import { Link } from "react-router";
 import { closureError, resolveSections, sampleCentreLine, startPose } from "~/analysis/geometry";
 import { closeLoop } from "~/analysis/close-loop";
 import { Button } from "~/components/ui/button";
@@ -28,6 +27,7 @@ import { AnalysisPanel } from "./analysis-panel";
 import type { CanvasMode } from "./canvas-types";
 import { CanvasPlaceholder, ClientOnly } from "./client-only";
 import { ClosureBar } from "./closure-bar";
+import { PlanTitle, photoUrl } from "./plan-title";
 import { ConflictDialog, RestoreBanner } from "./editor-dialogs";
 import { EditorToolbar } from "./editor-toolbar";
 import { HelpPanel } from "./help-panel";
@@ -172,22 +172,12 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   return (
     <div className="space-y-3">
       <header className="flex flex-wrap items-center gap-x-4 gap-y-2">
-        <div className="min-w-0">
-          <p className="text-xs text-ink-500">
-            <Link to={`/clubs/${club.id}`} className="underline">
-              {club.name}
-            </Link>{" "}
-            ·{" "}
-            <Link to={`/layouts/${layout.id}`} className="underline">
-              Layout page
-            </Link>{" "}
-            ·{" "}
-            <Link to={`/layouts/${layout.id}/plan`} className="underline">
-              Read-only plan
-            </Link>
-          </p>
-          <h1 className="truncate text-xl font-semibold">Editing {doc.name}</h1>
-        </div>
+        <PlanTitle
+          club={club}
+          layoutId={layout.id}
+          heading={`Editing ${doc.name}`}
+          links={[{ to: `/layouts/${layout.id}/plan`, label: "Read-only plan" }]}
+        />
         <div className="ml-auto flex flex-wrap items-center gap-2">
           <span
             className={`text-sm ${saver.outcome.kind === "refused" ? "text-danger-700" : "text-ink-500"}`}
@@ -256,7 +246,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
                   units={units}
                   overlay={analysis.overlay}
                   overlayStale={analysis.overlayDoc !== doc}
-                  photoUrl={doc.background ? `/files/${doc.background.fileId}` : null}
+                  photoUrl={photoUrl(doc.background)}
                   fitRequest={fitRequest}
                   calibrationPoints={calibrationPoints}
                   onSelect={select}

@@ -12,6 +12,7 @@ import type { LayoutDocument } from "~/lib/layout-document";
 import { AnalysisPanel } from "./analysis-panel";
 import { CanvasPlaceholder, ClientOnly } from "./client-only";
 import { ClosureBar } from "./closure-bar";
+import { PlanTitle, photoUrl } from "./plan-title";
 import { Panel } from "./panel";
 import { describeSection } from "./sections-list";
 import { useAnalysis, type Skill } from "./use-analysis";
@@ -39,18 +40,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
   return (
     <div className="space-y-3">
       <header className="flex flex-wrap items-end gap-x-4 gap-y-2">
-        <div className="min-w-0">
-          <p className="text-xs text-ink-500">
-            <Link to={`/clubs/${club.id}`} className="underline">
-              {club.name}
-            </Link>{" "}
-            ·{" "}
-            <Link to={`/layouts/${layout.id}`} className="underline">
-              Layout page
-            </Link>
-          </p>
-          <h1 className="truncate text-xl font-semibold">Plan of {doc.name}</h1>
-        </div>
+        <PlanTitle club={club} layoutId={layout.id} heading={`Plan of ${doc.name}`} />
         <div className="ml-auto flex items-center gap-3 text-sm">
           <label className="inline-flex items-center gap-1.5">
             Plan in
@@ -100,7 +90,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
                   units={units}
                   overlay={analysis.overlay}
                   overlayStale={false}
-                  photoUrl={doc.background ? `/files/${doc.background.fileId}` : null}
+                  photoUrl={photoUrl(doc.background)}
                   fitRequest={fitRequest}
                   calibrationPoints={[]}
                   onSelect={setSelection}
