@@ -27,4 +27,28 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // The engine's front door: outside app/analysis, code imports the engine only through `~/analysis`.
+    // The engine's own unit tests (tests/unit/analysis) may reach its parts.
+    files: ["**/*.{ts,tsx,js,mjs}"],
+    ignores: ["app/analysis/**", "tests/unit/analysis/**"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          patterns: [
+            {
+              group: ["~/analysis/*", "**/app/analysis/*"],
+              message: "Import the engine through its front door: `~/analysis`.",
+            },
+            {
+              group: ["~/db/schema", "**/db/schema"],
+              importNames: ["ROLES", "Role", "LAYOUT_STATUSES", "LayoutStatus"],
+              message: "Shared constants live in `~/lib/` so the table definitions stay out of the browser.",
+            },
+          ],
+        },
+      ],
+    },
+  },
 );

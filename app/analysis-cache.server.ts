@@ -9,9 +9,9 @@
  */
 import { createHash } from "node:crypto";
 import { gzipSync } from "node:zlib";
-import type { GuidanceOverrides, GuidanceSetId } from "~/analysis/rules";
-import type { SkillLevel } from "~/analysis/layout-analysis-types";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { GuidanceOverrides, GuidanceSetId } from "~/analysis";
+import type { SkillLevel } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 
 /** Everything an analysis depends on. */
 export interface AnalysisInputs {

@@ -8,11 +8,11 @@
  */
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import { planAirSetup } from "~/analysis/air-plan";
-import { simulateAttitude, type AttitudeInput } from "~/analysis/attitude";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/cars";
-import { flyJump } from "~/analysis/flight";
-import { speedWindow } from "~/analysis/flight-window";
+import { planAirSetup } from "~/analysis";
+import { simulateAttitude, type AttitudeInput } from "~/analysis";
+import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis";
+import { flyJump } from "~/analysis";
+import { speedWindow } from "~/analysis";
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);

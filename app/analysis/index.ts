@@ -1,5 +1,6 @@
 /**
- * The analysis engine's public face. Pure TypeScript: no React, database or Node imports; SI
+ * The analysis engine's front door: everything outside app/analysis imports from here only
+ * (an ESLint rule enforces it). Pure TypeScript: no React, database or Node imports; SI
  * units and radians everywhere (degrees only at the edges: JSON files, forms, screens).
  *
  * Flight of a jump (flight.ts, flight-window.ts)
@@ -38,39 +39,12 @@
  * - `CAR_PRESETS` by id ("buggy-2wd-10", "buggy-4wd-10", "sct-10", "buggy-8"), `CAR_PRESET_IDS`,
  *   `carPreset(id)`, `CarParams` (every value an estimate, with notes on the inertias).
  */
+export * from "./format";
 export * from "./flight";
-export * from "./flight-window";
-export * from "./attitude";
-export {
-  compileServo,
-  compileWheel,
-  evaluate,
-  type PiecewiseLinear,
-  type TimedValue,
-} from "./attitude-inputs";
-export * from "./air-plan";
-export { nutationPeriod } from "./air-plan-linear";
-export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
-export {
-  pitchPulse,
-  drivenSpinInertia,
-  type PitchPulse,
-  type PulseKind,
-  type PulseLimits,
-} from "./air-plan-pulse";
+export * from "./air";
 export * from "./verdict";
-export * from "./cars";
-export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./vec";
-export * from "./jump-profile";
-export * from "./geometry";
-export * from "./close-loop";
-export * from "./geometry-checks";
-export * from "./sight";
-export * from "./lap-jumps";
-export * from "./speed";
-export * from "./rules";
-export * from "./layout-measure";
-export * from "./demo-layouts";
+export * from "./track";
+export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
 
 /*
  * Layout analysis (layout-analysis.ts, jump-analysis.ts, overlay.ts, analysis-cache.ts)
@@ -83,8 +57,4 @@ export * from "./demo-layouts";
  * - `createAnalysisCache(maxEntries?)` -> an LRU memo (`memo`, `stats`, `clear`); `cacheKey`,
  *   `canonicalJson`, `fnv1a64`.
  */
-export * from "./layout-analysis-types";
-export * from "./analysis-cache";
-export { analyseJump, TAKEOFF_SPEED_STEP, type JumpContext, type JumpAnalysisOptions } from "./jump-analysis";
-export * from "./layout-analysis";
-export { buildOverlay, jumpLabel, linePolyline } from "./overlay";
+export * from "./layout";

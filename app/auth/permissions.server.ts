@@ -1,7 +1,8 @@
 import { and, eq } from "drizzle-orm";
 import { redirect } from "react-router";
 import { getDb } from "~/db/client.server";
-import { clubs, layouts, memberships, users, type Role } from "~/db/schema";
+import { type Role } from "~/lib/roles";
+import { clubs, layouts, memberships, users } from "~/db/schema";
 import { canSeeLayout, roleAllows } from "~/lib/roles";
 import { getSession } from "./session.server";
 

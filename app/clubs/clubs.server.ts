@@ -1,6 +1,7 @@
 import { count, eq, inArray } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
-import { clubs, memberships, type Role } from "~/db/schema";
+import { type Role } from "~/lib/roles";
+import { clubs, memberships } from "~/db/schema";
 
 export type MyClub = { id: string; name: string; role: Role; memberCount: number };
 

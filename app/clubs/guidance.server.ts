@@ -3,7 +3,7 @@
  * club's own values for some rules, stored in clubs.guidance_set and clubs.guidance_overrides.
  */
 import { eq } from "drizzle-orm";
-import type { GuidanceOverrides, GuidanceSetId } from "~/analysis/rules";
+import type { GuidanceOverrides, GuidanceSetId } from "~/analysis";
 import { getDb } from "~/db/client.server";
 import { clubs } from "~/db/schema";
 import { GUIDANCE_SET_IDS, storedOverridesSchema } from "~/lib/schemas/club-settings";

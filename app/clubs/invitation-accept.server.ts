@@ -5,7 +5,8 @@
  */
 import { and, eq, isNull } from "drizzle-orm";
 import { getDb, type Database } from "~/db/client.server";
-import { clubs, invitations, memberships, users, type Role } from "~/db/schema";
+import { type Role } from "~/lib/roles";
+import { clubs, invitations, memberships, users } from "~/db/schema";
 import { hashPassword } from "~/auth/users.server";
 import { RuleError } from "./rule-error.server";
 import { hashLinkToken, looksLikeLinkToken } from "./tokens.server";

@@ -5,7 +5,8 @@
  */
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
-import { invitations, memberships, users, type Role } from "~/db/schema";
+import { type Role } from "~/lib/roles";
+import { invitations, memberships, users } from "~/db/schema";
 import { config } from "~/lib/config.server";
 import { sendMail } from "~/mail/mail.server";
 import { invitationMail } from "~/mail/templates.server";

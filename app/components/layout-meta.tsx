@@ -1,5 +1,5 @@
 import { Field, SelectField, type FieldErrors } from "~/components/ui/form";
-import type { LayoutStatus } from "~/db/schema";
+import type { LayoutStatus } from "~/lib/roles";
 import {
   SURFACES,
   SURFACE_LABELS,

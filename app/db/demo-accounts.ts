@@ -3,7 +3,7 @@
  * sign-in page lists them in development and in the demo (never in production), and the demo
  * data and browser tests sign in with them.
  */
-import type { Role } from "./schema";
+import type { Role } from "~/lib/roles";
 
 export type DemoAccount = { role: Role; name: string; email: string; password: string };
 

@@ -5,12 +5,13 @@
  */
 import bcrypt from "bcryptjs";
 import { and, eq } from "drizzle-orm";
-import { DEMO_LAYOUTS as DEMO_LAYOUT_DOCUMENTS } from "~/analysis/demo-layouts";
+import { DEMO_LAYOUTS as DEMO_LAYOUT_DOCUMENTS } from "~/db/demo-layouts";
 import { hashPassword, normaliseEmail } from "~/auth/users.server";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import type { Database } from "./client.server";
 import { DEMO_ACCOUNTS, DEMO_CLUB_NAME } from "./demo-accounts";
-import { clubs, layouts, layoutVersions, memberships, users, type LayoutStatus, type Role } from "./schema";
+import type { LayoutStatus, Role } from "~/lib/roles";
+import { clubs, layouts, layoutVersions, memberships, users } from "./schema";
 
 export { DEMO_CLUB_NAME };
 

@@ -1,5 +1,6 @@
 import { sql } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { LAYOUT_STATUSES, ROLES } from "~/lib/roles";
 
 /** Shared column helpers: a text UUID primary key and millisecond timestamps. */
 const id = () =>
@@ -15,11 +16,6 @@ const updatedAt = () =>
     .notNull()
     .default(sql`(unixepoch() * 1000)`)
     .$onUpdateFn(() => new Date());
-
-export const ROLES = ["director", "marshal", "driver"] as const;
-export type Role = (typeof ROLES)[number];
-export const LAYOUT_STATUSES = ["draft", "published", "archived"] as const;
-export type LayoutStatus = (typeof LAYOUT_STATUSES)[number];
 
 export const users = sqliteTable("users", {
   id: id(),

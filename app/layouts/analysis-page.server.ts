@@ -4,12 +4,12 @@
  * and the parts of the result the page draws, trimmed so the page does not carry every class's
  * speed samples.
  */
-import type { ClassAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
+import type { ClassAnalysis, SkillLevel } from "~/analysis";
 import type { SummaryData } from "~/components/analysis/summary-data";
-import { carPreset } from "~/analysis/cars";
+import { carPreset } from "~/analysis";
 import type { layouts } from "~/db/schema";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { AnalysisOverlay } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 import { AnalysisInputError, analyseStoredLayout, overlayFor, parseSkill } from "./analysis.server";
 import { loadLayoutDocument } from "./documents.server";
 

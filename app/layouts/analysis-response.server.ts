@@ -3,7 +3,7 @@
  * and 400 answers that name the field.
  */
 import type { CachedBody } from "~/analysis-cache.server";
-import type { LayoutIssue } from "~/lib/layout-document";
+import type { LayoutIssue } from "~/analysis";
 import { AnalysisInputError } from "./analysis.server";
 
 /** A 400 answer listing every issue, each naming its field. */

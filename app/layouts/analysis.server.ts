@@ -4,11 +4,11 @@
  * (app/analysis-cache.server.ts) so a repeat costs nothing. The engine's own cache underneath
  * keeps each jump's costly parts, so an edited draft recomputes only what changed.
  */
-import { createAnalysisCache } from "~/analysis/analysis-cache";
-import { CAR_PRESET_IDS, carPreset } from "~/analysis/cars";
-import { analyseLayout } from "~/analysis/layout-analysis";
-import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis/layout-analysis-types";
-import { buildOverlay } from "~/analysis/overlay";
+import { createAnalysisCache } from "~/analysis";
+import { CAR_PRESET_IDS, carPreset } from "~/analysis";
+import { analyseLayout } from "~/analysis";
+import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis";
+import { buildOverlay } from "~/analysis";
 import {
   canonicalJson,
   entryByAlias,
@@ -21,8 +21,8 @@ import { loadClubGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
-import type { LayoutDocument, LayoutIssue } from "~/lib/layout-document";
+import type { AnalysisOverlay } from "~/analysis";
+import type { LayoutDocument, LayoutIssue } from "~/analysis";
 import { loadLayoutDocument } from "./documents.server";
 
 type LayoutRow = typeof layouts.$inferSelect;

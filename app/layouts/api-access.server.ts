@@ -11,7 +11,8 @@ import { and, eq, sql } from "drizzle-orm";
 import { getSession } from "~/auth/session.server";
 import { readGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { getDb, type Database } from "~/db/client.server";
-import { clubs, layouts, memberships, users, type Role } from "~/db/schema";
+import { type Role } from "~/lib/roles";
+import { clubs, layouts, memberships, users } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 
 /** The layout's fields the API needs (the analysis reads the rest only when its memo misses). */

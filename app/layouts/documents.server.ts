@@ -1,8 +1,8 @@
 import { and, desc, eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
-import { type LayoutDocument, parseLayoutDocument } from "~/lib/layout-document";
-import { starterDocument } from "~/lib/starter-layout";
+import { type LayoutDocument, parseLayoutDocument } from "~/analysis";
+import { starterDocument } from "~/analysis";
 
 type LayoutRow = typeof layouts.$inferSelect;
 

@@ -14,7 +14,7 @@ import { and, eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { files } from "~/db/schema";
 import { ONE_MEGABYTE, readLimitedText } from "~/lib/json-body.server";
-import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/lib/layout-document";
+import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/analysis";
 
 /** Largest layout file accepted, bytes. */
 export const MAX_LAYOUT_FILE_BYTES = ONE_MEGABYTE;

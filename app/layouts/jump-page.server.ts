@@ -2,13 +2,13 @@
  * The jump page's data: the analysed jump for the chosen class and skill, its ground profile for
  * the side elevation, and the servo-followed steering of its set-up plan for the chart.
  */
-import { compileServo, evaluate } from "~/analysis/attitude-inputs";
-import { carPreset } from "~/analysis/cars";
-import { jumpProfile } from "~/analysis/jump-profile";
-import type { JumpAnalysis, JumpPlan } from "~/analysis/layout-analysis-types";
+import { compileServo, evaluate } from "~/analysis";
+import { carPreset } from "~/analysis";
+import { jumpProfile } from "~/analysis";
+import type { JumpAnalysis, JumpPlan } from "~/analysis";
 import type { ElevationData } from "~/components/analysis/jump-elevation";
 import type { SteeringSeries } from "~/components/analysis/steering-chart";
-import type { JumpSection } from "~/lib/layout-document";
+import type { JumpSection } from "~/analysis";
 
 const RAD = Math.PI / 180;
 

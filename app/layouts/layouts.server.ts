@@ -5,7 +5,8 @@
  */
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
-import { layouts, users, type LayoutStatus, type Role } from "~/db/schema";
+import { type LayoutStatus, type Role } from "~/lib/roles";
+import { layouts, users } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";

@@ -1,4 +1,8 @@
-import type { LayoutStatus, Role } from "~/db/schema";
+/** Club roles and layout statuses: shared by the database schema, the server and the browser. */
+export const ROLES = ["director", "marshal", "driver"] as const;
+export type Role = (typeof ROLES)[number];
+export const LAYOUT_STATUSES = ["draft", "published", "archived"] as const;
+export type LayoutStatus = (typeof LAYOUT_STATUSES)[number];
 
 export const ROLE_LABELS: Record<Role, string> = {
   director: "Race director",

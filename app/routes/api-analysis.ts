@@ -6,7 +6,7 @@ import { loadClubGuidance } from "~/clubs/guidance.server";
 import { analyseDocument, overlayFor, parseClassId, parseSkill } from "~/layouts/analysis.server";
 import { analysisRefusal, badRequest, jsonText } from "~/layouts/analysis-response.server";
 import { ONE_MEGABYTE, readJsonBody } from "~/lib/json-body.server";
-import { parseLayoutDocument } from "~/lib/layout-document";
+import { parseLayoutDocument } from "~/analysis";
 
 /** Only POST has a meaning here. */
 export function loader(_: Route.LoaderArgs) {

@@ -6,7 +6,7 @@ import {
   RULES_NOTE,
   type GuidanceOverrides,
   type GuidanceSetId,
-} from "~/analysis/rules";
+} from "~/analysis";
 import { requireClubRole } from "~/auth/permissions.server";
 import { redirectWithNotice } from "~/auth/session.server";
 import { formValues } from "~/clubs/form-values.server";

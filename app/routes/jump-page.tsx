@@ -17,7 +17,7 @@ import { VerdictIcon } from "~/components/analysis/verdict-mark";
 import { Cautions } from "~/components/cautions";
 import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { elevationData, steeringSeries } from "~/layouts/jump-page.server";
-import type { JumpSection } from "~/lib/layout-document";
+import type { JumpSection } from "~/analysis";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Layout"} · Loftline` },

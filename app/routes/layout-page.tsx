@@ -8,7 +8,7 @@ import { LayoutAnalysisSection } from "~/components/analysis/layout-analysis-sec
 import { LayoutMeta, LayoutMetaFields, StatusBadge } from "~/components/layout-meta";
 import { Button } from "~/components/ui/button";
 import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form";
-import type { LayoutStatus } from "~/db/schema";
+import type { LayoutStatus } from "~/lib/roles";
 import { pageAnalysis } from "~/layouts/analysis-page.server";
 import {
   changeLayoutStatus,

@@ -8,8 +8,8 @@
  * successRate per skill level, and the details behind them.
  */
 import { z } from "zod";
-import { planAirSetup } from "~/analysis/air-plan";
-import { carRefSchema, resolveCar } from "~/lib/car-schema";
+import { planAirSetup } from "~/analysis";
+import { carRefSchema, resolveCar } from "~/analysis";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });

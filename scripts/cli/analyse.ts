@@ -7,15 +7,10 @@
  * layout's own classes); `--skill` picks the level of each jump's `verdict` (default club; every
  * level is in `verdicts`). Bad input names the field on stderr, exit code 2, nothing on stdout.
  */
-import { analyseLayout } from "~/analysis/layout-analysis";
-import {
-  SKILL_LEVELS,
-  type JumpAnalysis,
-  type LayoutAnalysis,
-  type SkillLevel,
-} from "~/analysis/layout-analysis-types";
-import { CAR_PRESET_IDS, carPreset } from "~/analysis/cars";
-import { parseLayoutDocument } from "~/lib/layout-document";
+import { analyseLayout } from "~/analysis";
+import { SKILL_LEVELS, type JumpAnalysis, type LayoutAnalysis, type SkillLevel } from "~/analysis";
+import { CAR_PRESET_IDS, carPreset } from "~/analysis";
+import { parseLayoutDocument } from "~/analysis";
 import { InputError, type CliCommand } from "./io";
 
 export interface AnalyseArgs {

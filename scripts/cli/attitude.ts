@@ -6,8 +6,8 @@
  * Output: { yawDeg, pitchDeg, rollDeg, angularMomentumDrift }.
  */
 import { z } from "zod";
-import { simulateAttitude } from "~/analysis/attitude";
-import { carRefSchema, resolveCar } from "~/lib/car-schema";
+import { simulateAttitude } from "~/analysis";
+import { carRefSchema, resolveCar } from "~/analysis";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });

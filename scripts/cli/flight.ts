@@ -5,7 +5,7 @@
  * surfaceSlopeDeg, normalSpeed, equivalentFallHeight } }.
  */
 import { z } from "zod";
-import { flyJump } from "~/analysis/flight";
+import { flyJump } from "~/analysis";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });

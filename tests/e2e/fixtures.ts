@@ -8,7 +8,7 @@ import { createClient, type InValue } from "@libsql/client";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, afterEach, beforeAll, expect, inject } from "vitest";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
-import type { Role } from "~/db/schema";
+import type { Role } from "~/lib/roles";
 
 export const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 const CHROMIUM_ARGS = [

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import type { Role } from "~/db/schema";
+import type { Role } from "~/lib/roles";
 import {
   DEMO_CLUB,
   demoAccount,

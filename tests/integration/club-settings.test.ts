@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { WET_WEATHER_LAYOUT } from "~/analysis/demo-layouts";
+import { WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
 import { loadClubGuidance } from "~/clubs/guidance.server";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";

@@ -1,7 +1,7 @@
 import { desc, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { layouts, layoutVersions, memberships } from "~/db/schema";
-import { starterDocument } from "~/lib/starter-layout";
+import { starterDocument } from "~/analysis";
 import { action as editorAction, loader as editorLoader } from "~/routes/layout-editor";
 import { loader as viewLoader } from "~/routes/layout-view";
 import { action as photoAction } from "~/routes/layout-photo";

@@ -8,7 +8,7 @@ import {
   loadLayoutDocument,
   saveLayoutDocument,
 } from "~/layouts/documents.server";
-import { starterDocument } from "~/lib/starter-layout";
+import { starterDocument } from "~/analysis";
 import { useTestDatabase } from "./helpers/db";
 import { makeClubWithRoles, makeLayout } from "./helpers/factories";
 

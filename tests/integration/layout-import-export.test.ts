@@ -1,10 +1,10 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
 import { createLayoutFromDocument, loadLayoutDocument } from "~/layouts/documents.server";
-import { parseLayoutDocument } from "~/lib/layout-document";
+import { parseLayoutDocument } from "~/analysis";
 import { action as importAction } from "~/routes/layout-import";
 import { loader as exportLoader } from "~/routes/layout-export";
 import { useTestDatabase } from "./helpers/db";

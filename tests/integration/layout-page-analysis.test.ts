@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { createLayoutFromDocument } from "~/layouts/documents.server";
 import { createLayout } from "~/layouts/layouts.server";
 import { loader as jumpLoader } from "~/routes/jump-page";

@@ -1,5 +1,5 @@
 import { Form } from "react-router";
-import { SKILL_LEVELS, type SkillLevel } from "~/analysis/layout-analysis-types";
+import { SKILL_LEVELS, type SkillLevel } from "~/analysis";
 import { SKILL_LABELS } from "./format";
 
 /**

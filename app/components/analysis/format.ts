@@ -2,8 +2,8 @@
  * Number and word formats of the analysis pages: SI units with a km/h reading for speeds, and the
  * trade's words for jump kinds and verdicts. Pure; used on both sides.
  */
-import type { JumpAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
-import type { JumpPreset } from "~/lib/layout-document";
+import type { JumpAnalysis, SkillLevel } from "~/analysis";
+import type { JumpPreset } from "~/analysis";
 
 export const SKILL_LABELS: Record<SkillLevel, string> = {
   novice: "Novice",

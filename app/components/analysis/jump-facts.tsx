@@ -1,4 +1,4 @@
-import type { JumpAnalysis } from "~/analysis/layout-analysis-types";
+import type { JumpAnalysis } from "~/analysis";
 import { degrees, metres, seconds, speed } from "./format";
 
 const LANDED: Record<string, string> = {

@@ -1,4 +1,4 @@
-import type { JumpAnalysis } from "~/analysis/layout-analysis-types";
+import type { JumpAnalysis } from "~/analysis";
 import { pitchAdvice } from "./pitch-advice";
 import { SteeringChart, type SteeringSeries } from "./steering-chart";
 

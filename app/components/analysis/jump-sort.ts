@@ -2,7 +2,7 @@
  * Sorting the jumps table by GET parameters (`sort`, `dir`), so it works without JavaScript.
  * Pure: the loader and the tests use it.
  */
-import type { JumpAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
+import type { JumpAnalysis, SkillLevel } from "~/analysis";
 import { jumpName, verdictKind } from "./format";
 
 export const JUMP_SORT_KEYS = [

@@ -1,4 +1,4 @@
-import { SKILL_LEVELS, type JumpAnalysis } from "~/analysis/layout-analysis-types";
+import { SKILL_LEVELS, type JumpAnalysis } from "~/analysis";
 import { metres, percent, SKILL_LABELS, signedSeconds, VERDICT_WORDS, verdictKind } from "./format";
 import { VerdictIcon } from "./verdict-mark";
 

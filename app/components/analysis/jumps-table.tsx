@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import type { JumpAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
+import type { JumpAnalysis, SkillLevel } from "~/analysis";
 import {
   jumpName,
   metres,

@@ -1,8 +1,8 @@
 import { Link } from "react-router";
-import type { ClassAnalysis, SkillLevel } from "~/analysis/layout-analysis-types";
+import type { ClassAnalysis, SkillLevel } from "~/analysis";
 import { Cautions } from "~/components/cautions";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { AnalysisOverlay } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 import { AnalysisPickers } from "./analysis-pickers";
 import { AnalysisSummary } from "./analysis-summary";
 import { jumpName, skillPhrase } from "./format";

@@ -1,4 +1,4 @@
-import type { JumpPlan } from "~/analysis/layout-analysis-types";
+import type { JumpPlan } from "~/analysis";
 
 /**
  * The brake or throttle pulse in plain words: the car leaves the lip pitched up at the face angle

@@ -1,6 +1,6 @@
 import { PLAN } from "~/components/editor/colours";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { AnalysisOverlay } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 import { binStyle, SPEED_BINS, speedRuns } from "~/lib/editor/speed-scale";
 import { VERDICT_WORDS } from "./format";
 import { extent, speedLabels } from "./plan-geometry";

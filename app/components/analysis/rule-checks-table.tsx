@@ -1,4 +1,4 @@
-import type { RuleReport, RuleStatus } from "~/analysis/rules";
+import type { RuleReport, RuleStatus } from "~/analysis";
 
 const STATUS: Record<RuleStatus, { word: string; mark: string; cls: string }> = {
   pass: { word: "Pass", mark: "\u2713", cls: "bg-ok-100 text-ok-700" },

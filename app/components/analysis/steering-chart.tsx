@@ -1,5 +1,5 @@
 import { PLAN } from "~/components/editor/colours";
-import type { JumpPlan } from "~/analysis/layout-analysis-types";
+import type { JumpPlan } from "~/analysis";
 import { ticks } from "./elevation-path";
 
 export type SteeringSeries = {

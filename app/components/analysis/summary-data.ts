@@ -1,4 +1,4 @@
-import type { ClassAnalysis, LayoutAnalysis } from "~/analysis/layout-analysis-types";
+import type { ClassAnalysis, LayoutAnalysis } from "~/analysis";
 
 /** The part of a layout analysis the summary and the rule checks show (no per-sample data). */
 export type SummaryData = Pick<

@@ -1,6 +1,6 @@
-import { CAR_PRESETS } from "~/analysis/cars";
-import type { AnalysisOverlay, OverlayJump } from "~/lib/analysis-overlay";
-import type { LayoutSection } from "~/lib/layout-document";
+import { CAR_PRESETS } from "~/analysis";
+import type { AnalysisOverlay, OverlayJump } from "~/analysis";
+import type { LayoutSection } from "~/analysis";
 import { SKILLS, type AnalysisStatus, type Skill } from "./use-analysis";
 
 const VERDICT_TEXT: Record<OverlayJump["verdict"], string> = {

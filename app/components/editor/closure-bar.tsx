@@ -1,4 +1,4 @@
-import type { Closure } from "~/analysis/geometry";
+import type { Closure } from "~/analysis";
 import { formatLength, type LengthUnit } from "~/lib/editor/units";
 
 /** Gap below which the loop counts as closed, m, and heading error, deg. */

@@ -1,6 +1,6 @@
 import { useRef, useState } from "react";
-import { flyJump } from "~/analysis/flight";
-import { jumpProfile } from "~/analysis/jump-profile";
+import { flyJump } from "~/analysis";
+import { jumpProfile } from "~/analysis";
 import {
   addProfilePoint,
   dragProfileHandle,
@@ -8,7 +8,7 @@ import {
   removeProfilePoint,
 } from "~/lib/editor/profile-edit";
 import type { SnapSettings } from "~/lib/editor/snap";
-import type { JumpSection } from "~/lib/layout-document";
+import type { JumpSection } from "~/analysis";
 
 const W = 320;
 const H = 130;

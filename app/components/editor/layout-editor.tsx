@@ -4,8 +4,8 @@
  * and the panels only dispatch changes.
  */
 import { lazy, Suspense, useCallback, useMemo, useReducer, useState } from "react";
-import { closureError, resolveSections, sampleCentreLine, startPose } from "~/analysis/geometry";
-import { closeLoop } from "~/analysis/close-loop";
+import { closureError, resolveSections, sampleCentreLine, startPose } from "~/analysis";
+import { closeLoop } from "~/analysis";
 import { Button } from "~/components/ui/button";
 import { initialPlacement, type Background } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";
@@ -22,7 +22,7 @@ import { addBoundaryPoint, addMarshalPoint, placeDriverStand } from "~/lib/edito
 import { DEFAULT_SNAP, type SnapSettings } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
 import { layoutBounds } from "~/lib/editor/view";
-import type { JumpPreset, LayoutDocument } from "~/lib/layout-document";
+import type { JumpPreset, LayoutDocument } from "~/analysis";
 import { AnalysisPanel } from "./analysis-panel";
 import type { CanvasMode } from "./canvas-types";
 import { CanvasPlaceholder, ClientOnly } from "./client-only";

@@ -7,7 +7,7 @@
 import type Konva from "konva";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Group, Layer, Line, Stage } from "react-konva";
-import { sampleCentreLine } from "~/analysis/geometry";
+import { sampleCentreLine } from "~/analysis";
 import { fitView, layoutBounds, panBy, screenToWorld, zoomAt, type View } from "~/lib/editor/view";
 import { moveBackground } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";

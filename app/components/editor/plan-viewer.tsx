@@ -4,11 +4,11 @@
  */
 import { lazy, Suspense, useMemo, useState } from "react";
 import { Link } from "react-router";
-import { closureError, resolveSections, startPose } from "~/analysis/geometry";
+import { closureError, resolveSections, startPose } from "~/analysis";
 import type { Selection } from "~/lib/editor/editor-state";
 import { DEFAULT_SNAP } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { AnalysisPanel } from "./analysis-panel";
 import { CanvasPlaceholder, ClientOnly } from "./client-only";
 import { ClosureBar } from "./closure-bar";

@@ -10,7 +10,7 @@ import {
   rectangleBoundary,
 } from "~/lib/editor/site-ops";
 import { feetHint } from "~/lib/editor/units";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import type { CanvasMode } from "./canvas-types";
 import { toolClass } from "./editor-toolbar";
 import { NumberField } from "./number-field";

@@ -5,8 +5,8 @@
  * a failed request must never replace the editor with an error page.
  */
 import { useEffect, useRef, useState } from "react";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { AnalysisOverlay } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 
 export type AnalysisState = "idle" | "working" | "ready" | "unavailable" | "failed";
 

@@ -3,7 +3,7 @@
  * page loses nothing: opening the editor again offers to bring the changes back.
  */
 import { useEffect, useState } from "react";
-import { parseLayoutDocument, type LayoutDocument } from "~/lib/layout-document";
+import { parseLayoutDocument, type LayoutDocument } from "~/analysis";
 
 export interface DraftBackup {
   document: LayoutDocument;

@@ -5,7 +5,7 @@
  */
 import { useEffect, useRef, useState } from "react";
 import { useFetcher, useNavigate } from "react-router";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 
 type SaveResponse =
   | { ok: true; intent: "save"; version: number }

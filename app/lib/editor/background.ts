@@ -3,7 +3,7 @@
  * corner) to plan metres and back, a first placement that covers the layout, and the scale
  * calibration from two clicked points and the distance between them on the ground.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import type { Point } from "./drag-maths";
 import type { Bounds } from "./site-ops";
 

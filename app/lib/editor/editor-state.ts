@@ -2,7 +2,7 @@
  * The editor's state and its reducer: the undo history of the document, the selection, the drag
  * in progress and the last saved document. Pure, so every command is unit tested without a browser.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { amend, createHistory, record, redo, undo, type History } from "./history";
 import { deleteSection, duplicateSection } from "./section-ops";
 import { deleteBoundaryPoint, deleteMarshalPoint, removeDriverStand } from "./site-ops";

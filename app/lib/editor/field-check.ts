@@ -2,7 +2,7 @@
  * Checks a section the way the layout document format does (app/lib/layout-document.ts), so the
  * side panel can show a message beside the field and keep a bad value out of the drawing.
  */
-import { parseLayoutDocument, type LayoutDocument, type LayoutSection } from "~/lib/layout-document";
+import { parseLayoutDocument, type LayoutDocument, type LayoutSection } from "~/analysis";
 
 export interface FieldIssue {
   /** The field inside the section: "radius", "profile[2][0]", "id". */

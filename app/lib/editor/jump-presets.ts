@@ -3,7 +3,7 @@
  * jumps for 1/10 and 1/8 off-road cars (common practice, no source); every one passes the layout
  * document's checks (tests/unit/editor/section-ops.test.ts).
  */
-import type { JumpPreset, JumpSection } from "~/lib/layout-document";
+import type { JumpPreset, JumpSection } from "~/analysis";
 
 /** The trade's names of the presets, for menus and the side panel. */
 export const JUMP_PRESET_LABELS: Record<JumpPreset, string> = {

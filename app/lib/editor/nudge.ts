@@ -2,7 +2,7 @@
  * Arrow-key nudging: moves the selected thing by (dx, dy) m on the plan. A selected section moves
  * the whole track (its start pose), since sections are chained and have no position of their own.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { moveBackground } from "./background";
 import type { Selection } from "./editor-state";
 import { moveBoundaryPoint, moveMarshalPoint, placeDriverStand } from "./site-ops";

@@ -5,7 +5,7 @@
  * would break a rule spanning fields (a step-up lower than its takeoff, a gap too short for the
  * heights) is refused: the jump stays as it was.
  */
-import type { CustomJumpSection, JumpSection } from "~/lib/layout-document";
+import type { CustomJumpSection, JumpSection } from "~/analysis";
 import { clamp, snapAngle, snapHeight, snapLength, type SnapSettings } from "./snap";
 import { sectionIssues } from "./field-check";
 

@@ -4,7 +4,7 @@
  * Usable on both sides; every problem names its field.
  */
 import { z } from "zod";
-import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/lib/layout-document";
+import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/analysis";
 
 export const SAVE_INTENTS = ["save", "save-copy"] as const;
 export type SaveIntent = (typeof SAVE_INTENTS)[number];

@@ -3,7 +3,7 @@
  * delete, reorder, duplicate and change. Each returns a new document and leaves the old one as it
  * was, so the undo history can keep both by reference.
  */
-import type { JumpPreset, LayoutDocument, LayoutSection, TurnSection } from "~/lib/layout-document";
+import type { JumpPreset, LayoutDocument, LayoutSection, TurnSection } from "~/analysis";
 import { defaultJump } from "./jump-presets";
 
 export type NewSectionKind = "straight" | "turn-left" | "turn-right" | "jump";

@@ -2,7 +2,7 @@
  * Pure operations on the rest of the site: track width, driver stand, marshal points and the site
  * boundary polygon. Positions are plan metres; each returns a new document.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { clamp } from "./snap";
 import type { Point } from "./drag-maths";
 

@@ -4,7 +4,7 @@
  * stored overrides back through `storedOverridesSchema`.
  */
 import { z } from "zod";
-import type { GuidanceOverrides, GuidanceSetId, RuleId } from "~/analysis/rules";
+import type { GuidanceOverrides, GuidanceSetId, RuleId } from "~/analysis";
 
 export const GUIDANCE_SET_IDS = ["club", "national"] as const satisfies readonly GuidanceSetId[];
 

@@ -3,7 +3,7 @@
  * forms (browser), so the messages a person sees beside a field come from one place.
  */
 import { z } from "zod";
-import { ROLES, type Role } from "~/db/schema";
+import { ROLES, type Role } from "~/lib/roles";
 import { NAME_MAX_LENGTH, newPasswordField } from "./auth";
 
 const ROLE_LIST = "director, marshal or driver";

@@ -1,5 +1,6 @@
 import { getDb } from "~/db/client.server";
-import { clubs, layouts, memberships, type LayoutStatus, type Role } from "~/db/schema";
+import { type LayoutStatus, type Role } from "~/lib/roles";
+import { clubs, layouts, memberships } from "~/db/schema";
 import { createUser } from "~/auth/users.server";
 import { sessionCookie } from "./requests";
 

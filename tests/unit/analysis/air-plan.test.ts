@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { planAirSetup } from "~/analysis/air-plan";
-import { nutationPeriod } from "~/analysis/air-plan-linear";
-import { simulateAttitude } from "~/analysis/attitude";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/cars";
-import { seededNormal } from "~/analysis/vec";
+import { planAirSetup } from "~/analysis/air/air-plan";
+import { nutationPeriod } from "~/analysis/air/air-plan-linear";
+import { simulateAttitude } from "~/analysis/air/attitude";
+import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/format/cars";
+import { seededNormal } from "~/analysis/math/vec";
 
 const rad = (d: number) => (d * Math.PI) / 180;
 const deg = (r: number) => (r * 180) / Math.PI;

@@ -6,10 +6,10 @@ import {
   createAnalysisCache,
   fnv1a64,
   hashOnce,
-} from "~/analysis/analysis-cache";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
-import { analyseLayout } from "~/analysis/layout-analysis";
-import type { LayoutDocument } from "~/lib/layout-document";
+} from "~/analysis/layout/analysis-cache";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { analyseLayout } from "~/analysis/layout/layout-analysis";
+import type { LayoutDocument } from "~/analysis/format/layout-document";
 
 const clone = (d: LayoutDocument): LayoutDocument => structuredClone(d);
 

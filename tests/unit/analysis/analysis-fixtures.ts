@@ -2,8 +2,8 @@
  * Test layouts for the layout analysis: closed ovals with one jump on the near straight, the
  * jump landing straight into a hairpin or onto a long straight.
  */
-import { jumpProfile } from "~/analysis/jump-profile";
-import type { JumpSection, LayoutDocument, LayoutSection } from "~/lib/layout-document";
+import { jumpProfile } from "~/analysis/track/jump-profile";
+import type { JumpSection, LayoutDocument, LayoutSection } from "~/analysis/format/layout-document";
 
 /** A big double: about 0.97 s in the air at its sweet-spot speed (about 9.3 m/s). */
 export const BIG_DOUBLE: JumpSection = {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { compileServo, compileWheel, evaluate, kinkTimes } from "~/analysis/attitude-inputs";
+import { compileServo, compileWheel, evaluate, kinkTimes } from "~/analysis/air/attitude-inputs";
 
 describe("rate-limited servo", () => {
   const rate = Math.PI / 3 / 0.1; // 0.1 s per 60 deg

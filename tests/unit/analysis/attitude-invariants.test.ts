@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { simulateAttitude } from "~/analysis/attitude";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/cars";
+import { simulateAttitude } from "~/analysis/air/attitude";
+import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/format/cars";
 
 const rad = (d: number) => (d * Math.PI) / 180;
 const deg = (r: number) => (r * 180) / Math.PI;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { simulateAttitude, type AttitudeCar } from "~/analysis/attitude";
-import { compileServo, compileWheel, evaluate, kinkTimes } from "~/analysis/attitude-inputs";
-import { CAR_PRESETS } from "~/analysis/cars";
+import { simulateAttitude, type AttitudeCar } from "~/analysis/air/attitude";
+import { compileServo, compileWheel, evaluate, kinkTimes } from "~/analysis/air/attitude-inputs";
+import { CAR_PRESETS } from "~/analysis/format/cars";
 import { odexSolve } from "./odex-reference";
 
 const rad = (d: number) => (d * Math.PI) / 180;

@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { CAR_PRESETS, CAR_PRESET_IDS, carPreset, estimateInertia, wheelSpinInertia } from "~/analysis/cars";
+import {
+  CAR_PRESETS,
+  CAR_PRESET_IDS,
+  carPreset,
+  estimateInertia,
+  wheelSpinInertia,
+} from "~/analysis/format/cars";
 
 describe("car class presets", () => {
   it("has the four classes, each marked as an estimate with its reasoning", () => {

@@ -1,10 +1,10 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/lib/layout-document";
-import { CAR_PRESETS } from "~/analysis/cars";
-import { DEMO_LAYOUTS, SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/analysis/demo-layouts";
-import { layoutRuleReport, measureLayout } from "~/analysis/layout-measure";
-import { lapSpeed } from "~/analysis/speed";
+import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/analysis/format/layout-document";
+import { CAR_PRESETS } from "~/analysis/format/cars";
+import { DEMO_LAYOUTS, SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
+import { layoutRuleReport, measureLayout } from "~/analysis/track/layout-measure";
+import { lapSpeed } from "~/analysis/track/speed";
 
 const readJson = (name: string) => JSON.parse(readFileSync(`docs/examples/${name}`, "utf8"));
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { flyJump } from "~/analysis/flight";
-import { speedToLandAt, speedWindow, sweetSpotSpeed } from "~/analysis/flight-window";
+import { flyJump } from "~/analysis/flight/flight";
+import { speedToLandAt, speedWindow, sweetSpotSpeed } from "~/analysis/flight/flight-window";
 
 const rad = (d: number) => (d * Math.PI) / 180;
 

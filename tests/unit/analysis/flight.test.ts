@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { equivalentFallHeight, flyJump, groundAt, type ProfilePoint } from "~/analysis/flight";
+import { equivalentFallHeight, flyJump, groundAt, type ProfilePoint } from "~/analysis/flight/flight";
 import { odexSolve } from "./odex-reference";
 
 const flat = (z = 0): ProfilePoint[] => [

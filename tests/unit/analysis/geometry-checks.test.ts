@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
-import { layoutGeometry, trackEdges } from "~/analysis/geometry";
+import type { LayoutDocument, LayoutSection } from "~/analysis/format/layout-document";
+import { layoutGeometry, trackEdges } from "~/analysis/track/geometry";
 import {
   cyclicRuns,
   farthestFromStand,
@@ -9,8 +9,8 @@ import {
   insidePolygon,
   marshalSpread,
   startStraight,
-} from "~/analysis/geometry-checks";
-import { findHiddenFromStand } from "~/analysis/sight";
+} from "~/analysis/track/geometry-checks";
+import { findHiddenFromStand } from "~/analysis/track/sight";
 
 function oval(L: number, R: number, extra: LayoutSection[] = []): Pick<LayoutDocument, "start" | "sections"> {
   return {

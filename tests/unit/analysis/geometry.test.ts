@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
-import { closeLoop } from "~/analysis/close-loop";
-import { advancePose, layoutGeometry, nearestSample, trackEdges, wrapAngle } from "~/analysis/geometry";
-import { jumpProfile, profileHeightAt } from "~/analysis/jump-profile";
+import type { LayoutDocument, LayoutSection } from "~/analysis/format/layout-document";
+import { closeLoop } from "~/analysis/track/close-loop";
+import { advancePose, layoutGeometry, nearestSample, trackEdges, wrapAngle } from "~/analysis/track/geometry";
+import { jumpProfile, profileHeightAt } from "~/analysis/track/jump-profile";
 
 type Loop = Pick<LayoutDocument, "start" | "sections">;
 

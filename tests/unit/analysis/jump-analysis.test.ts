@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { CAR_PRESETS, type CarParams } from "~/analysis/cars";
-import { layoutGeometry } from "~/analysis/geometry";
-import { analyseJump } from "~/analysis/jump-analysis";
-import { jumpProfile } from "~/analysis/jump-profile";
-import { analyseLayout } from "~/analysis/layout-analysis";
-import { lapSpeed } from "~/analysis/speed";
-import type { JumpSection, LayoutDocument } from "~/lib/layout-document";
+import { CAR_PRESETS, type CarParams } from "~/analysis/format/cars";
+import { layoutGeometry } from "~/analysis/track/geometry";
+import { analyseJump } from "~/analysis/layout/jump-analysis";
+import { jumpProfile } from "~/analysis/track/jump-profile";
+import { analyseLayout } from "~/analysis/layout/layout-analysis";
+import { lapSpeed } from "~/analysis/track/speed";
+import type { JumpSection, LayoutDocument } from "~/analysis/format/layout-document";
 import { BIG_DOUBLE, KICKER, ovalWithJump } from "./analysis-fixtures";
 
 const G = 9.81;

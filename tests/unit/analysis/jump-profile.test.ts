@@ -1,6 +1,11 @@
 import { describe, expect, it } from "vitest";
-import type { JumpSection } from "~/lib/layout-document";
-import { jumpProfile, profileHeightAt, SWEET_SPOT_FRACTION, type JumpProfile } from "~/analysis/jump-profile";
+import type { JumpSection } from "~/analysis/format/layout-document";
+import {
+  jumpProfile,
+  profileHeightAt,
+  SWEET_SPOT_FRACTION,
+  type JumpProfile,
+} from "~/analysis/track/jump-profile";
 
 const DEG = Math.PI / 180;
 const BACK = Math.tan(40 * DEG); // mound back sides, MOUND_BACK_SLOPE_DEG

@@ -7,7 +7,7 @@ import {
   minimumGap,
   parseLayoutDocument,
   type LayoutIssue,
-} from "~/lib/layout-document";
+} from "~/analysis/format/layout-document";
 
 /** The tests write wrong types on purpose, so the copy is untyped. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any

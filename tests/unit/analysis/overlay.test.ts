@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
-import { jumpProfile } from "~/analysis/jump-profile";
-import { analyseLayout } from "~/analysis/layout-analysis";
-import { buildOverlay, linePolyline } from "~/analysis/overlay";
-import type { JumpSection } from "~/lib/layout-document";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { jumpProfile } from "~/analysis/track/jump-profile";
+import { analyseLayout } from "~/analysis/layout/layout-analysis";
+import { buildOverlay, linePolyline } from "~/analysis/layout/overlay";
+import type { JumpSection } from "~/analysis/format/layout-document";
 import { BIG_DOUBLE, ovalWithJump, ruleOval } from "./analysis-fixtures";
 
 describe("buildOverlay", () => {

@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/lib/layout-document";
-import { layoutRuleReport, measureLayout } from "~/analysis/layout-measure";
+import { EXAMPLE_LAYOUT, parseLayoutDocument, type LayoutDocument } from "~/analysis/format/layout-document";
+import { layoutRuleReport, measureLayout } from "~/analysis/track/layout-measure";
 import {
   checkRules,
   GUIDANCE_SETS,
   guidanceValues,
   RULES_NOTE,
   type RuleMeasurements,
-} from "~/analysis/rules";
+} from "~/analysis/track/rules";
 
 function example(edit: (d: LayoutDocument) => void = () => {}): LayoutDocument {
   const r = parseLayoutDocument(structuredClone(EXAMPLE_LAYOUT));

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
-import { CAR_PRESETS } from "~/analysis/cars";
-import { layoutGeometry } from "~/analysis/geometry";
-import { jumpProfile } from "~/analysis/jump-profile";
-import { ballisticJumpWindow, ballisticTouchdown, speedToReach } from "~/analysis/lap-jumps";
-import { cornerSpeed, lapSpeed, minimumTurnRadius, type LapCar } from "~/analysis/speed";
+import type { LayoutDocument, LayoutSection } from "~/analysis/format/layout-document";
+import { CAR_PRESETS } from "~/analysis/format/cars";
+import { layoutGeometry } from "~/analysis/track/geometry";
+import { jumpProfile } from "~/analysis/track/jump-profile";
+import { ballisticJumpWindow, ballisticTouchdown, speedToReach } from "~/analysis/track/lap-jumps";
+import { cornerSpeed, lapSpeed, minimumTurnRadius, type LapCar } from "~/analysis/track/speed";
 
 const DEG = Math.PI / 180;
 const buggy = CAR_PRESETS["buggy-2wd-10"];

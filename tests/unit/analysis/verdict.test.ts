@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { expectedGain, jumpVerdict, landsIntoTurn, timeSaved, trackLengthSaved } from "~/analysis/verdict";
+import {
+  expectedGain,
+  jumpVerdict,
+  landsIntoTurn,
+  timeSaved,
+  trackLengthSaved,
+} from "~/analysis/verdict/verdict";
 
 const rad = (d: number) => (d * Math.PI) / 180;
 

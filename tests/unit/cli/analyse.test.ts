@@ -3,8 +3,8 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
-import { analyseLayout } from "~/analysis/layout-analysis";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { analyseLayout } from "~/analysis";
 import { BIG_DOUBLE, ovalWithJump } from "../analysis/analysis-fixtures";
 
 const dir = mkdtempSync(join(tmpdir(), "loftline-analyse-"));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { resolveSections } from "~/analysis/geometry";
-import type { LayoutDocument } from "~/lib/layout-document";
+import { resolveSections } from "~/analysis";
+import type { LayoutDocument } from "~/analysis";
 import {
   alongTrack,
   jumpMoveBlocker,

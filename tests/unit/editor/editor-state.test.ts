@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { starterDocument } from "~/lib/starter-layout";
+import { starterDocument } from "~/analysis";
 import {
   editorReducer,
   initialEditorState,

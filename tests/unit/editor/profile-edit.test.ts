@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { jumpProfile } from "~/analysis/jump-profile";
-import type { CustomJumpSection, JumpSection } from "~/lib/layout-document";
+import { jumpProfile } from "~/analysis";
+import type { CustomJumpSection, JumpSection } from "~/analysis";
 import { defaultJump } from "~/lib/editor/jump-presets";
 import {
   addProfilePoint,

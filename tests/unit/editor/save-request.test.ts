@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { EXAMPLE_LAYOUT } from "~/lib/layout-document";
+import { EXAMPLE_LAYOUT } from "~/analysis";
 import { parseSaveRequest } from "~/lib/editor/save-request";
 
 describe("the save request", () => {

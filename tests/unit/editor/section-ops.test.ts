@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { JUMP_PRESETS, parseLayoutDocument } from "~/lib/layout-document";
-import { starterDocument } from "~/lib/starter-layout";
+import { JUMP_PRESETS, parseLayoutDocument } from "~/analysis";
+import { starterDocument } from "~/analysis";
 import {
   changeSectionKind,
   deleteSection,

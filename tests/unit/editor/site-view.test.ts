@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { layoutGeometry } from "~/analysis/geometry";
-import { starterDocument } from "~/lib/starter-layout";
+import { layoutGeometry } from "~/analysis";
+import { starterDocument } from "~/analysis";
 import {
   addBoundaryPoint,
   addMarshalPoint,

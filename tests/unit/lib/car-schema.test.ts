@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/cars";
-import { carFromProfile, carProfileSchema, carRefSchema, profileFromCar, resolveCar } from "~/lib/car-schema";
+import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis";
+import { carFromProfile, carProfileSchema, carRefSchema, profileFromCar, resolveCar } from "~/analysis";
 
 describe("car profile schema", () => {
   it("every preset round-trips through a profile", () => {

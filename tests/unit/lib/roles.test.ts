@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { LAYOUT_STATUSES, ROLES } from "~/db/schema";
+import { LAYOUT_STATUSES, ROLES } from "~/lib/roles";
 import { canSeeLayout, ROLE_LABELS, roleAllows } from "~/lib/roles";
 
 describe("roleAllows", () => {

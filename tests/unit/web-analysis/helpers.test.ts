@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { SUMMER_LAYOUT } from "~/analysis/demo-layouts";
-import { analyseLayout } from "~/analysis/layout-analysis";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { analyseLayout } from "~/analysis";
 import { analysisKey, canonicalJson, LruMap } from "~/analysis-cache.server";
 import { flightCurve, ticks } from "~/components/analysis/elevation-path";
 import { parseJumpSort, sortJumps } from "~/components/analysis/jump-sort";

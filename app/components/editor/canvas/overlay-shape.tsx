@@ -1,6 +1,6 @@
 import { memo } from "react";
 import { Shape } from "react-konva";
-import type { AnalysisOverlay } from "~/lib/analysis-overlay";
+import type { AnalysisOverlay } from "~/analysis";
 import { binStyle, speedRuns } from "~/lib/editor/speed-scale";
 import type { View } from "~/lib/editor/view";
 import { PLAN } from "../colours";

@@ -1,6 +1,6 @@
 import { useRef } from "react";
 import { Circle, Line, Rect, RegularPolygon, Text } from "react-konva";
-import { advancePose, type ResolvedSection } from "~/analysis/geometry";
+import { advancePose, type ResolvedSection } from "~/analysis";
 import {
   alongTrack,
   jumpMoveBlocker,
@@ -16,7 +16,7 @@ import { updateSection } from "~/lib/editor/section-ops";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { formatLength, type LengthUnit } from "~/lib/editor/units";
 import { screenToWorld, worldToScreen, type View } from "~/lib/editor/view";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { PLAN } from "../colours";
 import { DragPoint } from "./drag-point";
 

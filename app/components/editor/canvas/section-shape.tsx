@@ -1,7 +1,7 @@
 import type Konva from "konva";
 import { memo, useCallback, useMemo } from "react";
 import { Shape } from "react-konva";
-import type { LayoutSection } from "~/lib/layout-document";
+import type { LayoutSection } from "~/analysis";
 import { PLAN } from "../colours";
 import { localDrawing, type LocalSectionDrawing } from "./section-geometry";
 

@@ -5,7 +5,7 @@ import type { Selection } from "~/lib/editor/editor-state";
 import { moveBoundaryPoint, moveMarshalPoint, placeDriverStand } from "~/lib/editor/site-ops";
 import { snapLength, type SnapSettings } from "~/lib/editor/snap";
 import { screenToWorld, worldToScreen, type View } from "~/lib/editor/view";
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 import { PLAN } from "../colours";
 import { DragPoint } from "./drag-point";
 

@@ -1,5 +1,5 @@
 import { Circle, Group, Label, Line, Rect, RegularPolygon, Tag, Text } from "react-konva";
-import type { OverlayJump } from "~/lib/analysis-overlay";
+import type { OverlayJump } from "~/analysis";
 import type { Point } from "~/lib/editor/drag-maths";
 import { worldToScreen, type View } from "~/lib/editor/view";
 import { PLAN } from "../colours";

@@ -7,7 +7,7 @@
  * is useful, the one least sensitive to the driver's timing wins.
  */
 import { tableAt, type LinearGuide } from "./air-plan-linear";
-import { normalCdf } from "./vec";
+import { normalCdf } from "../math/vec";
 
 export interface BlockPlan {
   /** Switch times, s: steer to u1 at a, to u2 at m (or straight if single), straight at b. */

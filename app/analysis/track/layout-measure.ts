@@ -2,7 +2,7 @@
  * Everything measured on a layout's plan in one call: geometry, lane conflicts, the site
  * boundary, the driver stand's view and the marshal spread, and the rule checks built on them.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "../format/layout-document";
 import { layoutGeometry, trackEdges, type LayoutGeometry, type TrackEdges } from "./geometry";
 import {
   DEFAULT_LANE_MARGIN,

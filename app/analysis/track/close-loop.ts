@@ -8,7 +8,7 @@
  * its allowed range, the one with the smallest change wins (1 m of length or radius counts as
  * much as 10 degrees of angle).
  */
-import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
+import type { LayoutDocument, LayoutSection } from "../format/layout-document";
 import {
   advancePose,
   closureError,

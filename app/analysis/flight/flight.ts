@@ -3,7 +3,7 @@
  * takeoff speed along the face angle and flies under gravity (and optional quadratic drag) until
  * its path meets the ground profile. SI units and radians throughout.
  */
-import { assertFinite } from "./vec";
+import { assertFinite } from "../math/vec";
 
 /** A point of a side elevation: x along the jump (m), z up (m). */
 export interface ProfilePoint {

@@ -19,7 +19,7 @@ import {
   type TimedValue,
 } from "./attitude-inputs";
 import { makeSeries, record, trimSeries, type AttitudeSeries } from "./attitude-series";
-import { quatToYawThetaRoll } from "./vec";
+import { quatToYawThetaRoll } from "../math/vec";
 
 export type { AttitudeSeries };
 

@@ -5,7 +5,7 @@
  * Plan frame: X right, Y up, headings anticlockwise from +X in radians. Lengths are plan (top-down)
  * lengths; a jump is a straight whose ground rises and falls along it.
  */
-import type { LayoutDocument, LayoutSection } from "~/lib/layout-document";
+import type { LayoutDocument, LayoutSection } from "../format/layout-document";
 import { jumpProfile, profileHeightAt, type JumpProfile } from "./jump-profile";
 
 /** Position (m) and heading (rad, anticlockwise from +X). */

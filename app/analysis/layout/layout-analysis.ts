@@ -7,25 +7,25 @@
  * With a cache (analysis-cache.ts) a repeat of the same inputs returns the stored analysis, and
  * an edited layout recomputes only the jumps whose own inputs changed.
  */
-import type { JumpSection, LayoutDocument } from "~/lib/layout-document";
-import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
+import type { JumpSection, LayoutDocument } from "../format/layout-document";
+import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
 import { cacheKey, cacheKeyOf, fnv1a64, hashOnce, type AnalysisCache } from "./analysis-cache";
-import { carPreset, type CarParams } from "./cars";
-import type { ResolvedSection } from "./geometry";
+import { carPreset, type CarParams } from "../format/cars";
+import type { ResolvedSection } from "../track/geometry";
 import { analyseJump } from "./jump-analysis";
-import type { JumpProfile } from "./jump-profile";
-import { pointAt } from "./jump-turn";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "./lap-jumps";
+import type { JumpProfile } from "../track/jump-profile";
+import { pointAt } from "../verdict/jump-turn";
+import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
 import {
   SKILL_LEVELS,
   type ClassAnalysis,
   type LayoutAnalysis,
   type SkillLevel,
 } from "./layout-analysis-types";
-import { measureLayout, ruleMeasurements, type LayoutMeasures } from "./layout-measure";
-import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "./rules";
-import { lapSpeed } from "./speed";
-import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "./verdict";
+import { measureLayout, ruleMeasurements, type LayoutMeasures } from "../track/layout-measure";
+import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "../track/rules";
+import { lapSpeed } from "../track/speed";
+import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "../verdict/verdict";
 
 export interface AnalyseOptions {
   /** Car classes to analyse (default: the layout's own `carClasses`). */

@@ -6,26 +6,26 @@
  * level. The costly parts (window, flight, plan) go through the analysis cache when one is given.
  * Results are estimates from a model, not a safety certification.
  */
-import type { JumpSection } from "~/lib/layout-document";
-import { planAirSetup, type AirPlan } from "./air-plan";
-import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "./air-plan-robustness";
+import type { JumpSection } from "../format/layout-document";
+import { planAirSetup, type AirPlan } from "../air/air-plan";
+import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
 import { cacheKeyOf, hashOnce, type AnalysisCache } from "./analysis-cache";
-import type { CarParams } from "./cars";
-import { flyJump, type FlightInput, type FlightResult } from "./flight";
-import { speedToLandAt, speedWindow, type SpeedWindow } from "./flight-window";
-import type { CentreLine, ResolvedSection } from "./geometry";
-import type { JumpProfile } from "./jump-profile";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "./lap-jumps";
-import { findLandingTurn, lineIndexAt, pointAt } from "./jump-turn";
-import { describeVerdicts, type VerdictInputs } from "./jump-verdicts";
+import type { CarParams } from "../format/cars";
+import { flyJump, type FlightInput, type FlightResult } from "../flight/flight";
+import { speedToLandAt, speedWindow, type SpeedWindow } from "../flight/flight-window";
+import type { CentreLine, ResolvedSection } from "../track/geometry";
+import type { JumpProfile } from "../track/jump-profile";
+import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
+import { findLandingTurn, lineIndexAt, pointAt } from "../verdict/jump-turn";
+import { describeVerdicts, type VerdictInputs } from "../verdict/jump-verdicts";
 import type { JumpAnalysis, JumpPlan, SkillLevel } from "./layout-analysis-types";
-import type { JumpLap } from "./speed";
+import type { JumpLap } from "../track/speed";
 import {
   DEFAULT_FAIL_COST_S,
   DEFAULT_MIN_AIRTIME_S,
   DEFAULT_MIN_TURN_ANGLE,
   DEFAULT_TURN_LOOKAHEAD_S,
-} from "./verdict";
+} from "../verdict/verdict";
 
 /** The jump and its surroundings, as the lap model left them for one car class. */
 export interface JumpContext {

@@ -3,7 +3,7 @@
  * All values are estimates from memory (no car was measured); each preset says so and explains
  * its inertias. Users can replace any of them with measured values in their own car profiles.
  */
-import type { AttitudeCar } from "./attitude";
+import type { AttitudeCar } from "../air/attitude";
 
 /** One wheel with its tyre: rolling radius (m), spin inertia about the axle (kg m^2), mass (kg). */
 export interface WheelParams {

@@ -3,10 +3,10 @@
  * layout analysis for one car class and one skill level: the centre line with speeds, the jumps
  * with short verdict labels, hidden stretches as polylines, lane conflicts and failed rules.
  */
-import type { AnalysisOverlay, OverlayJump } from "~/lib/analysis-overlay";
+import type { AnalysisOverlay, OverlayJump } from "./overlay-types";
 import type { JumpAnalysis, LayoutAnalysis, SkillLevel } from "./layout-analysis-types";
 import { SKILL_LEVELS } from "./layout-analysis-types";
-import type { RuleCheck } from "./rules";
+import type { RuleCheck } from "../track/rules";
 
 /** Short label beside a jump's marker, e.g. "Set up: turn 25° left in the air". */
 export function jumpLabel(j: JumpAnalysis, skill: SkillLevel): string {

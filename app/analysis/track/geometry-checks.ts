@@ -3,7 +3,7 @@
  * farthest point from the driver stand, the start straight and how evenly marshal points are
  * spread (engine.md sections 1 and 7). Plan coordinates in metres.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "../format/layout-document";
 import { nearestSample, type CentreLine, type ResolvedSection, type TrackEdges } from "./geometry";
 
 /** Default extra room between neighbouring lanes, m (an estimate: a divider plus some run-off). */

@@ -3,7 +3,7 @@
  * and how sharp the corner is; plus lookups of the sampled centre line by lap distance.
  * Plan distances in metres, angles in radians.
  */
-import type { CentreLine, ResolvedSection } from "./geometry";
+import type { CentreLine, ResolvedSection } from "../track/geometry";
 import { landsIntoTurn } from "./verdict";
 
 /** Index of the last centre-line sample at or before lap distance `s` (m, wrapped onto the lap). */

@@ -3,9 +3,9 @@
  * everything else. Zod schemas for both sides, and conversions to the engine's radians.
  */
 import { z } from "zod";
-import type { AttitudeCar } from "~/analysis/attitude";
-import type { PulseLimits } from "~/analysis/air-plan-pulse";
-import { CAR_PRESET_IDS, carPreset, type CarParams } from "~/analysis/cars";
+import type { AttitudeCar } from "../air/attitude";
+import type { PulseLimits } from "../air/air-plan-pulse";
+import { CAR_PRESET_IDS, carPreset, type CarParams } from "./cars";
 
 const positive = (what: string) =>
   z.number({ error: `${what} must be a number` }).positive(`${what} must be above 0`);

@@ -11,10 +11,10 @@
  * not modelled (plan distances). A flight meets the ground of its own jump or the flat beyond it
  * (a next jump's ground is not seen from the air).
  */
-import type { CarParams } from "./cars";
+import type { CarParams } from "../format/cars";
 import type { CentreLine, ResolvedSection } from "./geometry";
 import type { JumpProfile } from "./jump-profile";
-import { assertFinite } from "./vec";
+import { assertFinite } from "../math/vec";
 import { ballisticJumpWindow, ballisticTouchdown, STANDARD_GRAVITY, type JumpWindow } from "./lap-jumps";
 
 /**

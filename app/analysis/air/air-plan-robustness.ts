@@ -9,7 +9,7 @@
  * every switch, each adding its own curve's change of roll (an additive model: the cross effects
  * of two switches both being off are left out).
  */
-import { seededNormal } from "./vec";
+import { seededNormal } from "../math/vec";
 
 /** Timing error (standard deviation) of a driver's steering switch, s, by skill level. */
 export interface SkillSigmas {

@@ -3,8 +3,8 @@
  * "set up in the air" with what to do, or "take it straight" with the reason. The numbers come
  * from verdict.ts (track length saved, time saved, expected gain, jumpVerdict).
  */
-import type { JumpAnalysis, JumpReason, SkillLevel, SkillVerdict } from "./layout-analysis-types";
-import { SKILL_LEVELS } from "./layout-analysis-types";
+import type { JumpAnalysis, JumpReason, SkillLevel, SkillVerdict } from "../layout/layout-analysis-types";
+import { SKILL_LEVELS } from "../layout/layout-analysis-types";
 import { expectedGain, jumpVerdict, timeSaved, trackLengthSaved } from "./verdict";
 
 /** Short reasons in plain words (flown-over names the other jump). */

@@ -5,8 +5,8 @@
  * Every profile starts at distance 0 and height 0 and ends at height 0; its last distance is the
  * plan length of the jump section. Mound back sides are MOUND_BACK_SLOPE_DEG steep.
  */
-import type { JumpSection } from "~/lib/layout-document";
-import { MOUND_BACK_SLOPE_DEG } from "~/lib/layout-document-checks";
+import type { JumpSection } from "../format/layout-document";
+import { MOUND_BACK_SLOPE_DEG } from "../format/layout-document-checks";
 
 /** Fraction of the way down the landing ramp where a planned landing touches down (engine.md 2). */
 export const SWEET_SPOT_FRACTION = 1 / 3;

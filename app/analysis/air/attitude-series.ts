@@ -3,7 +3,7 @@
  * preallocated typed arrays and trimmed once at the end.
  */
 import type { PiecewiseLinear } from "./attitude-inputs";
-import { quatToYawThetaRoll } from "./vec";
+import { quatToYawThetaRoll } from "../math/vec";
 
 /** Samples in time order: t (s), attitude (rad), steering angle (rad), driven-wheel spin (rad/s). */
 export interface AttitudeSeries {

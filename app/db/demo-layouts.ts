@@ -8,7 +8,7 @@
  * gains by setting the car up for the hairpin; the smaller jumps are not. Jumps whose landing faces away from the stand are kept low, and the tall
  * step-up sits on a near leg, so that no stretch of track is hidden from the stand.
  */
-import type { LayoutDocument } from "~/lib/layout-document";
+import type { LayoutDocument } from "~/analysis";
 
 export const DEMO_CLUB_NAME = "Kestrel Valley Off-Road Club";
 

@@ -7,11 +7,11 @@
  * degrees and every angle field ends in `Deg` (docs/decisions/0400). Every number is a model
  * estimate, not a safety certification.
  */
-import type { JumpPreset } from "~/lib/layout-document";
-import type { PlanInfeasibleReason } from "./air-plan";
-import type { PitchPulse } from "./air-plan-pulse";
-import type { SwitchWindow } from "./air-plan-robustness";
-import type { RuleReport } from "./rules";
+import type { JumpPreset } from "../format/layout-document";
+import type { PlanInfeasibleReason } from "../air/air-plan";
+import type { PitchPulse } from "../air/air-plan-pulse";
+import type { SwitchWindow } from "../air/air-plan-robustness";
+import type { RuleReport } from "../track/rules";
 
 /** Driver skill levels the verdicts are given for. */
 export const SKILL_LEVELS = ["novice", "club", "expert"] as const;

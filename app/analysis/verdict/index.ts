@@ -1,0 +1,4 @@
+// Track length saved, the verdict per skill level and its words.
+export * from "./verdict";
+export * from "./jump-verdicts";
+export { findLandingTurn, type TurnAfter } from "./jump-turn";
