@@ -18,10 +18,10 @@ export default [
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
 
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
-  layout("routes/signed-in-layout.tsx", [
+  layout("routes/signed-in-frame.tsx", [
     route("clubs", "routes/clubs.tsx"),
     ...prefix("clubs/:clubId", [
-      layout("routes/club-layout.tsx", [
+      layout("routes/club-frame.tsx", [
         index("routes/club-home.tsx"),
         route("members", "routes/club-members.tsx"),
         route("layouts/new", "routes/layout-new.tsx"),
@@ -33,7 +33,7 @@ export default [
     route("layouts/:layoutId/settings", "routes/layout-settings.tsx"),
     route("layouts/:layoutId/jumps/:sectionId", "routes/jump-page.tsx"),
     route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
-    route("layouts/:layoutId/plan", "routes/layout-view.tsx"),
+    route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
     route("files/:fileId", "routes/file.tsx"),
   ]),

@@ -4,9 +4,9 @@ import { useTestDatabase } from "./helpers/db";
 import { addMember, makeClub, makeClubWithRoles, makeUser } from "./helpers/factories";
 import { args, formRequest, getRequest, run } from "./helpers/requests";
 import { clubs, memberships } from "~/db/schema";
-import * as clubLayout from "~/routes/club-layout";
+import * as clubLayout from "~/routes/club-frame";
 import * as clubsPage from "~/routes/clubs";
-import * as signedIn from "~/routes/signed-in-layout";
+import * as signedIn from "~/routes/signed-in-frame";
 
 const { db } = useTestDatabase();
 

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { layouts, layoutVersions, memberships } from "~/db/schema";
 import { starterDocument } from "~/analysis";
 import { action as editorAction, loader as editorLoader } from "~/routes/layout-editor";
-import { loader as viewLoader } from "~/routes/layout-view";
+import { loader as viewLoader } from "~/routes/layout-drawing";
 import { action as photoAction } from "~/routes/layout-photo";
 import { loader as fileLoader } from "~/routes/file";
 import { useTestDatabase } from "./helpers/db";

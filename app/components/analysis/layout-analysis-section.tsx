@@ -8,7 +8,7 @@ import { AnalysisSummary } from "./analysis-summary";
 import { jumpName, skillPhrase } from "./format";
 import { sortJumps, type JumpSort, type JumpSortKey } from "./jump-sort";
 import { JumpsTable } from "./jumps-table";
-import { PlanView } from "./plan-view";
+import { TrackDrawing } from "~/components/drawing/track-drawing";
 import { RuleChecksTable } from "./rule-checks-table";
 import type { SummaryData } from "./summary-data";
 
@@ -123,7 +123,7 @@ function Results({
         <h2 id="plan-heading" className="text-lg font-semibold">
           Plan with speeds
         </h2>
-        <PlanView
+        <TrackDrawing
           overlay={result.overlay}
           site={d.document}
           numbers={numbers}

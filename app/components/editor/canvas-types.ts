@@ -16,7 +16,7 @@ import type { LayoutDocument } from "~/analysis";
  */
 export type CanvasMode = "select" | "marshal" | "boundary" | "stand" | "calibrate" | "move-photo";
 
-export interface PlanCanvasProps {
+export interface DrawingCanvasProps {
   doc: LayoutDocument;
   /** The document's sections chained from the start (computed once by the editor). */
   sections: ResolvedSection[];

@@ -27,7 +27,7 @@ import { AnalysisPanel } from "./analysis-panel";
 import type { CanvasMode } from "./canvas-types";
 import { CanvasPlaceholder, ClientOnly } from "./client-only";
 import { ClosureBar } from "./closure-bar";
-import { PlanTitle, photoUrl } from "./plan-title";
+import { DrawingTitle, photoUrl } from "~/components/drawing/drawing-title";
 import { ConflictDialog, RestoreBanner } from "./editor-dialogs";
 import { EditorToolbar } from "./editor-toolbar";
 import { HelpPanel } from "./help-panel";
@@ -42,7 +42,7 @@ import { useEditorKeys } from "./use-editor-keys";
 import { LeaveDialog, useLeaveGuard } from "./use-leave-guard";
 import { useSave } from "./use-save";
 
-const PlanCanvas = lazy(() => import("./plan-canvas"));
+const DrawingCanvas = lazy(() => import("./drawing-canvas"));
 
 export interface LayoutEditorProps {
   club: { id: string; name: string };
@@ -172,7 +172,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   return (
     <div className="space-y-3">
       <header className="flex flex-wrap items-center gap-x-4 gap-y-2">
-        <PlanTitle
+        <DrawingTitle
           club={club}
           layoutId={layout.id}
           heading={`Editing ${doc.name}`}
@@ -236,7 +236,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>
-                <PlanCanvas
+                <DrawingCanvas
                   doc={doc}
                   sections={sections}
                   selection={state.selection}

@@ -4,7 +4,7 @@ import { analyseLayout } from "~/analysis";
 import { analysisKey, canonicalJson, LruMap } from "~/analysis-cache.server";
 import { flightCurve, ticks } from "~/components/analysis/elevation-path";
 import { parseJumpSort, sortJumps } from "~/components/analysis/jump-sort";
-import { speedLabels } from "~/components/analysis/plan-geometry";
+import { speedLabels } from "~/components/drawing/drawing-geometry";
 import { exportFileName } from "~/lib/layout-file-name";
 
 describe("analysis memo keys", () => {

@@ -1,6 +1,6 @@
-import type { Route } from "./+types/layout-view";
+import type { Route } from "./+types/layout-drawing";
 import { requireLayoutAccess } from "~/auth/permissions.server";
-import { PlanViewer } from "~/components/editor/plan-viewer";
+import { DrawingViewer } from "~/components/reader/drawing-viewer";
 import { loadLayoutDocument } from "~/layouts/documents.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
@@ -20,5 +20,5 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export default function LayoutViewRoute({ loaderData }: Route.ComponentProps) {
-  return <PlanViewer {...loaderData} />;
+  return <DrawingViewer {...loaderData} />;
 }

@@ -1,5 +1,5 @@
 import { NavLink, Outlet } from "react-router";
-import type { Route } from "./+types/club-layout";
+import type { Route } from "./+types/club-frame";
 import { requireClubRole } from "~/auth/permissions.server";
 import { ROLE_LABELS } from "~/lib/roles";
 

@@ -1,5 +1,5 @@
 import { Outlet } from "react-router";
-import type { Route } from "./+types/signed-in-layout";
+import type { Route } from "./+types/signed-in-frame";
 import { requireUser } from "~/auth/permissions.server";
 
 /** Everything under this layout is for signed-in people; each page checks its club role itself. */

@@ -13,15 +13,15 @@ import { moveBackground } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { Selection } from "~/lib/editor/editor-state";
 import { PLAN } from "./colours";
-import type { PlanCanvasProps } from "./canvas-types";
+import type { DrawingCanvasProps } from "./canvas-types";
 import { ScaleBar, SpeedLegend, ZoomControls } from "./canvas-overlays";
-import { GridShape } from "./canvas/grid-shape";
-import { OverlayShape } from "./canvas/overlay-shape";
-import { PhotoImage } from "./canvas/photo-image";
-import { SectionHandles } from "./canvas/section-handles";
-import { SectionShape } from "./canvas/section-shape";
-import { SiteMarkers, StartMarker } from "./canvas/site-markers";
-import { CalibrationMarks, VerdictMarkers } from "./canvas/verdict-markers";
+import { GridShape } from "~/components/editor/canvas/grid-shape";
+import { OverlayShape } from "~/components/editor/canvas/overlay-shape";
+import { PhotoImage } from "~/components/editor/canvas/photo-image";
+import { SectionHandles } from "~/components/editor/canvas/section-handles";
+import { SectionShape } from "~/components/editor/canvas/section-shape";
+import { SiteMarkers, StartMarker } from "~/components/editor/canvas/site-markers";
+import { CalibrationMarks, VerdictMarkers } from "~/components/editor/canvas/verdict-markers";
 
 const RAD = 180 / Math.PI;
 
@@ -35,7 +35,7 @@ type Press = {
   photo: boolean;
 };
 
-export default function PlanCanvas(props: PlanCanvasProps) {
+export default function DrawingCanvas(props: DrawingCanvasProps) {
   const { doc, sections, selection, editable, mode, overlay } = props;
   const wrapper = useRef<HTMLDivElement>(null);
   const stageRef = useRef<Konva.Stage>(null);

@@ -2,7 +2,7 @@ import { Fragment } from "react";
 import { Link } from "react-router";
 
 /** The editor's and the read-only plan's title: the way back (club, layout page, more) and the heading. */
-export function PlanTitle({
+export function DrawingTitle({
   club,
   layoutId,
   heading,

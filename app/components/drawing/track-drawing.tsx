@@ -2,10 +2,10 @@ import { PLAN } from "~/components/editor/colours";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { binStyle, SPEED_BINS, speedRuns } from "~/lib/editor/speed-scale";
-import { VERDICT_WORDS } from "./format";
-import { extent, speedLabels } from "./plan-geometry";
-import { PlanLegend } from "./plan-legend";
-import { VERDICT_COLOUR, verdictPath } from "./verdict-mark";
+import { VERDICT_WORDS } from "~/components/analysis/format";
+import { extent, speedLabels } from "./drawing-geometry";
+import { DrawingLegend } from "./drawing-legend";
+import { VERDICT_COLOUR, verdictPath } from "~/components/analysis/verdict-mark";
 
 type Site = Pick<LayoutDocument, "driverStand" | "marshalPoints" | "siteBoundary" | "trackWidth">;
 
@@ -26,7 +26,7 @@ type Props = {
  * gives the verdict (each a link to the jump's page), the driver stand, marshal points, the site
  * boundary, stretches hidden from the stand and lanes that come too close.
  */
-export function PlanView({ overlay, site, numbers, names, jumpHref, title, classLabel }: Props) {
+export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, classLabel }: Props) {
   const { line, speedRange } = overlay;
   const pts: [number, number][] = line.x.map((x, i) => [x, line.y[i]]);
   const others: [number, number][] = [
@@ -232,7 +232,7 @@ export function PlanView({ overlay, site, numbers, names, jumpHref, title, class
           Drawn to scale from above for the {classLabel}: lap {overlay.lapLength.toFixed(0)} m, speeds from{" "}
           {speedRange.min.toFixed(1)} to {speedRange.max.toFixed(1)} m/s (model estimate).
         </p>
-        <PlanLegend
+        <DrawingLegend
           min={speedRange.min}
           max={speedRange.max}
           bins={SPEED_BINS}

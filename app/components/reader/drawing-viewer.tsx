@@ -9,25 +9,25 @@ import type { Selection } from "~/lib/editor/editor-state";
 import { DEFAULT_SNAP } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
 import type { LayoutDocument } from "~/analysis";
-import { AnalysisPanel } from "./analysis-panel";
-import { CanvasPlaceholder, ClientOnly } from "./client-only";
-import { ClosureBar } from "./closure-bar";
-import { PlanTitle, photoUrl } from "./plan-title";
-import { Panel } from "./panel";
-import { describeSection } from "./sections-list";
-import { useAnalysis, type Skill } from "./use-analysis";
+import { AnalysisPanel } from "~/components/editor/analysis-panel";
+import { CanvasPlaceholder, ClientOnly } from "~/components/editor/client-only";
+import { ClosureBar } from "~/components/editor/closure-bar";
+import { DrawingTitle, photoUrl } from "~/components/drawing/drawing-title";
+import { Panel } from "~/components/editor/panel";
+import { describeSection } from "~/components/editor/sections-list";
+import { useAnalysis, type Skill } from "~/components/editor/use-analysis";
 
-const PlanCanvas = lazy(() => import("./plan-canvas"));
+const DrawingCanvas = lazy(() => import("~/components/editor/drawing-canvas"));
 const noop = () => {};
 
-export interface PlanViewerProps {
+export interface DrawingViewerProps {
   club: { id: string; name: string };
   layout: { id: string; name: string; status: string };
   document: LayoutDocument;
   canEdit: boolean;
 }
 
-export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerProps) {
+export function DrawingViewer({ club, layout, document: doc, canEdit }: DrawingViewerProps) {
   const sections = useMemo(() => resolveSections(doc), [doc]);
   const closure = useMemo(() => closureError(sections, startPose(doc)), [sections, doc]);
   const [selection, setSelection] = useState<Selection>(null);
@@ -40,7 +40,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
   return (
     <div className="space-y-3">
       <header className="flex flex-wrap items-end gap-x-4 gap-y-2">
-        <PlanTitle club={club} layoutId={layout.id} heading={`Plan of ${doc.name}`} />
+        <DrawingTitle club={club} layoutId={layout.id} heading={`Plan of ${doc.name}`} />
         <div className="ml-auto flex items-center gap-3 text-sm">
           <label className="inline-flex items-center gap-1.5">
             Plan in
@@ -80,7 +80,7 @@ export function PlanViewer({ club, layout, document: doc, canEdit }: PlanViewerP
           <ClientOnly fallback={<CanvasPlaceholder />}>
             {() => (
               <Suspense fallback={<CanvasPlaceholder />}>
-                <PlanCanvas
+                <DrawingCanvas
                   doc={doc}
                   sections={sections}
                   selection={selection}

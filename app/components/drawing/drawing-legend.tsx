@@ -1,7 +1,7 @@
 import { binStyle, speedBin } from "~/lib/editor/speed-scale";
 import { PLAN } from "~/components/editor/colours";
-import { VERDICT_WORDS, type VerdictKind } from "./format";
-import { VerdictIcon } from "./verdict-mark";
+import { VERDICT_WORDS, type VerdictKind } from "~/components/analysis/format";
+import { VerdictIcon } from "~/components/analysis/verdict-mark";
 
 /** Bands shown on the legend (the drawing uses finer steps of the same scale). */
 const LEGEND_BANDS = 5;
@@ -10,7 +10,7 @@ const LEGEND_BANDS = 5;
  * The plan's legend: the speed bands with their numbers (m/s and km/h) and line widths, the jump
  * marks with their words, and the other signs. Nothing here depends on telling colours apart.
  */
-export function PlanLegend({
+export function DrawingLegend({
   min,
   max,
   bins,
