@@ -1,8 +1,9 @@
 import { reactRouter } from "@react-router/dev/vite";
 import tailwindcss from "@tailwindcss/vite";
 import { defineConfig } from "vite";
+import { clientModulesReport } from "./scripts/lib/client-modules-plugin";
 
 export default defineConfig({
-  plugins: [tailwindcss(), reactRouter()],
+  plugins: [tailwindcss(), reactRouter(), clientModulesReport()],
   resolve: { tsconfigPaths: true },
 });

@@ -1,26 +1,32 @@
 #!/usr/bin/env bash
-# `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
-# the unit and integration tests (vitest), builds the app and runs the browser tests against it.
+# `npm test`: every test. Installs Debian's chromium and poppler-utils when missing, then runs
+# the typecheck and the lint (a reach past the engine's front door fails here), the unit and
+# integration tests (vitest), builds the app and runs the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
 
-ensure_chromium() {
-  if [ -x /usr/bin/chromium ]; then
+# Debian packages the tests use: chromium (browser tests) and poppler-utils (pdftotext and pdftoppm
+# read the PDFs the app makes). Installed with apt-get when missing.
+ensure_test_packages() {
+  local missing=()
+  [ -x /usr/bin/chromium ] || missing+=(chromium)
+  command -v pdftotext >/dev/null 2>&1 || missing+=(poppler-utils)
+  if [ ${#missing[@]} -eq 0 ]; then
     return 0
   fi
-  echo "==> /usr/bin/chromium is missing: installing Debian's chromium with apt-get"
+  echo "==> missing: ${missing[*]}: installing Debian's packages with apt-get"
   local sudo=""
   if [ "$(id -u)" -ne 0 ]; then
     if command -v sudo >/dev/null 2>&1; then
       sudo="sudo"
     else
-      echo "Not root and no sudo: install chromium yourself (apt-get install -y chromium)." >&2
+      echo "Not root and no sudo: install them yourself (apt-get install -y ${missing[*]})." >&2
       return 1
     fi
   fi
   $sudo apt-get update -q &&
-    DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -q --no-install-recommends chromium
+    DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -q --no-install-recommends "${missing[@]}"
 }
 
 declare -a names=() results=() seconds=()
@@ -38,7 +44,7 @@ stage() {
   return "$code"
 }
 
-stage "chromium" ensure_chromium
+stage "test packages" ensure_test_packages
 # Each runner's output is also kept, to add up its test counts for the closing line.
 runner_log=$(mktemp)
 trap 'rm -f "$runner_log"' EXIT
@@ -46,6 +52,8 @@ counted() {
   "$@" 2>&1 | tee -a "$runner_log"
 }
 
+stage "typecheck" npm run --silent typecheck
+stage "lint" ./node_modules/.bin/eslint .
 stage "unit and integration tests" counted ./node_modules/.bin/vitest run
 if stage "build" ./node_modules/.bin/react-router build; then
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
