@@ -1,11 +1,10 @@
 import { PLAN } from "~/components/editor/colours";
-import type { AnalysisOverlay } from "~/analysis";
+import { VERDICT_WORDS, type AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { binStyle, SPEED_BINS, speedRuns } from "~/lib/editor/speed-scale";
-import { VERDICT_WORDS } from "~/components/analysis/format";
 import { extent, speedLabels } from "./drawing-geometry";
 import { DrawingLegend } from "./drawing-legend";
-import { VERDICT_COLOUR, verdictPath } from "~/components/analysis/verdict-mark";
+import { VERDICT_MARK_OUTLINE, VERDICT_MARKS } from "~/lib/verdict-marks";
 
 type Site = Pick<LayoutDocument, "driverStand" | "marshalPoints" | "siteBoundary" | "trackWidth">;
 
@@ -199,18 +198,18 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
                   y1={-j.lip[1]}
                   x2={j.landing[0]}
                   y2={-j.landing[1]}
-                  stroke={VERDICT_COLOUR[j.verdict]}
+                  stroke={PLAN.verdict[j.verdict]}
                   strokeWidth={2}
                   strokeDasharray="3 2"
                   vectorEffect="non-scaling-stroke"
                 />
               ) : null}
               <path
-                d={verdictPath(j.verdict)}
+                d={VERDICT_MARKS[j.verdict].path}
                 transform={`translate(${j.lip[0]} ${-j.lip[1]}) scale(${r})`}
-                fill={VERDICT_COLOUR[j.verdict]}
+                fill={PLAN.verdict[j.verdict]}
                 stroke="white"
-                strokeWidth={0.15}
+                strokeWidth={VERDICT_MARK_OUTLINE}
               />
               <text
                 x={j.lip[0]}
