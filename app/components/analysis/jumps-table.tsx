@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import { JUMP_PRESET_LABELS, verdictKind, type JumpAnalysis, type SkillLevel } from "~/analysis";
+import { JUMP_PRESET_LABELS, REASON_TEXT, verdictKind, type JumpAnalysis, type SkillLevel } from "~/analysis";
 import { jumpName, metres, percent, seconds, signedSeconds, speedShort } from "./format";
 import type { JumpSort, JumpSortKey } from "./jump-sort";
 import { VerdictMark } from "./verdict-mark";
@@ -106,7 +106,9 @@ function JumpRow({
           <span className="block text-xs text-ink-500">{JUMP_PRESET_LABELS[j.preset]}</span>
         ) : null}
       </th>
-      <td className="px-3 py-2 tabular-nums">{flown ? "flown over" : speedShort(j.takeoffSpeed)}</td>
+      <td className="px-3 py-2 tabular-nums">
+        {flown ? REASON_TEXT["flown-over"] : speedShort(j.takeoffSpeed)}
+      </td>
       <td className="px-3 py-2 tabular-nums whitespace-nowrap">
         {j.window
           ? `${speedShort(j.window.min)}\u2013${speedShort(j.window.max)}${j.window.maxIsSearchLimit ? "+" : ""}`

@@ -1,5 +1,5 @@
 import { PLAN } from "~/components/editor/colours";
-import { VERDICT_WORDS, type AnalysisOverlay } from "~/analysis";
+import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { binStyle, SPEED_BINS, speedRuns } from "~/lib/editor/speed-scale";
 import { extent, speedLabels } from "./drawing-geometry";
@@ -190,7 +190,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
             <a
               key={j.sectionId}
               href={jumpHref(j.sectionId)}
-              aria-label={`J${n} ${names[j.sectionId] ?? j.sectionId}: ${VERDICT_WORDS[j.verdict]}. ${j.label}`}
+              aria-label={`J${n} ${names[j.sectionId] ?? j.sectionId}: ${j.label}`}
             >
               {j.landing ? (
                 <line
