@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
-# the unit and integration tests (vitest), builds the app and runs the browser tests against it.
+# the unit, component and integration tests (vitest), builds the app and runs the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -46,7 +46,7 @@ counted() {
   "$@" 2>&1 | tee -a "$runner_log"
 }
 
-stage "unit and integration tests" counted ./node_modules/.bin/vitest run
+stage "unit+component+integration" counted ./node_modules/.bin/vitest run
 if stage "build" ./node_modules/.bin/react-router build; then
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else
