@@ -33,12 +33,22 @@
  *   `trackLengthSaved(radius, psi, turnAngle)` m, `timeSaved(radius, psi, turnAngle, entrySpeed)` s,
  *   `expectedGain(successRate, timeSaved, failCost = 3)` s,
  *   `jumpVerdict({ landsIntoTurn, turnAngle, airtime, expectedGain, planFeasible? })`
- *   -> `{ verdict: "set-up" | "straight", reason, text }`.
+ *   -> `{ verdict: "set-up" | "straight", reason }`; the sentences drivers read are written by
+ *   `describeVerdicts` (jump-verdicts.ts) from the words below.
+ *
+ * The product's words (words.ts): `SKILL_LEVELS` / `SKILL_LABELS` / `skillPhrase`, `JUMP_PRESETS` /
+ * `JUMP_PRESET_LABELS`, `SURFACES` / `SURFACE_LABELS`, `GUIDANCE_SET_IDS` / `GUIDANCE_SET_LABELS`,
+ * `VERDICT_KINDS` / `VERDICT_WORDS` / `verdictKind`, `REASON_TEXT`, `quotedList`. Defined once;
+ * every screen, message and command imports them from here.
  *
  * Car classes (cars.ts)
  * - `CAR_PRESETS` by id ("buggy-2wd-10", "buggy-4wd-10", "sct-10", "buggy-8"), `CAR_PRESET_IDS`,
  *   `carPreset(id)`, `CarParams` (every value an estimate, with notes on the inertias).
+ *
+ * New jumps (jump-presets.ts)
+ * - `defaultJump(preset, id)` -> the preset's starting shape; `DEFAULT_JUMP_PRESET`.
  */
+export * from "./words";
 export * from "./format";
 export * from "./flight";
 export * from "./air";

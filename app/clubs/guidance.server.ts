@@ -3,10 +3,10 @@
  * club's own values for some rules, stored in clubs.guidance_set and clubs.guidance_overrides.
  */
 import { eq } from "drizzle-orm";
-import type { GuidanceOverrides, GuidanceSetId } from "~/analysis";
+import { GUIDANCE_SET_IDS, type GuidanceOverrides, type GuidanceSetId } from "~/analysis";
 import { getDb } from "~/db/client.server";
 import { clubs } from "~/db/schema";
-import { GUIDANCE_SET_IDS, storedOverridesSchema } from "~/lib/schemas/club-settings";
+import { storedOverridesSchema } from "~/lib/schemas/club-settings";
 
 export interface ClubGuidance {
   guidanceSet: GuidanceSetId;

@@ -2,6 +2,7 @@ import { data, Form, useNavigation } from "react-router";
 import type { Route } from "./+types/club-settings";
 import {
   checkRules,
+  GUIDANCE_SET_IDS,
   GUIDANCE_SETS,
   RULES_NOTE,
   type GuidanceOverrides,
@@ -14,12 +15,7 @@ import { loadClubGuidance, saveClubGuidance } from "~/clubs/guidance.server";
 import { Button } from "~/components/ui/button";
 import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form";
 import { parseForm } from "~/lib/forms";
-import {
-  clubSettingsSchema,
-  GUIDANCE_SET_IDS,
-  RULE_FIELDS,
-  settingsFromForm,
-} from "~/lib/schemas/club-settings";
+import { clubSettingsSchema, RULE_FIELDS, settingsFromForm } from "~/lib/schemas/club-settings";
 
 export const meta: Route.MetaFunction = () => [{ title: "Track guidance · Loftline" }];
 

@@ -10,13 +10,10 @@
  * of two switches both being off are left out).
  */
 import { seededNormal } from "../math/vec";
+import { SKILL_LEVELS, skillPhrase, type SkillLevel } from "../words";
 
 /** Timing error (standard deviation) of a driver's steering switch, s, by skill level. */
-export interface SkillSigmas {
-  novice: number;
-  club: number;
-  expert: number;
-}
+export type SkillSigmas = Record<SkillLevel, number>;
 
 /** Defaults: estimates from timing research (engine.md): 60 ms, 35 ms, 15 ms. */
 export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
@@ -24,6 +21,16 @@ export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
   club: 0.035,
   expert: 0.015,
 });
+
+/**
+ * The timing errors in words, for pages that state their assumptions: "about 60 ms for a novice,
+ * 35 ms for a club racer, 15 ms for an expert".
+ * @param sigmas s by skill level (default: the engine's)
+ */
+export function timingErrorsPhrase(sigmas: Readonly<SkillSigmas> = DEFAULT_SKILL_SIGMAS): string {
+  const parts = SKILL_LEVELS.map((s) => `${Math.round(sigmas[s] * 1000)} ms for ${skillPhrase(s)}`);
+  return `about ${parts.slice(0, -1).join(", ")}, ${parts.at(-1)}`;
+}
 
 export interface SwitchWindow {
   /** Planned switch time, s after takeoff. */

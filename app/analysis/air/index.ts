@@ -10,7 +10,12 @@ export {
 } from "./attitude-inputs";
 export * from "./air-plan";
 export { nutationPeriod } from "./air-plan-linear";
-export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
+export {
+  DEFAULT_SKILL_SIGMAS,
+  timingErrorsPhrase,
+  type SkillSigmas,
+  type SwitchWindow,
+} from "./air-plan-robustness";
 export {
   pitchPulse,
   drivenSpinInertia,

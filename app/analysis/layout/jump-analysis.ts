@@ -18,7 +18,8 @@ import type { JumpProfile } from "../track/jump-profile";
 import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
 import { findLandingTurn, lineIndexAt, pointAt } from "../verdict/jump-turn";
 import { describeVerdicts, type VerdictInputs } from "../verdict/jump-verdicts";
-import type { JumpAnalysis, JumpPlan, SkillLevel } from "./layout-analysis-types";
+import type { JumpAnalysis, JumpPlan } from "./layout-analysis-types";
+import type { SkillLevel } from "../words";
 import type { JumpLap } from "../track/speed";
 import {
   DEFAULT_FAIL_COST_S,

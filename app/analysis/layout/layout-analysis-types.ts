@@ -7,27 +7,11 @@
  * degrees and every angle field ends in `Deg` (docs/decisions/0400). Every number is a model
  * estimate, not a safety certification.
  */
-import type { JumpPreset } from "../format/layout-document";
+import type { JumpPreset, JumpReason, SkillLevel } from "../words";
 import type { PlanInfeasibleReason } from "../air/air-plan";
 import type { PitchPulse } from "../air/air-plan-pulse";
 import type { SwitchWindow } from "../air/air-plan-robustness";
 import type { RuleReport } from "../track/rules";
-
-/** Driver skill levels the verdicts are given for. */
-export const SKILL_LEVELS = ["novice", "club", "expert"] as const;
-export type SkillLevel = (typeof SKILL_LEVELS)[number];
-
-/**
- * Why a jump is best taken straight:
- * - "no-turn": no turn starts close enough to the landing;
- * - "turn-too-gentle": the turn after the landing is too gentle to gain anything;
- * - "not-enough-airtime": the car is not in the air long enough to turn it;
- * - "too-risky": at this skill level a set-up costs more than it saves;
- * - "cannot-clear": the approach is too short to reach the landing;
- * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it).
- */
-export type JumpReason =
-  "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky" | "cannot-clear" | "flown-over";
 
 /** The verdict for one jump, one car class and one skill level. */
 export interface SkillVerdict {
@@ -35,7 +19,7 @@ export interface SkillVerdict {
   verdict: "set-up" | "straight";
   /** Null for "set-up". */
   reason: JumpReason | null;
-  /** Short reason in plain words, e.g. "no turn at the landing"; for a set-up, what to do. */
+  /** Short reason in plain words, e.g. "no turn at the landing"; for a set-up, what to do ("land with the nose 25° left"). */
   reasonText: string;
   /** One plain sentence for drivers. */
   text: string;

@@ -16,14 +16,10 @@ import { analyseJump } from "./jump-analysis";
 import type { JumpProfile } from "../track/jump-profile";
 import { pointAt } from "../verdict/jump-turn";
 import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
-import {
-  SKILL_LEVELS,
-  type ClassAnalysis,
-  type LayoutAnalysis,
-  type SkillLevel,
-} from "./layout-analysis-types";
+import type { ClassAnalysis, LayoutAnalysis } from "./layout-analysis-types";
+import { GUIDANCE_SET_IDS, quotedList, SKILL_LEVELS, type GuidanceSetId, type SkillLevel } from "../words";
 import { measureLayout, ruleMeasurements, type LayoutMeasures } from "../track/layout-measure";
-import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "../track/rules";
+import { checkRules, GUIDANCE_SETS, type GuidanceOverrides } from "../track/rules";
 import { lapSpeed } from "../track/speed";
 import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "../verdict/verdict";
 
@@ -137,7 +133,7 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   };
   const guidance = options.guidance ?? doc.guidance;
   if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance))
-    throw new RangeError('guidance: must be "club" or "national"');
+    throw new RangeError(`guidance: must be ${quotedList(GUIDANCE_SET_IDS)}`);
   const rulesFor = (m: LayoutMeasures) =>
     checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
   const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);

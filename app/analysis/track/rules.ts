@@ -5,7 +5,7 @@
  * These checks are estimates from a drawing. The sanctioning body's current rulebook decides.
  */
 
-export type GuidanceSetId = "club" | "national";
+import { GUIDANCE_SET_LABELS, type GuidanceSetId } from "../words";
 
 /** The values a guidance set checks against. */
 export interface GuidanceValues {
@@ -79,7 +79,7 @@ export const GUIDANCE_SETS: Record<
 > = {
   club: {
     id: "club",
-    label: "Club track guidance",
+    label: GUIDANCE_SET_LABELS.club,
     values: {
       minTrackWidth: 2.4,
       minLapLength: 120,
@@ -91,7 +91,7 @@ export const GUIDANCE_SETS: Record<
   },
   national: {
     id: "national",
-    label: "National-level track guidance",
+    label: GUIDANCE_SET_LABELS.national,
     values: {
       minTrackWidth: 3,
       minLapLength: 120,

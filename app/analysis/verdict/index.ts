@@ -1,4 +1,4 @@
-// Track length saved, the verdict per skill level and its words.
+// Track length saved, the verdict per skill level and its sentences (the words: ../words.ts).
 export * from "./verdict";
 export * from "./jump-verdicts";
 export { findLandingTurn, type TurnAfter } from "./jump-turn";

@@ -1,21 +1,12 @@
 /**
- * The verdict per skill level for an analysed jump (engine.md section 6), in plain words:
- * "set up in the air" with what to do, or "take it straight" with the reason. The numbers come
- * from verdict.ts (track length saved, time saved, expected gain, jumpVerdict).
+ * The verdict per skill level for an analysed jump (engine.md section 6), in plain words: the
+ * verdict's word (words.ts) with what to do or why, and one sentence for drivers with the
+ * numbers. These are the verdict's only sentences; the decision and the numbers come from
+ * verdict.ts (track length saved, time saved, expected gain, jumpVerdict).
  */
-import type { JumpAnalysis, JumpReason, SkillLevel, SkillVerdict } from "../layout/layout-analysis-types";
-import { SKILL_LEVELS } from "../layout/layout-analysis-types";
+import type { JumpAnalysis, SkillVerdict } from "../layout/layout-analysis-types";
+import { REASON_TEXT, SKILL_LEVELS, VERDICT_WORDS, type JumpReason, type SkillLevel } from "../words";
 import { expectedGain, jumpVerdict, timeSaved, trackLengthSaved } from "./verdict";
-
-/** Short reasons in plain words (flown-over names the other jump). */
-export const REASON_TEXT: Record<Exclude<JumpReason, "flown-over">, string> = {
-  "no-turn": "no turn at the landing",
-  "turn-too-gentle": "turn too gentle",
-  "not-enough-airtime": "not enough airtime",
-  "too-risky": "too risky at this skill",
-  "cannot-clear": "cannot clear: the approach is too short",
-};
-export const SET_UP_TEXT = "set up in the air";
 
 export interface VerdictInputs {
   /** Skill level copied into `result.verdict`. */
@@ -42,6 +33,10 @@ function steeringWords(steering: [number, number][]): string {
   return sides.length === 0 ? "keep the wheels straight" : `steer ${sides.join(", then ")}`;
 }
 
+/** "Take it straight: no turn at the landing": the verdict's word and the reason. */
+const says = (reason: Exclude<JumpReason, "flown-over">) =>
+  `${VERDICT_WORDS[reason === "cannot-clear" ? "cannot-clear" : "straight"]}: ${REASON_TEXT[reason]}`;
+
 function straightText(
   reason: JumpReason,
   r: JumpAnalysis,
@@ -53,17 +48,17 @@ function straightText(
     case "flown-over":
       return `Nothing to do here: the car flies over this jump from ${r.flownOverBy}.`;
     case "cannot-clear":
-      return `Cannot clear: the approach is too short (at most ${f1(r.approachMaxSpeed)} m/s; the landing needs ${f1(r.window?.min ?? NaN)} m/s).`;
+      return `${says(reason)} (at most ${f1(r.approachMaxSpeed)} m/s; the landing needs ${f1(r.window?.min ?? NaN)} m/s).`;
     case "no-turn":
       return r.nextTurnDistance === null
-        ? "Take it straight: no turn at the landing."
-        : `Take it straight: no turn at the landing (the next turn starts ${f1(r.nextTurnDistance)} m after touchdown).`;
+        ? `${says(reason)}.`
+        : `${says(reason)} (the next turn starts ${f1(r.nextTurnDistance)} m after touchdown).`;
     case "turn-too-gentle":
-      return `Take it straight: turn too gentle (${f1(r.turn?.angleDeg ?? 0)}\u00b0 after the landing gains too little).`;
+      return `${says(reason)} (${f1(r.turn?.angleDeg ?? 0)}\u00b0 after the landing gains too little).`;
     case "not-enough-airtime":
-      return `Take it straight: not enough airtime (${f2(r.airtime)} s in the air, too short to turn the car and land flat).`;
+      return `${says(reason)} (${f2(r.airtime)} s in the air, too short to turn the car and land flat).`;
     case "too-risky":
-      return `Take it straight: too risky at this skill (expected ${signed(gain)} a pass: ${Math.round(rate * 100)}% clean landings, ${f2(saved)} s saved by each).`;
+      return `${says(reason)} (expected ${signed(gain)} a pass: ${Math.round(rate * 100)}% clean landings, ${f2(saved)} s saved by each).`;
   }
 }
 
@@ -76,6 +71,8 @@ export function describeVerdicts({ skill, failCost, result: r }: VerdictInputs):
   const angle = turn ? turn.angleDeg * RAD : 0;
   const lengthSaved = plan && turn ? trackLengthSaved(turn.radius, psi, angle) : 0;
   const saved = plan && turn ? timeSaved(turn.radius, psi, angle, turn.entrySpeed) : 0;
+  // Where a set-up leaves the nose at touchdown, e.g. "25° left" (only read for a set-up).
+  const nose = plan && turn ? `${Math.round(Math.abs(plan.yawDeg))}\u00b0 ${turn.side}` : "";
   for (const level of SKILL_LEVELS) {
     const rate = plan ? plan.successRate[level] : 0;
     const gain = plan ? expectedGain(rate, saved, failCost) : 0;
@@ -89,7 +86,8 @@ export function describeVerdicts({ skill, failCost, result: r }: VerdictInputs):
       skill: level,
       verdict: "straight",
       reason,
-      reasonText: reason === "flown-over" ? `flown over from ${r.flownOverBy}` : REASON_TEXT[reason],
+      reasonText:
+        reason === "flown-over" ? `${REASON_TEXT[reason]} from ${r.flownOverBy}` : REASON_TEXT[reason],
       text: straightText(reason, r, gain, rate, saved),
       ...numbers,
     });
@@ -110,11 +108,10 @@ export function describeVerdicts({ skill, failCost, result: r }: VerdictInputs):
               skill: level,
               verdict: "set-up",
               reason: null,
-              reasonText: SET_UP_TEXT,
+              reasonText: `land with the nose ${nose}`,
               text:
-                `Set up in the air: ${steeringWords(plan!.steering)}, to land with the nose turned ` +
-                `${Math.round(Math.abs(plan!.yawDeg))}\u00b0 ${turn!.side} (expected ${signed(gain)} a pass, ` +
-                `${Math.round(rate * 100)}% clean landings).`,
+                `${VERDICT_WORDS["set-up"]}: ${steeringWords(plan!.steering)}, to land with the nose turned ` +
+                `${nose} (expected ${signed(gain)} a pass, ${Math.round(rate * 100)}% clean landings).`,
               ...numbers,
             };
     }

@@ -61,8 +61,14 @@ export function expectedGain(successRate: number, saved: number, failCost = DEFA
   return p * saved - (1 - p) * failCost;
 }
 
+import type { JumpReason } from "../words";
+
 export type JumpVerdictKind = "set-up" | "straight";
-export type StraightReason = "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky";
+/** The reasons this function decides; the analysis adds "cannot-clear" and "flown-over". */
+export type StraightReason = Extract<
+  JumpReason,
+  "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky"
+>;
 
 export interface JumpVerdictInput {
   landsIntoTurn: boolean;
@@ -82,48 +88,22 @@ export interface JumpVerdictInput {
 export interface JumpVerdict {
   verdict: JumpVerdictKind;
   reason: StraightReason | null;
-  /** One plain sentence for drivers. */
-  text: string;
 }
 
 /**
  * The verdict for one jump at one skill level: "set-up" when it lands into a turn and the
  * expected gain is above a small floor, otherwise "straight" with the first reason that applies
- * (no turn, turn too gentle, not enough airtime, too risky).
+ * (no turn, turn too gentle, not enough airtime, too risky). The sentences drivers read, with
+ * the numbers, are written from it by `describeVerdicts` (jump-verdicts.ts).
  */
 export function jumpVerdict(input: JumpVerdictInput): JumpVerdict {
   const minTurn = input.minTurnAngle ?? DEFAULT_MIN_TURN_ANGLE;
   const minAir = input.minAirtime ?? DEFAULT_MIN_AIRTIME_S;
   const floor = input.gainFloor ?? DEFAULT_GAIN_FLOOR_S;
-  const gain = `${input.expectedGain >= 0 ? "+" : ""}${input.expectedGain.toFixed(2)} s`;
-  const straight = (reason: StraightReason, text: string): JumpVerdict => ({
-    verdict: "straight",
-    reason,
-    text,
-  });
-  if (!input.landsIntoTurn)
-    return straight("no-turn", "Take it straight: no turn starts close enough to the landing.");
-  if (Math.abs(input.turnAngle) < minTurn) {
-    return straight(
-      "turn-too-gentle",
-      "Take it straight: the turn after the landing is too gentle to gain anything.",
-    );
-  }
-  if (input.airtime < minAir || input.planFeasible === false) {
-    return straight(
-      "not-enough-airtime",
-      "Take it straight: the car is not in the air long enough to turn it.",
-    );
-  }
-  if (!(input.expectedGain > floor)) {
-    return straight(
-      "too-risky",
-      `Take it straight: at this skill level a set-up costs more than it saves (expected ${gain} a lap).`,
-    );
-  }
-  return {
-    verdict: "set-up",
-    reason: null,
-    text: `Set the car up in the air for the turn (expected ${gain} a lap).`,
-  };
+  const straight = (reason: StraightReason): JumpVerdict => ({ verdict: "straight", reason });
+  if (!input.landsIntoTurn) return straight("no-turn");
+  if (Math.abs(input.turnAngle) < minTurn) return straight("turn-too-gentle");
+  if (input.airtime < minAir || input.planFeasible === false) return straight("not-enough-airtime");
+  if (!(input.expectedGain > floor)) return straight("too-risky");
+  return { verdict: "set-up", reason: null };
 }

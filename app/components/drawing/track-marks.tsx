@@ -4,8 +4,7 @@
  * a link to the jump's page).
  */
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
-import { VERDICT_WORDS } from "~/components/analysis/format";
-import { VERDICT_COLOUR, verdictPath } from "~/components/analysis/verdict-mark";
+import { VERDICT_MARK_OUTLINE, VERDICT_MARKS } from "~/lib/verdict-marks";
 import { PLAN } from "~/components/editor/colours";
 import { speedLabels } from "./drawing-geometry";
 import type { Pen } from "./track-pen";
@@ -129,7 +128,7 @@ export function JumpMarks({
       <a
         key={j.sectionId}
         href={jumpHref(j.sectionId)}
-        aria-label={`J${n} ${names[j.sectionId] ?? j.sectionId}: ${VERDICT_WORDS[j.verdict]}. ${j.label}`}
+        aria-label={`J${n} ${names[j.sectionId] ?? j.sectionId}: ${j.label}`}
       >
         {j.landing ? (
           <line
@@ -137,18 +136,18 @@ export function JumpMarks({
             y1={-j.lip[1]}
             x2={j.landing[0]}
             y2={-j.landing[1]}
-            stroke={VERDICT_COLOUR[j.verdict]}
+            stroke={PLAN.verdict[j.verdict]}
             strokeWidth={2}
             strokeDasharray="3 2"
             vectorEffect="non-scaling-stroke"
           />
         ) : null}
         <path
-          d={verdictPath(j.verdict)}
+          d={VERDICT_MARKS[j.verdict].path}
           transform={`translate(${j.lip[0]} ${-j.lip[1]}) scale(${r})`}
-          fill={VERDICT_COLOUR[j.verdict]}
+          fill={PLAN.verdict[j.verdict]}
           stroke="white"
-          strokeWidth={0.15}
+          strokeWidth={VERDICT_MARK_OUTLINE}
         />
         <text
           x={j.lip[0]}

@@ -4,9 +4,15 @@
  * stored overrides back through `storedOverridesSchema`.
  */
 import { z } from "zod";
-import type { GuidanceOverrides, GuidanceSetId, RuleId } from "~/analysis";
-
-export const GUIDANCE_SET_IDS = ["club", "national"] as const satisfies readonly GuidanceSetId[];
+import { parseNumberText } from "~/lib/number-text";
+import {
+  GUIDANCE_SET_IDS,
+  GUIDANCE_SET_LABELS,
+  wordList,
+  type GuidanceOverrides,
+  type GuidanceSetId,
+  type RuleId,
+} from "~/analysis";
 
 /** What each rule's field asks for, and the range a club may set (units as in the rule checks). */
 export const RULE_FIELDS: readonly {
@@ -74,8 +80,8 @@ function overrideField(f: (typeof RULE_FIELDS)[number]) {
     .trim()
     .transform((s, ctx) => {
       if (s === "") return undefined;
-      const n = Number(s.replace(",", "."));
-      if (!Number.isFinite(n)) {
+      const n = parseNumberText(s, f.unit === "m" ? "m" : undefined);
+      if (n === null) {
         ctx.addIssue({
           code: "custom",
           message: `${f.label} must be a number${unit ? " of metres" : ""}, like ${f.min + 1}.`,
@@ -98,7 +104,9 @@ const overrideShape = Object.fromEntries(RULE_FIELDS.map((f) => [f.id, overrideF
 
 /** The settings form: guidance set plus one optional text field per rule. */
 export const clubSettingsSchema = z.object({
-  guidanceSet: z.enum(GUIDANCE_SET_IDS, { error: "Choose the club or the national-level guidance." }),
+  guidanceSet: z.enum(GUIDANCE_SET_IDS, {
+    error: `Choose a guidance set: ${wordList(GUIDANCE_SET_IDS.map((id) => GUIDANCE_SET_LABELS[id]))}.`,
+  }),
   ...overrideShape,
 });
 

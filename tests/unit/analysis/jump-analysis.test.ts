@@ -26,7 +26,7 @@ describe("jump verdicts (issue 4 correctness)", () => {
     const expert = j.verdicts.expert;
     expect(expert.verdict).toBe("set-up");
     expect(expert.reason).toBeNull();
-    expect(expert.reasonText).toBe("set up in the air");
+    expect(expert.reasonText).toBe(`land with the nose ${Math.round(Math.abs(j.plan!.yawDeg))}° left`);
     expect(expert.text).toMatch(/^Set up in the air: steer .* to land with the nose turned \d+° left/);
     expect(expert.expectedGain).toBeGreaterThan(0.02);
     // The numbers behind it (engine.md section 6): R * psi, then / entry speed.
@@ -71,7 +71,8 @@ describe("jump verdicts (issue 4 correctness)", () => {
     expect(j.takeoffSpeed).toBeCloseTo(j.approachMaxSpeed, 2);
     expect(j.landing!.landedOn).toBe("short");
     expect(j.verdicts.club.reason).toBe("cannot-clear");
-    expect(j.verdicts.club.reasonText).toBe("cannot clear: the approach is too short");
+    expect(j.verdicts.club.reasonText).toBe("the approach is too short");
+    expect(j.verdicts.club.text).toMatch(/^Cannot clear: the approach is too short \(at most [\d.]+ m\/s; /);
     expect(j.plan).toBeNull();
   });
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { CAR_PRESETS } from "~/analysis/format/cars";
 import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
 import { analyseLayout, LINE_SPACING } from "~/analysis/layout/layout-analysis";
-import { SKILL_LEVELS } from "~/analysis/layout/layout-analysis-types";
+import { SKILL_LEVELS } from "~/analysis/words";
 import { BIG_DOUBLE, ovalWithJump, ruleOval } from "./analysis-fixtures";
 
 const G = 9.81;
