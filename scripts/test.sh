@@ -1,26 +1,31 @@
 #!/usr/bin/env bash
-# `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
+# `npm test`: every test. Installs Debian's chromium and poppler-utils when missing, then runs
 # the unit and integration tests (vitest), builds the app and runs the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
 
-ensure_chromium() {
-  if [ -x /usr/bin/chromium ]; then
+# Debian packages the tests need: chromium for the browser tests, poppler-utils (pdftotext) for
+# reading the text of the PDFs the app draws. Installed with apt-get when missing.
+ensure_debian_tools() {
+  local missing=()
+  [ -x /usr/bin/chromium ] || missing+=(chromium)
+  [ -x /usr/bin/pdftotext ] || missing+=(poppler-utils)
+  if [ "${#missing[@]}" -eq 0 ]; then
     return 0
   fi
-  echo "==> /usr/bin/chromium is missing: installing Debian's chromium with apt-get"
+  echo "==> missing ${missing[*]}: installing Debian's packages with apt-get"
   local sudo=""
   if [ "$(id -u)" -ne 0 ]; then
     if command -v sudo >/dev/null 2>&1; then
       sudo="sudo"
     else
-      echo "Not root and no sudo: install chromium yourself (apt-get install -y chromium)." >&2
+      echo "Not root and no sudo: install them yourself (apt-get install -y ${missing[*]})." >&2
       return 1
     fi
   fi
   $sudo apt-get update -q &&
-    DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -q --no-install-recommends chromium
+    DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -q --no-install-recommends "${missing[@]}"
 }
 
 declare -a names=() results=() seconds=()
@@ -38,7 +43,7 @@ stage() {
   return "$code"
 }
 
-stage "chromium" ensure_chromium
+stage "chromium, poppler-utils" ensure_debian_tools
 # Each runner's output is also kept, to add up its test counts for the closing line.
 runner_log=$(mktemp)
 trap 'rm -f "$runner_log"' EXIT

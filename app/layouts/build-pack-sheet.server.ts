@@ -15,7 +15,7 @@ import {
 import type { StakeRow } from "~/lib/build-pack-rows";
 import { STAKE_KIND_LABELS } from "~/lib/build-pack-words";
 import { JUMP_PRESET_LABELS } from "~/lib/editor/jump-presets";
-import type { BuildSettings } from "./build-pack.server";
+import type { BuildSettings } from "./build-pack-settings.server";
 import { geoLocator } from "./build-pack-geo.server";
 
 const DEG = 180 / Math.PI;

@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "~/db/client.server";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { layouts } from "~/db/schema";
@@ -21,17 +21,23 @@ const ROUTES = [
   ["earthworks PDF", "/earthworks.pdf", earthLoader],
 ] as const;
 
-async function publishedSummer() {
+type Setup = Awaited<ReturnType<typeof makeClubWithRoles>> & {
+  layout: Awaited<ReturnType<typeof createLayoutFromDocument>>;
+};
+let setup: Setup;
+
+/** One club and one published summer layout for the file (making users costs a bcrypt hash each). */
+beforeAll(async () => {
   const people = await makeClubWithRoles();
   const layout = await createLayoutFromDocument(people.club.id, SUMMER_LAYOUT, people.director.id);
   const db = await getDb();
   await db.update(layouts).set({ status: "published" }).where(eq(layouts.id, layout.id));
-  return { ...people, layout };
-}
+  setup = { ...people, layout };
+});
 
 describe("build pack: who may see it", () => {
   it("answers directors only: 403 for a marshal, a driver and an outsider, sign-in for a visitor, 404 for no layout", async () => {
-    const { director, marshal, driver, outsider, layout } = await publishedSummer();
+    const { director, marshal, driver, outsider, layout } = setup;
     for (const [name, suffix, loader] of ROUTES) {
       const path = `/layouts/${layout.id}/build${suffix}`;
       const call = (cookie?: string, id = layout.id) =>
@@ -63,7 +69,7 @@ describe("build pack: settings from the address", () => {
     ["version=99", "version", 404],
   ];
   it("names the field that is wrong, in the PDF and CSV answers and beside the page's form", async () => {
-    const { director, layout } = await publishedSummer();
+    const { director, layout } = setup;
     for (const [query, field, status] of cases) {
       const csv = await run(() =>
         csvLoader(
@@ -87,7 +93,7 @@ describe("build pack: settings from the address", () => {
   });
 
   it("fills in the defaults (A at the driver stand, B the farthest site point) and accepts typed coordinates", async () => {
-    const { director, layout } = await publishedSummer();
+    const { director, layout } = setup;
     const page = await run(() =>
       pageLoader(args(getRequest(`/layouts/${layout.id}/build`, director.cookie), { layoutId: layout.id })),
     );
@@ -112,7 +118,8 @@ describe("build pack: settings from the address", () => {
   });
 
   it("makes the sheets for a saved version named in the address", async () => {
-    const { director, layout } = await publishedSummer();
+    const { director, club } = setup;
+    const layout = await createLayoutFromDocument(club.id, SUMMER_LAYOUT, director.id);
     const wider = { ...SUMMER_LAYOUT, trackWidth: 5 };
     await saveLayoutDocument(layout.id, layout.version, wider, director.id);
     const sheetOf = async (query: string) => {

@@ -7,6 +7,7 @@ import {
   pointFromOffsets,
   trueBearing,
 } from "~/analysis/build/datum";
+import { jumpStakePoints } from "~/analysis/build/jump-stakes";
 import { markingOut, stationDistances } from "~/analysis/build/stakes";
 import type { LayoutDocument } from "~/analysis/format/layout-document";
 import { layoutGeometry, resolveSections, type CentreLine } from "~/analysis/track/geometry";
@@ -149,5 +150,34 @@ describe("stake positions", () => {
       expect(gap).toBeGreaterThan(0);
       expect(gap).toBeLessThanOrEqual(5 + 1e-9);
     }
+  });
+});
+
+describe("jump points", () => {
+  it("names a tabletop's four corners and numbers a whoops row's bumps", () => {
+    const table = jumpStakePoints(
+      jumpProfile({
+        id: "t",
+        kind: "jump",
+        preset: "tabletop",
+        faceHeight: 0.4,
+        faceAngleDeg: 30,
+        tableLength: 2.5,
+        landingAngleDeg: 25,
+      }),
+      false,
+    );
+    // Worked by hand: face run 0.4 / tan 30° = 0.692820 m, table 2.5 m, landing run 0.4 / tan 25° = 0.857803 m.
+    expect(table.map((p) => [p.code, round(p.d, 6), p.h])).toEqual([
+      ["TOE", 0, 0],
+      ["LIP", 0.69282, 0.4],
+      ["CREST", 3.19282, 0.4],
+      ["LAND", 4.050623, 0],
+    ]);
+    const whoops = jumpStakePoints(
+      jumpProfile({ id: "w", kind: "jump", preset: "whoops", count: 4, bumpHeight: 0.15, spacing: 1 }),
+      true,
+    );
+    expect(whoops.map((p) => p.code)).toEqual(["TOE", "LIP", "CREST", "LAND", "BUMP3", "BUMP4", "FOOT"]);
   });
 });
