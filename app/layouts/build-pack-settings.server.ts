@@ -2,7 +2,7 @@
  * The build pack's settings: the site points a datum stake can be set on, the settings with their
  * defaults filled in and checked against the layout, and the settings as a query string again.
  */
-import type { LayoutDocument } from "~/analysis";
+import { MAX_STATIONS, smallestSpacing, type LayoutDocument } from "~/analysis";
 import { DATUM_CHOICE_LABELS } from "~/lib/build-pack-words";
 import type { FieldErrors } from "~/lib/forms";
 import { BUILD_LIMITS, type BuildPackQuery } from "~/lib/schemas/build-pack";
@@ -60,6 +60,13 @@ export function resolveSettings(
   if (a && b && Math.hypot(b.x - a.x, b.y - a.y) < 1) {
     errors.b = ["Put datum B at least 1 m from datum A (a longer line sets out more accurately)."];
   }
+  const spacing = q.spacing ?? BUILD_LIMITS.spacing.default;
+  const least = smallestSpacing(doc);
+  if (spacing < least) {
+    errors.spacing = [
+      `At ${spacing} m this lap needs more than ${MAX_STATIONS} stations; use a spacing of at least ${Math.ceil(least * 10) / 10} m.`,
+    ];
+  }
   if (!a || !b || Object.keys(errors).length) return { ok: false, status: 400, errors };
   const geo =
     q.lat !== undefined && q.lon !== undefined
@@ -71,7 +78,7 @@ export function resolveSettings(
       version: q.version ?? null,
       a,
       b,
-      spacing: q.spacing ?? BUILD_LIMITS.spacing.default,
+      spacing,
       truck: q.truck ?? BUILD_LIMITS.truck.default,
       geo,
     },

@@ -146,11 +146,11 @@ export type EarthRow = {
 export type EarthTotals = { fill: number; cut: number; fillLoads: number; cutLoads: number; truck: number };
 
 export const earthColumns: SheetColumn[] = [
-  { title: "Jump", width: 110 },
+  { title: "Jump", width: 100 },
   { title: "Kind", width: 55 },
   { title: "Length (m)", width: 50, right: true },
   { title: "Highest (m)", width: 52, right: true },
-  { title: "Long section (m²)", width: 70, right: true },
+  { title: "Long section (m²)", width: 80, right: true },
   { title: "Fill (m³)", width: 48, right: true },
   { title: "Cut (m³)", width: 48, right: true },
   { title: "Loads in", width: 45, right: true },

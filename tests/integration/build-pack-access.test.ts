@@ -135,3 +135,36 @@ describe("build pack: settings from the address", () => {
     expect((await sheetOf("")).versionLabel).toBe("version 2");
   });
 });
+
+describe("build pack: a lap too long for the spacing", () => {
+  it("names the spacing and the least that fits instead of listing thousands of stations", async () => {
+    const { director, club } = setup;
+    const sections = Array.from({ length: 10 }, (_, k) =>
+      SUMMER_LAYOUT.sections.map((section) => ({ ...section, id: `${section.id}-${k}` })),
+    ).flat();
+    const long = await createLayoutFromDocument(
+      club.id,
+      { ...SUMMER_LAYOUT, name: "Long", sections },
+      director.id,
+    );
+    const res = await run(() =>
+      csvLoader(
+        args(getRequest(`/layouts/${long.id}/build/marking.csv?spacing=0.5`, director.cookie), {
+          layoutId: long.id,
+        }),
+      ),
+    );
+    expect(res.status).toBe(400);
+    expect(String(res.data)).toMatch(
+      /^spacing: At 0\.5 m this lap needs more than 3000 stations; use a spacing of at least \d/m,
+    );
+    const ok = await run(() =>
+      csvLoader(
+        args(getRequest(`/layouts/${long.id}/build/marking.csv?spacing=5`, director.cookie), {
+          layoutId: long.id,
+        }),
+      ),
+    );
+    expect(ok.status).toBe(200);
+  });
+});

@@ -48,6 +48,20 @@ function stepDegrees(latDeg: number, north: number, east: number) {
 }
 
 describe("build pack files", () => {
+  it("prints a name the PDF font cannot show with its plain letters and question marks", async () => {
+    const { club, director } = await makeClubWithRoles();
+    const named = await createLayoutFromDocument(
+      club.id,
+      { ...SUMMER_LAYOUT, name: "Été 🏁 Ридж" },
+      director.id,
+    );
+    const request = getRequest(`/layouts/${named.id}/build/earthworks.pdf`, director.cookie);
+    const res = (await earthLoader(args(request, { layoutId: named.id }))) as Response;
+    expect(res.status).toBe(200);
+    expect(res.headers.get("Content-Disposition")).toBe('attachment; filename="ete-v1-earthworks.pdf"');
+    expect(pdfText(new Uint8Array(await res.arrayBuffer()))).toContain("Earthworks sheet: Été ? ????");
+  });
+
   it("marking.pdf is a PDF whose text carries the datums, the stakes with the engine's figures and the cautions", async () => {
     const res = await fetchFile(pdfLoader, "marking.pdf", "a=stand&b=corner-3&spacing=5");
     expect(res.status).toBe(200);

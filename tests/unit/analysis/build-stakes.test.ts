@@ -8,7 +8,7 @@ import {
   trueBearing,
 } from "~/analysis/build/datum";
 import { jumpStakePoints } from "~/analysis/build/jump-stakes";
-import { markingOut, stationDistances } from "~/analysis/build/stakes";
+import { markingOut, MAX_STATIONS, stationDistances } from "~/analysis/build/stakes";
 import type { LayoutDocument } from "~/analysis/format/layout-document";
 import { layoutGeometry, resolveSections, type CentreLine } from "~/analysis/track/geometry";
 import { jumpProfile, profileHeightAt } from "~/analysis/track/jump-profile";
@@ -143,7 +143,7 @@ describe("stake positions", () => {
 
   it("places a station on every section boundary and no two closer than a quarter spacing within a section", () => {
     const sections = resolveSections(SUMMER_LAYOUT);
-    const stations = stationDistances(sections, 1000, 5);
+    const stations = stationDistances(sections, 5);
     for (const sec of sections) expect(stations.some((st) => st.s === sec.startS)).toBe(true);
     for (let i = 1; i < stations.length; i++) {
       const gap = stations[i].s - stations[i - 1].s;
@@ -179,5 +179,23 @@ describe("jump points", () => {
       true,
     );
     expect(whoops.map((p) => p.code)).toEqual(["TOE", "LIP", "CREST", "LAND", "BUMP3", "BUMP4", "FOOT"]);
+  });
+});
+
+describe("limits", () => {
+  it("stakes an open loop's end and refuses more stations than a sheet lists", () => {
+    const open = { ...SUMMER_LAYOUT, sections: SUMMER_LAYOUT.sections.slice(0, -2) };
+    const sheet = markingOut(open, { x: 30, y: -3 }, { x: 0, y: 38 }, 5);
+    expect(sheet.closureGap).toBeGreaterThan(1);
+    const last = sheet.stations[sheet.stations.length - 1].centre;
+    const end = resolveSections(open).at(-1)!.end;
+    expect(Math.hypot(last.x - end.x, last.y - end.y)).toBeLessThan(1e-9);
+    const long = {
+      ...SUMMER_LAYOUT,
+      sections: Array.from({ length: 20 }, () => SUMMER_LAYOUT.sections).flat(),
+    };
+    expect(() => markingOut(long, { x: 30, y: -3 }, { x: 0, y: 38 }, 0.5)).toThrow(
+      new RegExp(`more than ${MAX_STATIONS} stations`),
+    );
   });
 });
