@@ -2,7 +2,7 @@ import { data, Link } from "react-router";
 import type { Route } from "./+types/build-pack";
 import { BuildPackForm } from "~/components/build-pack/build-pack-form";
 import { BuildPackSheets } from "~/components/build-pack/build-pack-sheets";
-import { buttonClass } from "~/components/ui/button";
+import { Button, buttonClass } from "~/components/ui/button";
 import { loadBuildPack, settingsQuery, versionLabel } from "~/layouts/build-pack.server";
 import { buildSheet } from "~/layouts/build-pack-sheet.server";
 import { BUILD_PACK_TITLE } from "~/lib/build-pack-words";
@@ -61,6 +61,9 @@ export default function BuildPackPage({ loaderData }: Route.ComponentProps) {
       </header>
       {sheet ? (
         <nav aria-label="Downloads" className="flex flex-wrap gap-2 no-print">
+          <Button type="button" onClick={() => window.print()}>
+            Print the sheets
+          </Button>
           <a className={buttonClass("secondary")} href={`${base}/marking.pdf?${query}`} download>
             Marking-out sheet (PDF)
           </a>

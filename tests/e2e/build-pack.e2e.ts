@@ -90,6 +90,8 @@ describe("build pack in the browser", () => {
     expect(await spacing.getAttribute("aria-invalid")).toBe("true");
     expect(await page.getByText("The station spacing must be at least 0.5 m.").count()).toBe(1);
     expect(await page.getByRole("heading", { name: "Marking-out sheet" }).count()).toBe(0);
+    await page.goto(url(`/layouts/${id}/build?colour=red`));
+    expect(await page.getByText("colour: is not a setting of the build pack.").count()).toBe(1);
 
     const driverPage = await browser.newPage();
     await login(driverPage, demoAccount("driver"));

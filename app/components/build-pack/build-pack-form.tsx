@@ -4,6 +4,22 @@ import { Field, SelectField, type FieldErrors } from "~/components/ui/form";
 import { DATUM_CHOICE_LABELS } from "~/lib/build-pack-words";
 import { BUILD_LIMITS } from "~/lib/schemas/build-pack";
 
+const FIELDS = [
+  "version",
+  "a",
+  "ax",
+  "ay",
+  "b",
+  "bx",
+  "by",
+  "spacing",
+  "truck",
+  "lat",
+  "lon",
+  "orient",
+  "trueBearing",
+];
+
 type Props = {
   choices: { key: string; label: string; x: number; y: number }[];
   versions: { number: number; createdAt: string; note: string | null }[];
@@ -18,6 +34,8 @@ type Props = {
 export function BuildPackForm({ choices, versions, values, errors }: Props) {
   const v = (name: string) => values[name] ?? "";
   const e = (name: string) => errors?.[name];
+  // Problems with no field of their own here (an address with a setting this form does not have).
+  const others = Object.entries(errors ?? {}).filter(([field]) => !FIELDS.includes(field));
   const datum = (name: "a" | "b") => (
     <fieldset className="space-y-3 rounded-md border border-sand-200 p-3">
       <legend className="px-1 text-sm font-semibold">Datum {name.toUpperCase()}</legend>
@@ -60,7 +78,16 @@ export function BuildPackForm({ choices, versions, values, errors }: Props) {
       noValidate
     >
       <h2 className="text-lg font-semibold">Settings</h2>
-      {e("form") ? <p className="text-sm text-danger-700">{e("form")!.join(" ")}</p> : null}
+      {others.length ? (
+        <div role="alert" className="text-sm text-danger-700">
+          {others.map(([field, messages]) => (
+            <p key={field}>
+              {field === "form" ? "" : `${field}: `}
+              {(messages ?? []).join(" ")}
+            </p>
+          ))}
+        </div>
+      ) : null}
       <SelectField label="Layout version" name="version" defaultValue={v("version")} errors={e("version")}>
         <option value="">The layout as it is now</option>
         {versions.map((x) => (
