@@ -68,3 +68,16 @@ export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
  *   `canonicalJson`, `fnv1a64`.
  */
 export * from "./layout";
+
+/*
+ * Build pack (build/): marking out and earthworks. Bearings there are surveyors' bearings:
+ * radians clockwise from the plan's +Y ("grid north", up the page), not the engine's headings.
+ * - `baseline(a, b)`, `measureFromDatum(line, x, y)` -> `{ distance, bearing, along, offset }`
+ *   (offset positive to the right of A to B), `pointFromBearing`, `pointFromOffsets`,
+ *   `planBearing(dx, dy)`, `trueBearing(planBearing, line, { gridTrueBearing } | { abTrueBearing })`.
+ * - `markingOut(doc, a, b, spacing)` -> centre-line stations with both edges, turn centres and
+ *   radii, jump points with heights, every stake measured from the datums.
+ * - `profileEarth(d, h, width, sideSlope?)`, `earthworks(doc, truckLoad)` -> fill and cut per jump
+ *   and in total, m³, and truck loads.
+ */
+export * from "./build";
