@@ -58,3 +58,15 @@ export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
  *   `canonicalJson`, `fnv1a64`.
  */
 export * from "./layout";
+
+/*
+ * Marshal risk (marshal/; docs/engine.md "Marshal risk")
+ * - `marshalPlan(doc, analysis, { classIds?, cars?, settings?, suggest? })` -> `MarshalPlan`: overshoot
+ *   zones beyond jumps (J1..) and run-off zones past corners (T1..) as wedges and polygons in plan m,
+ *   their merged `keepOut` area, hotspots (H1.., score 1 to 5, reason), the layout's marshal points
+ *   (M1..) with stretch, watch list, jumps, turns and warnings, and `suggested` points when asked.
+ * - `MARSHAL_SETTINGS` (defaults, ranges, sources), `marshalSettings(overrides)`, the words
+ *   (`HOTSPOT_KIND_WORDS`, `scoreWords`, `MARSHAL_NOTE`), and the hand-checkable reaches
+ *   `overshootReach(profile, speed, decel)` and `escapeReach(speed, decel)` (m, m/s, m/s^2).
+ */
+export * from "./marshal";

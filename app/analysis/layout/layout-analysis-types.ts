@@ -12,6 +12,7 @@ import type { PlanInfeasibleReason } from "../air/air-plan";
 import type { PitchPulse } from "../air/air-plan-pulse";
 import type { SwitchWindow } from "../air/air-plan-robustness";
 import type { RuleReport } from "../track/rules";
+import type { MarshalPlan } from "../marshal/marshal-types";
 
 /** Driver skill levels the verdicts are given for. */
 export const SKILL_LEVELS = ["novice", "club", "expert"] as const;
@@ -195,6 +196,12 @@ export interface LayoutAnalysis {
   startStraight: { length: number; sectionIds: string[] };
   rules: RuleReport;
   classes: ClassAnalysis[];
+  /**
+   * The marshal risk over every class (marshal/marshal-plan.ts): zones, hotspots and the layout's
+   * own marshal points with warnings; no suggested points (ask `marshalPlan` for those). Null when
+   * the analysis was asked to leave it out.
+   */
+  risk: MarshalPlan | null;
   /** Plain-words caveat shown with every analysis. */
   note: string;
 }

@@ -23,7 +23,16 @@ import {
   type SkillLevel,
 } from "./layout-analysis-types";
 import { measureLayout, ruleMeasurements, type LayoutMeasures } from "../track/layout-measure";
-import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "../track/rules";
+import { jumpRuleMeasurements } from "./jump-rules";
+import { marshalRisk } from "../marshal/marshal-plan";
+import { marshalSettings, type MarshalSettings } from "../marshal/settings";
+import {
+  checkRules,
+  GUIDANCE_SETS,
+  guidanceValues,
+  type GuidanceOverrides,
+  type GuidanceSetId,
+} from "../track/rules";
 import { lapSpeed } from "../track/speed";
 import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "../verdict/verdict";
 
@@ -48,6 +57,8 @@ export interface AnalyseOptions {
   failCost?: number;
   /** Monte Carlo seed of the plans' success rates (default 1). */
   seed?: number;
+  /** A club's marshal settings for `risk` (default: the defaults), or false to leave the risk out. */
+  marshal?: Partial<MarshalSettings> | false;
 }
 
 /** Shown with every analysis. */
@@ -89,11 +100,11 @@ function planSection(
   doc: LayoutDocument,
   m: LayoutMeasures,
   skill: SkillLevel,
+  keep: number[],
   rules: LayoutAnalysis["rules"],
-) {
+): Omit<LayoutAnalysis, "classes" | "risk"> {
   const { line } = m.geometry;
-  const keep = downsample(line.count, line.s);
-  const base: Omit<LayoutAnalysis, "classes"> = {
+  const base: Omit<LayoutAnalysis, "classes" | "risk"> = {
     name: doc.name,
     lapLength: m.geometry.lapLength,
     closure: { gap: m.geometry.closure.gap, headingDeg: m.geometry.closure.headingDeg },
@@ -116,7 +127,7 @@ function planSection(
     rules,
     note: ANALYSIS_NOTE,
   };
-  return { base, keep };
+  return base;
 }
 
 /**
@@ -138,9 +149,29 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   const guidance = options.guidance ?? doc.guidance;
   if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance))
     throw new RangeError('guidance: must be "club" or "national"');
-  const rulesFor = (m: LayoutMeasures) =>
-    checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
-  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
+  const overrides = options.overrides ?? {};
+  const limits = guidanceValues(guidance, overrides);
+  const rulesFor = (m: LayoutMeasures, classes: readonly ClassAnalysis[]) =>
+    checkRules(
+      { ...ruleMeasurements(doc, m), ...jumpRuleMeasurements(classes, limits) },
+      guidance,
+      overrides,
+    );
+  const marshal = options.marshal === false ? false : marshalSettings(options.marshal);
+  const riskFor = (analysis: Omit<LayoutAnalysis, "risk">) =>
+    marshal === false
+      ? null
+      : marshalRisk(
+          doc,
+          analysis,
+          classes.map((c, i) => ({ ...c, analysis: analysis.classes[i] })),
+          marshal,
+          false,
+        );
+  const compute = () => {
+    const analysis = computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
+    return { ...analysis, risk: riskFor(analysis) };
+  };
   if (!cache) return compute();
   // The document's plain JSON text: a document written with its keys in another order only misses.
   const key = cacheKey("layout", {
@@ -148,8 +179,9 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
     classes: classes.map((c) => [c.id, hashOnce(c.car)]),
     skill,
     guidance,
-    overrides: options.overrides ?? {},
+    overrides,
     settings,
+    marshal,
   });
   return cache.memo(key, compute);
 }
@@ -158,13 +190,12 @@ function computeAnalysis(
   doc: LayoutDocument,
   classes: { id: string; car: CarParams }[],
   skill: SkillLevel,
-  rulesFor: (m: LayoutMeasures) => LayoutAnalysis["rules"],
+  rulesFor: (m: LayoutMeasures, classes: readonly ClassAnalysis[]) => LayoutAnalysis["rules"],
   settings: { skillSigmas: SkillSigmas; lookaheadS: number; failCost: number; seed: number },
   cache: AnalysisCache | undefined,
-): LayoutAnalysis {
+): Omit<LayoutAnalysis, "risk"> {
   const m = measureLayout(doc);
-  const rules = rulesFor(m);
-  const { base, keep } = planSection(doc, m, skill, rules);
+  const keep = downsample(m.geometry.line.count, m.geometry.line.s);
   const { sections, line } = m.geometry;
   const g = STANDARD_GRAVITY;
   const jumpWindow = cache
@@ -190,5 +221,6 @@ function computeAnalysis(
       cannotClear: jumps.filter((j) => j.cannotClear).map((j) => j.sectionId),
     };
   });
+  const base = planSection(doc, m, skill, keep, rulesFor(m, result));
   return { ...base, classes: result };
 }
