@@ -44,6 +44,7 @@ function bestSpot(
   share: number,
   shift: number,
   taken: ReadonlySet<Spot>,
+  coverWeight: number,
 ): Spot | null {
   const L = input.lapLength;
   const slot = input.hotspots.filter((h) => Math.abs(lapDelta(t, h.s, L)) <= share / 2);
@@ -53,7 +54,7 @@ function bestSpot(
     const moved = Math.abs(lapDelta(t, spot.s, L));
     if (moved > shift || taken.has(spot)) continue;
     let value = -moved - 0.1 * spot.edgeDistance;
-    for (const h of slot) if (covers(spot, h, input.coverDistance)) value += 100 * h.score;
+    for (const h of slot) if (covers(spot, h, input.coverDistance)) value += coverWeight * h.score;
     if (value > bestValue) {
       bestValue = value;
       best = spot;
@@ -95,8 +96,10 @@ export function placeMarshals(input: PlacementInput): Spot[] {
     const taken = new Set<Spot>();
     for (let k = 0; k < n; k++) {
       const t = ((p / PHASES) * share + k * share) % L;
-      // Where zones cover every spot near the target, a point may move up to half a share (less even).
-      const spot = bestSpot(input, t, share, shift, taken) ?? bestSpot(input, t, share, share / 2, taken);
+      // Where zones cover every spot near the target, a point may move up to half a share: then
+      // as little as it can (evenness first, hotspots only to break ties).
+      const spot =
+        bestSpot(input, t, share, shift, taken, 100) ?? bestSpot(input, t, share, share / 2, taken, 0.01);
       if (!spot) continue;
       taken.add(spot);
       chosen.push({ spot, moved: Math.abs(lapDelta(t, spot.s, L)) });

@@ -4,8 +4,9 @@
  * any of them. Plan metres.
  *
  * The track the car was on is not "other track": from the zone's origin the lap is followed
- * forward through the zone until it has left the zone for more than OWN_GAP; everything of the
- * lap met after that, or before the origin, is another lane.
+ * forward through the zone until it has left the zone for more than OWN_GAP or turned more than
+ * 90 degrees from the zone's direction; everything of the lap met after that, or before the
+ * origin, is another lane (the second half of a hairpin, the lane back from it).
  */
 import { cyclicRuns, insidePolygon } from "../track/geometry-checks";
 import type { PlanPoint, ZoneContents } from "./marshal-types";
@@ -98,6 +99,8 @@ export function zoneContents(
   let away = 0;
   for (let step = 0; step < N; step++) {
     const i = (start + step) % N;
+    // Track that turns back towards the origin is another lane for a car that went straight on.
+    if (Math.cos(line.heading[i] - w.heading) < -1e-9) break;
     if (inside[i]) {
       entered = true;
       away = 0;
