@@ -197,9 +197,9 @@ export interface LayoutAnalysis {
   rules: RuleReport;
   classes: ClassAnalysis[];
   /**
-   * The marshal risk over every class (marshal/marshal-plan.ts): zones, hotspots and the layout's
-   * own marshal points with warnings; no suggested points (ask `marshalPlan` for those). Null when
-   * the analysis was asked to leave it out.
+   * The marshal risk over every class (marshal/marshal-plan.ts), when asked for with
+   * `options.marshal`: zones, hotspots and the layout's own marshal points with warnings; no
+   * suggested points (ask `marshalPlan` for those). Null otherwise.
    */
   risk: MarshalPlan | null;
   /** Plain-words caveat shown with every analysis. */

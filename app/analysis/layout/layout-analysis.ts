@@ -15,7 +15,7 @@ import type { ResolvedSection } from "../track/geometry";
 import { analyseJump } from "./jump-analysis";
 import type { JumpProfile } from "../track/jump-profile";
 import { pointAt } from "../verdict/jump-turn";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
+import { ballisticJumpWindow, STANDARD_GRAVITY, type JumpWindow } from "../track/lap-jumps";
 import {
   SKILL_LEVELS,
   type ClassAnalysis,
@@ -57,7 +57,10 @@ export interface AnalyseOptions {
   failCost?: number;
   /** Monte Carlo seed of the plans' success rates (default 1). */
   seed?: number;
-  /** A club's marshal settings for `risk` (default: the defaults), or false to leave the risk out. */
+  /**
+   * Adds the marshal risk as `risk` with these marshal settings (`{}` for the defaults); left out
+   * (null) by default, as it would double the time of an edit's re-analysis (docs/decisions/0704).
+   */
   marshal?: Partial<MarshalSettings> | false;
 }
 
@@ -157,8 +160,9 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
       guidance,
       overrides,
     );
-  const marshal = options.marshal === false ? false : marshalSettings(options.marshal);
-  const riskFor = (analysis: Omit<LayoutAnalysis, "risk">) =>
+  const marshal =
+    options.marshal === undefined || options.marshal === false ? false : marshalSettings(options.marshal);
+  const riskFor: RiskFor = (analysis, jumpWindow) =>
     marshal === false
       ? null
       : marshalRisk(
@@ -166,12 +170,9 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
           analysis,
           classes.map((c, i) => ({ ...c, analysis: analysis.classes[i] })),
           marshal,
-          false,
+          { suggest: false, jumpWindow },
         );
-  const compute = () => {
-    const analysis = computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
-    return { ...analysis, risk: riskFor(analysis) };
-  };
+  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, riskFor, settings, cache);
   if (!cache) return compute();
   // The document's plain JSON text: a document written with its keys in another order only misses.
   const key = cacheKey("layout", {
@@ -186,22 +187,30 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   return cache.memo(key, compute);
 }
 
+/** The marshal risk of the analysis so far, with the lap model's (memoised) speed windows. */
+type RiskFor = (
+  analysis: Omit<LayoutAnalysis, "risk">,
+  jumpWindow: (p: JumpProfile) => JumpWindow,
+) => LayoutAnalysis["risk"];
+
 function computeAnalysis(
   doc: LayoutDocument,
   classes: { id: string; car: CarParams }[],
   skill: SkillLevel,
   rulesFor: (m: LayoutMeasures, classes: readonly ClassAnalysis[]) => LayoutAnalysis["rules"],
+  riskFor: RiskFor,
   settings: { skillSigmas: SkillSigmas; lookaheadS: number; failCost: number; seed: number },
   cache: AnalysisCache | undefined,
-): Omit<LayoutAnalysis, "risk"> {
+): LayoutAnalysis {
   const m = measureLayout(doc);
   const keep = downsample(m.geometry.line.count, m.geometry.line.s);
   const { sections, line } = m.geometry;
   const g = STANDARD_GRAVITY;
-  const jumpWindow = cache
-    ? (_s: ResolvedSection, p: JumpProfile) =>
-        cache.memo(cacheKeyOf("lap-window", hashOnce(p), g), () => ballisticJumpWindow(p, g))
-    : undefined;
+  const windowOf = (p: JumpProfile) =>
+    cache
+      ? cache.memo(cacheKeyOf("lap-window", hashOnce(p), g), () => ballisticJumpWindow(p, g))
+      : ballisticJumpWindow(p, g);
+  const jumpWindow = cache ? (_s: ResolvedSection, p: JumpProfile) => windowOf(p) : undefined;
   const result: ClassAnalysis[] = classes.map(({ id, car }) => {
     const lap = lapSpeed(m.geometry, car, { g, jumpWindow });
     const jumps = lap.jumps.map((j) =>
@@ -221,6 +230,6 @@ function computeAnalysis(
       cannotClear: jumps.filter((j) => j.cannotClear).map((j) => j.sectionId),
     };
   });
-  const base = planSection(doc, m, skill, keep, rulesFor(m, result));
-  return { ...base, classes: result };
+  const analysis = { ...planSection(doc, m, skill, keep, rulesFor(m, result)), classes: result };
+  return { ...analysis, risk: riskFor(analysis, windowOf) };
 }

@@ -14,3 +14,4 @@ export { ratioScore } from "./hotspots";
 export { speedScore } from "./turn-hotspots";
 export { zoneScore } from "./zone-words";
 export { cornerKind, type CornerKind } from "./track-marks";
+export { keepOutArea } from "./polygons";

@@ -8,11 +8,12 @@ import type { LayoutDocument } from "../format/layout-document";
 import { carPreset, type CarParams } from "../format/cars";
 import type { LayoutAnalysis } from "../layout/layout-analysis-types";
 import type { GuidanceValues } from "../track/rules";
+import type { JumpProfile } from "../track/jump-profile";
+import { ballisticJumpWindow, type JumpWindow } from "../track/lap-jumps";
 import { findHotspots } from "./hotspots";
 import type { MarshalPlan, MarshalPointReport, SuggestedPlan } from "./marshal-types";
 import { placeMarshals } from "./placement";
 import { pointReports, type PointContext } from "./points";
-import { unionOf } from "./polygons";
 import { marshalSettings, type MarshalSettings } from "./settings";
 import { marshalSpots } from "./spots";
 import { indexTrack } from "./track-index";
@@ -60,7 +61,9 @@ export function marshalPlan(
   options: MarshalOptions = {},
 ): MarshalPlan {
   const settings = marshalSettings(options.settings);
-  return marshalRisk(doc, analysis, zoneClasses(analysis, options), settings, options.suggest ?? false);
+  return marshalRisk(doc, analysis, zoneClasses(analysis, options), settings, {
+    suggest: options.suggest ?? false,
+  });
 }
 
 /**
@@ -72,7 +75,7 @@ export function marshalRisk(
   analysis: Omit<LayoutAnalysis, "risk">,
   classes: readonly ZoneClass[],
   settings: MarshalSettings,
-  suggest: boolean,
+  how: { suggest: boolean; jumpWindow?: (profile: JumpProfile) => JumpWindow },
 ): MarshalPlan {
   const marks = trackMarks(doc);
   if (
@@ -84,8 +87,9 @@ export function marshalRisk(
   const limits = Object.fromEntries(
     analysis.rules.checks.map((c) => [c.id, c.value]),
   ) as unknown as GuidanceValues;
+  const windowOf = how.jumpWindow ?? ((p: JumpProfile) => ballisticJumpWindow(p));
   const zones = [
-    ...jumpZones(marks, classes, settings),
+    ...jumpZones(marks, classes, settings, windowOf),
     ...turnZones(marks, analysis.line, classes, settings),
   ]
     .map((z) => ({ ...z, contents: zoneContents(z, marks, doc.marshalPoints, doc.siteBoundary) }))
@@ -112,10 +116,9 @@ export function marshalRisk(
     jumps: marks.jumps.map((j, k) => summary(j, classes[0].analysis.jumps[k].lip.s)),
     corners: marks.corners.map((c) => summary({ ...c, sectionId: c.sectionIds[0] }, c.entryS)),
     zones,
-    keepOut: unionOf(zones.map((z) => z.polygon)),
     hotspots,
     points: pointReports(doc.marshalPoints, ctx),
-    suggested: suggest ? suggestPlan(ctx, limits, marks.lapLength) : null,
+    suggested: how.suggest ? suggestPlan(ctx, limits, marks.lapLength) : null,
     note: MARSHAL_NOTE,
   };
 }

@@ -180,9 +180,8 @@ export interface MarshalPlan {
   settings: MarshalSettings;
   jumps: MarkSummary[];
   corners: MarkSummary[];
+  /** The zones; `keepOutArea(zones)` merges them into one area for drawing. */
   zones: MarshalZone[];
-  /** Every zone merged into one area to keep out of (a multipolygon: polygons of rings of points), m. */
-  keepOut: PlanPoint[][][];
   hotspots: Hotspot[];
   /** The layout's own marshal points with their stretch, watch list and warnings. */
   points: MarshalPointReport[];

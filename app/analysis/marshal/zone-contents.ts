@@ -10,7 +10,7 @@
  */
 import { cyclicRuns, insidePolygon } from "../track/geometry-checks";
 import type { PlanPoint, ZoneContents } from "./marshal-types";
-import { outside, ringArea } from "./polygons";
+import { siteExit } from "./polygons";
 import { placeOnLap, type TrackMarks } from "./track-marks";
 import { insideWedge, wedgeAlong, zoneWedge, type ZoneGeometry } from "./zones";
 
@@ -29,21 +29,6 @@ function sampleAt(s: Float64Array, count: number, at: number): number {
     else hi = mid;
   }
   return lo;
-}
-
-/** Whether a polygon is convex (every turn along its outline to the same side). */
-export function convex(poly: readonly (readonly [number, number])[]): boolean {
-  let sign = 0;
-  for (let i = 0; i < poly.length; i++) {
-    const [ax, ay] = poly[i];
-    const [bx, by] = poly[(i + 1) % poly.length];
-    const [cx, cy] = poly[(i + 2) % poly.length];
-    const cross = (bx - ax) * (cy - by) - (by - ay) * (cx - bx);
-    if (Math.abs(cross) < 1e-12) continue;
-    if (sign === 0) sign = Math.sign(cross);
-    else if (Math.sign(cross) !== sign) return false;
-  }
-  return true;
 }
 
 /** Distance from a plan point to a polygon's outline, m. */
@@ -134,15 +119,10 @@ export function zoneContents(
   });
   let freeRunOff = Math.min(w.far, ...crosses.map((c) => c.distance));
   let leavesSite = false;
-  // A convex site holds the (convex) zone when it holds its corners; otherwise clip.
-  const within =
-    boundary && convex(boundary) && zone.polygon.every(([x, y]) => insidePolygon(boundary, x, y));
-  if (boundary && !within) {
-    for (const poly of outside(zone.polygon, boundary)) {
-      if (Math.abs(ringArea(poly[0])) < 1e-3) continue;
-      leavesSite = true;
-      for (const [x, y] of poly[0]) freeRunOff = Math.min(freeRunOff, Math.max(w.near, wedgeAlong(w, x, y)));
-    }
+  if (boundary) {
+    const exits = siteExit(zone.polygon, boundary, (x, y) => insidePolygon(boundary, x, y));
+    leavesSite = exits.length > 0;
+    for (const [x, y] of exits) freeRunOff = Math.min(freeRunOff, Math.max(w.near, wedgeAlong(w, x, y)));
   }
   return { crosses, marshalPoints, besidePoints, leavesSite, freeRunOff };
 }

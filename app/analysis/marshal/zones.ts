@@ -6,7 +6,8 @@
  * length, so the zone is the longest and keeps every class's numbers.
  */
 import type { CarParams } from "../format/cars";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
+import { ballisticJumpWindow, STANDARD_GRAVITY, type JumpWindow } from "../track/lap-jumps";
+import type { JumpProfile } from "../track/jump-profile";
 import { cornerSpeed } from "../track/speed";
 import type { ClassAnalysis, LayoutAnalysis } from "../layout/layout-analysis-types";
 import { escapeReach, overshootReach } from "./reach";
@@ -108,18 +109,22 @@ function zoneOf(
   };
 }
 
-/** The overshoot zone of every jump that some class can take off from faster than its window allows. */
+/**
+ * The overshoot zone of every jump that some class can take off from faster than its window allows.
+ * @param windowOf the drag-free speed window of a profile (the analysis passes its memoised one).
+ */
 export function jumpZones(
   marks: TrackMarks,
   classes: readonly ZoneClass[],
   settings: MarshalSettings,
+  windowOf: (profile: JumpProfile) => JumpWindow = (p) => ballisticJumpWindow(p),
 ): ZoneGeometry[] {
   const g = STANDARD_GRAVITY;
   const out: ZoneGeometry[] = [];
   marks.jumps.forEach((jump, k) => {
     const sec = jump.section;
     const profile = sec.profile!;
-    const windowMax = ballisticJumpWindow(profile, g).windowMax;
+    const windowMax = windowOf(profile).windowMax;
     const lipD = profile.d[profile.lipIndex];
     const reaches: ZoneClassReach[] = [];
     for (const cls of classes) {

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { createAnalysisCache } from "~/analysis/layout/analysis-cache";
 import { analyseLayout } from "~/analysis/layout/layout-analysis";
 import { marshalPlan } from "~/analysis/marshal/marshal-plan";
+import { keepOutArea, ringArea } from "~/analysis/marshal/polygons";
 import { DEFAULT_MARSHAL_SETTINGS, MARSHAL_SETTINGS, marshalSettings } from "~/analysis/marshal/settings";
 import { placeOnLap, trackMarks } from "~/analysis/marshal/track-marks";
 import { MARSHAL_NOTE } from "~/analysis/marshal/words";
@@ -78,23 +79,33 @@ describe("jumps and corners as the pages name them", () => {
 
 describe("marshalPlan", () => {
   const doc = ovalWithJump(BIG_DOUBLE, { carClasses: ["buggy-2wd-10", "sct-10"] });
-  const analysis = analyseLayout(doc);
+  const analysis = analyseLayout(doc, { marshal: {} });
 
-  it("is part of the layout analysis (without suggested points), the same as asked for on its own", () => {
+  it("comes with the layout analysis when asked (without suggested points), the same as on its own", () => {
     const plan = marshalPlan(doc, analysis);
     expect(analysis.risk).toEqual(plan);
+    expect(analyseLayout(doc).risk).toBeNull();
     expect(plan.suggested).toBeNull();
     expect(plan.note).toBe(MARSHAL_NOTE);
     expect(plan.note).toMatch(/not a safety certification/);
     expect(plan.classIds).toEqual(["buggy-2wd-10", "sct-10"]);
     expect(JSON.parse(JSON.stringify(plan))).toEqual(plan);
-    expect(plan.keepOut.length).toBeGreaterThan(0);
+    // The keep-out area for drawing: the zones merged, no larger than their sum (shoelace areas).
+    const area = keepOutArea(plan.zones).reduce(
+      (a, poly) =>
+        a + Math.abs(ringArea(poly[0])) - poly.slice(1).reduce((h, r) => h + Math.abs(ringArea(r)), 0),
+      0,
+    );
+    const sum = plan.zones.reduce((a, z) => a + Math.abs(ringArea(z.polygon)), 0);
+    expect(area).toBeGreaterThan(Math.max(...plan.zones.map((z) => Math.abs(ringArea(z.polygon)))));
+    expect(area).toBeLessThanOrEqual(sum + 1e-6);
   });
 
   it("takes the club's settings through the analysis, which remembers them apart", () => {
     const cache = createAnalysisCache();
     expect(analyseLayout(doc, { cache, marshal: { reach: 5 } }).risk!.settings.reach).toBe(5);
-    expect(analyseLayout(doc, { cache }).risk!.settings.reach).toBe(3);
+    expect(analyseLayout(doc, { cache, marshal: {} }).risk!.settings.reach).toBe(3);
+    expect(analyseLayout(doc, { cache }).risk).toBeNull();
     expect(analyseLayout(doc, { marshal: false }).risk).toBeNull();
     expect(() => analyseLayout(doc, { marshal: { heatSize: 0 } })).toThrow("settings.heatSize");
   });
