@@ -59,7 +59,7 @@ export interface AnalyseOptions {
   seed?: number;
   /**
    * Adds the marshal risk as `risk` with these marshal settings (`{}` for the defaults); left out
-   * (null) by default, as it would double the time of an edit's re-analysis (docs/decisions/0704).
+   * (null) by default: it doubles the time of an edit's re-analysis (docs/decisions/0704).
    */
   marshal?: Partial<MarshalSettings> | false;
 }
