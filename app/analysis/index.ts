@@ -59,9 +59,10 @@ export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
 /*
  * Layout analysis (layout-analysis.ts, jump-analysis.ts, overlay.ts, analysis-cache.ts)
  * - `analyseLayout(doc, { classIds?, skill?, guidance?, overrides?, cache?, cars?, skillSigmas?,
- *   lookaheadS?, failCost?, seed? })` -> `LayoutAnalysis` (plain JSON data: lap length, closure,
- *   plan checks, rule report, per class: lap time, speed along the downsampled line, jumps with
- *   flight, window, EFH, landing turn, set-up plan and a verdict per skill level; angles in deg).
+ *   lookaheadS?, failCost?, seed?, marshal? })` -> `LayoutAnalysis` (plain JSON data: lap length,
+ *   closure, plan checks, rule report with the jump rules, per class: lap time, speed along the
+ *   downsampled line, jumps with flight, window, EFH, landing turn, set-up plan and a verdict per
+ *   skill level; angles in deg; `risk`: the marshal plan when `marshal` settings are given).
  * - `analyseJump(context, options)` -> `JumpAnalysis` for one jump and one car class.
  * - `buildOverlay(analysis, classId, skill?)` -> `AnalysisOverlay` (app/lib/analysis-overlay.ts).
  * - `createAnalysisCache(maxEntries?)` -> an LRU memo (`memo`, `stats`, `clear`); `cacheKey`,
@@ -81,3 +82,16 @@ export * from "./layout";
  *   and in total, m³, and truck loads.
  */
 export * from "./build";
+
+/*
+ * Marshal risk (marshal/; docs/engine.md "Marshal risk")
+ * - `marshalPlan(doc, analysis, { classIds?, cars?, settings?, suggest? })` -> `MarshalPlan`: overshoot
+ *   zones beyond jumps (J1..) and run-off zones past corners (T1..) as wedges and polygons in plan m,
+ *   hotspots (H1.., score 1 to 5, reason), the layout's marshal points
+ *   (M1..) with stretch, watch list, jumps, turns and warnings, and `suggested` points when asked.
+ * - `MARSHAL_SETTINGS` (defaults, ranges, sources), `marshalSettings(overrides)`, the words
+ *   (`HOTSPOT_KIND_WORDS`, `scoreWords`, `MARSHAL_NOTE`), and the hand-checkable reaches
+ *   `overshootReach(profile, speed, decel)` and `escapeReach(speed, decel)` (m, m/s, m/s^2);
+ *   `keepOutArea(zones)` merges the zones into one area (polygons of rings, m) for drawing.
+ */
+export * from "./marshal";

@@ -35,9 +35,9 @@ describe("layout analysis in the browser", () => {
     expect(await main.getByRole("link", { name: "Edit the drawing" }).count()).toBe(1);
     expect(await main.getByRole("heading", { name: "Safety around the track" }).count()).toBe(1);
     const rules = main.getByRole("table").filter({ has: page.getByRole("columnheader", { name: "Source" }) });
-    expect(await rules.getByRole("row").count()).toBe(7); // a heading row and six rules
+    expect(await rules.getByRole("row").count()).toBe(10); // a heading row and nine rules
     const results = await rules.locator("tbody tr td:nth-child(4)").allTextContents();
-    expect(results).toHaveLength(6);
+    expect(results).toHaveLength(9);
     for (const r of results) expect(r).toMatch(/(Pass|Fail|Not checked)$/);
     expect(await main.getByText(/sanctioning body's current rulebook decides/).count()).toBeGreaterThan(0);
 

@@ -12,6 +12,7 @@ import type { PlanInfeasibleReason } from "../air/air-plan";
 import type { PitchPulse } from "../air/air-plan-pulse";
 import type { SwitchWindow } from "../air/air-plan-robustness";
 import type { RuleReport } from "../track/rules";
+import type { MarshalPlan } from "../marshal/marshal-types";
 
 /** The verdict for one jump, one car class and one skill level. */
 export interface SkillVerdict {
@@ -179,6 +180,12 @@ export interface LayoutAnalysis {
   startStraight: { length: number; sectionIds: string[] };
   rules: RuleReport;
   classes: ClassAnalysis[];
+  /**
+   * The marshal risk over every class (marshal/marshal-plan.ts), when asked for with
+   * `options.marshal`: zones, hotspots and the layout's own marshal points with warnings; no
+   * suggested points (ask `marshalPlan` for those). Null otherwise.
+   */
+  risk: MarshalPlan | null;
   /** Plain-words caveat shown with every analysis. */
   note: string;
 }

@@ -71,6 +71,30 @@ export const RULE_FIELDS: readonly {
     max: 10,
     hint: "As a multiple of the lap divided by the number of marshal points; 1 is perfectly even.",
   },
+  {
+    id: "minLandingRunOut",
+    label: "Shortest run-out after a landing",
+    unit: "m",
+    min: 0,
+    max: 50,
+    hint: "From where a car touches down to the start of the next turn.",
+  },
+  {
+    id: "maxLandingFallHeight",
+    label: "Hardest landing allowed",
+    unit: "m",
+    min: 0.05,
+    max: 5,
+    hint: "Equivalent fall height: the drop onto flat ground that lands as hard.",
+  },
+  {
+    id: "minSpeedWindow",
+    label: "Narrowest speed window",
+    unit: "m/s",
+    min: 0,
+    max: 5,
+    hint: "How much the takeoff speed may vary and still land on the landing ramp.",
+  },
 ];
 
 function overrideField(f: (typeof RULE_FIELDS)[number]) {
