@@ -93,24 +93,40 @@ const entries = new LruMap<string, CacheEntry<unknown>>(ANALYSIS_CACHE_SIZE);
 const aliases = new LruMap<string, string>(ANALYSIS_CACHE_SIZE * 4);
 const stats = { hits: 0, misses: 0 };
 
+const pending = new Map<string, Promise<CacheEntry<unknown>>>();
+
 /**
- * The remembered result for these inputs, or `compute()`'s result, remembered.
- * @returns the entry and whether it was a hit.
+ * The remembered result for these inputs, or `compute()`'s result, remembered. Requests for the
+ * same inputs while it is being computed wait for that one computation.
+ * @returns the entry and whether it was a hit (remembered, or already being computed).
  */
-export function memoAnalysis<T>(
+export async function memoAnalysis<T>(
   inputs: AnalysisInputs,
-  compute: () => T,
-): { entry: CacheEntry<T>; hit: boolean } {
+  compute: () => Promise<T>,
+): Promise<{ entry: CacheEntry<T>; hit: boolean }> {
   const key = analysisKey(inputs);
   const found = entries.get(key) as CacheEntry<T> | undefined;
   if (found) {
     stats.hits += 1;
     return { entry: found, hit: true };
   }
+  const running = pending.get(key) as Promise<CacheEntry<T>> | undefined;
+  if (running) {
+    stats.hits += 1;
+    return { entry: await running, hit: true };
+  }
   stats.misses += 1;
-  const entry: CacheEntry<T> = { key, value: compute(), bodies: new Map() };
-  entries.set(key, entry as CacheEntry<unknown>);
-  return { entry, hit: false };
+  const made = compute().then((value) => {
+    const entry: CacheEntry<T> = { key, value, bodies: new Map() };
+    entries.set(key, entry as CacheEntry<unknown>);
+    return entry;
+  });
+  pending.set(key, made as Promise<CacheEntry<unknown>>);
+  try {
+    return { entry: await made, hit: false };
+  } finally {
+    pending.delete(key);
+  }
 }
 
 /** The entry an alias points at, if both are still remembered (counts as a hit). */
