@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
-# the unit and integration tests (vitest), builds the app and runs the browser tests against it.
+# the unit and integration tests (vitest), builds the app and runs the browser tests and the
+# reliability tests (analysis budget, saves surviving kill -9) against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -49,10 +50,13 @@ counted() {
 stage "unit and integration tests" counted ./node_modules/.bin/vitest run
 if stage "build" npm run --silent build; then
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
+  stage "reliability tests" counted ./node_modules/.bin/vitest run --config vitest.reliability.config.ts
 else
-  names+=("browser tests")
-  results+=("skipped")
-  seconds+=("0")
+  for skipped in "browser tests" "reliability tests"; do
+    names+=("$skipped")
+    results+=("skipped")
+    seconds+=("0")
+  done
 fi
 
 echo
