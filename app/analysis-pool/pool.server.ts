@@ -11,6 +11,7 @@ import { fileURLToPath } from "node:url";
 import { MessageChannel } from "node:worker_threads";
 import { Piscina } from "piscina";
 import { analyseLayout, createAnalysisCache, type LayoutAnalysis, type LayoutDocument } from "~/analysis";
+import { rememberJson } from "./analysis-json";
 import { budgetIssues } from "./budget";
 import { AnalysisBudgetError, AnalysisBusyError } from "./errors";
 import { analysisPoolSettings, type AnalysisPoolSettings } from "./settings.server";
@@ -139,7 +140,10 @@ export async function runAnalysis(document: LayoutDocument, options: RunAnalysis
       if (error instanceof AnalysisBusyError) counts.refusedBusy += 1;
       throw error;
     });
-    if (reply.ok) return reply.analysis as LayoutAnalysis;
+    if (reply.ok) {
+      rememberJson(reply.analysis, reply.json);
+      return reply.analysis as LayoutAnalysis;
+    }
     throw reply.name === "RangeError" ? new RangeError(reply.message) : new Error(reply.message);
   } finally {
     if (owner !== undefined) {

@@ -8,6 +8,7 @@
 import type { MessagePort } from "node:worker_threads";
 import { analyseLayout, createAnalysisCache, type AnalyseOptions, type LayoutAnalysis } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
+import { compactJsonBytes } from "./analysis-json";
 
 export interface AnalysisTask {
   document: LayoutDocument;
@@ -16,9 +17,13 @@ export interface AnalysisTask {
   port?: MessagePort;
 }
 
-/** The analysis, or the engine's refusal (its class and message: a RangeError names the field). */
+/**
+ * The analysis with its JSON text (UTF-8, compact numbers; the request thread splices it into
+ * answers instead of serialising it), or the engine's refusal (a RangeError names the field).
+ */
 export type AnalysisReply =
-  { ok: true; analysis: LayoutAnalysis } | { ok: false; name: string; message: string };
+  | { ok: true; analysis: LayoutAnalysis; json: Uint8Array }
+  | { ok: false; name: string; message: string };
 
 /** Per-jump work remembered by this thread (entries; a few hundred bytes to a few kB each). */
 const engineCache = createAnalysisCache(4000);
@@ -27,7 +32,8 @@ export default function analyse(task: AnalysisTask): AnalysisReply {
   task.port?.postMessage("started");
   task.port?.close();
   try {
-    return { ok: true, analysis: analyseLayout(task.document, { ...task.options, cache: engineCache }) };
+    const analysis = analyseLayout(task.document, { ...task.options, cache: engineCache });
+    return { ok: true, analysis, json: compactJsonBytes(analysis) };
   } catch (error) {
     const e = error instanceof Error ? error : new Error(String(error));
     return { ok: false, name: e.name, message: e.message };

@@ -58,14 +58,14 @@ export function analysisRefusal(error: unknown, prefix = ""): Response {
  * A JSON body already made, gzip-compressed when the client accepts it, with the memo's hit or
  * miss in X-Analysis-Cache.
  */
-export function jsonText(
+export async function jsonText(
   request: Request,
   body: CachedBody,
   hit: boolean,
   extra: Record<string, string> = {},
-): Response {
+): Promise<Response> {
   const gzip = /\bgzip\b/.test(request.headers.get("Accept-Encoding") ?? "");
-  const bytes = gzip ? body.gzip() : body.bytes;
+  const bytes = gzip ? await body.gzip() : body.bytes;
   return new Response(bytes as Uint8Array<ArrayBuffer>, {
     headers: {
       "Content-Type": "application/json; charset=utf-8",

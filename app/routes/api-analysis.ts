@@ -64,7 +64,7 @@ export async function action({ request }: Route.ActionArgs) {
       analysis: run.analysis,
       overlay: overlayFor(run, classId, skill),
     }));
-    return jsonText(request, text, run.hit);
+    return await jsonText(request, text, run.hit);
   } catch (error) {
     if (error instanceof Response) throw error;
     return analysisRefusal(error, "document.");

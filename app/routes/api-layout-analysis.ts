@@ -46,7 +46,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         overlay,
       };
     });
-    return jsonText(request, text, run.hit, { ETag: etag });
+    return await jsonText(request, text, run.hit, { ETag: etag });
   } catch (error) {
     if (error instanceof Response) throw error;
     return analysisRefusal(error);

@@ -8,7 +8,7 @@
 import { createClient, type Client } from "@libsql/client";
 import { afterAll, describe, expect, it } from "vitest";
 import type { AppServer } from "../../scripts/lib/app-server";
-import { prepareApp, signIn, type TestApp } from "./helpers/app";
+import { prepareApp, signIn, type TestApp } from "../../scripts/lib/temp-app";
 
 type Ack = { layoutId: string | null; version: number | null; marker: string };
 
@@ -64,7 +64,7 @@ async function saveLoop(
 
 describe("saves and a killed server", () => {
   it("keeps every acknowledged save and a sound database file", async () => {
-    app = await prepareApp();
+    app = await prepareApp({ quiet: true });
     server = await app.start();
     const cookie = await signIn(app.base, "director");
     db = createClient({ url: `file:${app.dbFile}` });

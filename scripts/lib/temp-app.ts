@@ -1,6 +1,7 @@
 /**
  * The built app on a free loopback port with its own temporary data folder holding the demo data,
- * for reliability tests that must stop or kill a real server process. Builds first when stale.
+ * for the reliability tests (which stop or kill a real server process) and the load benchmarks.
+ * Builds first when stale.
  */
 import fs from "node:fs";
 import os from "node:os";
@@ -8,19 +9,19 @@ import path from "node:path";
 import { closeDb, getDb, migrateDatabase } from "~/db/client.server";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
 import { seedDemoData } from "~/db/demo-data.server";
-import { buildApp, freePort, startAppServer, type AppServer } from "../../../scripts/lib/app-server";
+import { buildApp, freePort, startAppServer, type AppServer } from "./app-server";
 
 export interface TestApp {
   base: string;
   dataDir: string;
   dbFile: string;
-  /** Starts the server (again) on the same data folder and port. */
-  start(): Promise<AppServer>;
+  /** Starts the server (again) on the same data folder and port, with extra environment. */
+  start(env?: Record<string, string>): Promise<AppServer>;
   remove(): void;
 }
 
 /** A fresh data folder with the demo data; the server is not started yet. */
-export async function prepareApp(): Promise<TestApp> {
+export async function prepareApp(opts: { quiet?: boolean } = {}): Promise<TestApp> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "loftline-reliability-"));
   const dbFile = path.join(dataDir, "loftline.db");
   const saved = { DATA_DIR: process.env.DATA_DIR, DATABASE_URL: process.env.DATABASE_URL };
@@ -30,14 +31,15 @@ export async function prepareApp(): Promise<TestApp> {
   await seedDemoData(await getDb());
   closeDb();
   Object.assign(process.env, saved);
-  buildApp({ quiet: true });
+  const built = buildApp({ quiet: true });
+  if (built !== null && !opts.quiet) console.log(`built the app in ${built.toFixed(1)} s`);
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   return {
     base,
     dataDir,
     dbFile,
-    start: () =>
+    start: (env = {}) =>
       startAppServer({
         port,
         output: "ignore",
@@ -50,6 +52,7 @@ export async function prepareApp(): Promise<TestApp> {
           DATABASE_URL: `file:${dbFile}`,
           SESSION_SECRET: "reliability-session-secret",
           APP_URL: base,
+          ...env,
         },
       }),
     remove: () => fs.rmSync(dataDir, { recursive: true, force: true }),
