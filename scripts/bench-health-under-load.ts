@@ -17,7 +17,8 @@ import { heaviestAccepted, overBudget } from "./lib/worst-case-layout";
 import { prepareApp, signIn } from "./lib/temp-app";
 import type { AppServer } from "./lib/app-server";
 
-const USAGE = "Usage: npm run bench:health-under-load [-- --duration SECONDS (5 to 300, default 30)] [--inline]";
+const USAGE =
+  "Usage: npm run bench:health-under-load [-- --duration SECONDS (5 to 300, default 30)] [--inline]";
 const TARGET_P99_MS = 100;
 
 function parse(argv: string[]) {
@@ -90,7 +91,9 @@ async function main() {
       if (r.status !== 422) throw new Error(`the 500-jump layout was answered ${r.status}, not 422`);
       refusals.push(performance.now() - started);
     }
-    console.log(`500-jump layout (72 kB): refused with 422 in ${Math.min(...refusals).toFixed(0)}-${Math.max(...refusals).toFixed(0)} ms`);
+    console.log(
+      `500-jump layout (72 kB): refused with 422 in ${Math.min(...refusals).toFixed(0)}-${Math.max(...refusals).toFixed(0)} ms`,
+    );
 
     let stop = false;
     let next = 1;

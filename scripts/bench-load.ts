@@ -77,8 +77,12 @@ async function main() {
     const base = app.base;
     const cookie = await signIn(base, "director");
     const db = createClient({ url: `file:${app.dbFile}` });
-    const summer = String((await db.execute("SELECT id FROM layouts WHERE name = 'Summer layout'")).rows[0].id);
-    const { document } = (await (await fetch(`${base}/api/layouts/${summer}`, { headers: { cookie } })).json()) as {
+    const summer = String(
+      (await db.execute("SELECT id FROM layouts WHERE name = 'Summer layout'")).rows[0].id,
+    );
+    const { document } = (await (
+      await fetch(`${base}/api/layouts/${summer}`, { headers: { cookie } })
+    ).json()) as {
       document: Record<string, unknown>;
     };
     const headers = { cookie, "accept-encoding": "gzip, deflate", origin: base };
@@ -102,7 +106,8 @@ async function main() {
       fetch(`${base}/api/layouts/${summer}/analysis?class=buggy-2wd-10`, { headers }),
       fetch(`${base}/api/analysis`, { method: "POST", headers: json, body: draft }),
     ];
-    for (const r of await Promise.all(warm)) if (r.status !== 200) throw new Error(`warm-up: ${r.status} ${r.url}`);
+    for (const r of await Promise.all(warm))
+      if (r.status !== 200) throw new Error(`warm-up: ${r.status} ${r.url}`);
 
     console.log(
       `autocannon: ${CONNECTIONS} connections, ${duration} s per target, loopback; ${os.availableParallelism()} cores, load average ${os.loadavg()[0].toFixed(1)}; server memory at start ${rssMb(server.child.pid!).toFixed(0)} MB`,
@@ -122,7 +127,11 @@ async function main() {
     await measure(
       "POST /api/analysis (draft)",
       server,
-      load({ ...common, url: `${base}/api/analysis`, requests: [{ method: "POST", headers: json, body: draft }] }),
+      load({
+        ...common,
+        url: `${base}/api/analysis`,
+        requests: [{ method: "POST", headers: json, body: draft }],
+      }),
     );
     await measure(
       "POST /layouts/:id/edit (save)",

@@ -22,8 +22,7 @@ export interface AnalysisTask {
  * answers instead of serialising it), or the engine's refusal (a RangeError names the field).
  */
 export type AnalysisReply =
-  | { ok: true; analysis: LayoutAnalysis; json: Uint8Array }
-  | { ok: false; name: string; message: string };
+  { ok: true; analysis: LayoutAnalysis; json: Uint8Array } | { ok: false; name: string; message: string };
 
 /** Per-jump work remembered by this thread (entries; a few hundred bytes to a few kB each). */
 const engineCache = createAnalysisCache(4000);

@@ -38,7 +38,8 @@ async function saveLoop(
   acks: Ack[],
   intent: "save" | "save-copy",
 ) {
-  let { version, document } = await current(base, cookie, layoutId);
+  const { document, version: start } = await current(base, cookie, layoutId);
+  let version = start;
   for (let k = 0; ; k++) {
     const marker = `burst ${name} ${k}`;
     const body = { intent, baseVersion: version, document: { ...document, description: marker } };
