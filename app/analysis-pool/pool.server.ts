@@ -70,7 +70,6 @@ function thePool(s: AnalysisPoolSettings): Piscina<AnalysisTask, AnalysisReply> 
 /** Runs the task on a worker; the time limit starts when a worker picks it up. */
 async function onWorker(s: AnalysisPoolSettings, task: AnalysisTask): Promise<AnalysisReply> {
   const p = thePool(s);
-  if (p.queueSize >= s.maxQueue) throw new AnalysisBusyError("server", s.retryAfterS);
   const { port1, port2 } = new MessageChannel();
   const controller = new AbortController();
   let timer: NodeJS.Timeout | undefined;
@@ -122,6 +121,10 @@ export async function runAnalysis(document: LayoutDocument, options: RunAnalysis
   if (over.length) {
     counts.refusedBudget += 1;
     throw new AnalysisBudgetError(over, "work");
+  }
+  if (s.threads > 0 && thePool(s).queueSize >= s.maxQueue) {
+    counts.refusedBusy += 1;
+    throw new AnalysisBusyError("server", s.retryAfterS);
   }
   const mine = owner === undefined ? 0 : (perOwner.get(owner) ?? 0);
   if (owner !== undefined && mine >= s.perAccount) {
