@@ -6,6 +6,7 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import net from "node:net";
 import path from "node:path";
+import { WORKER_BUNDLE } from "../build-analysis-worker";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
 const SERVER_ENTRY = path.join(ROOT, "build/server/index.js");
@@ -28,28 +29,35 @@ function newestMtime(p: string): number {
   return newest;
 }
 
-/** True when build/ is missing or older than any source file. */
+/** True when build/ (the server or its analysis worker) is missing or older than any source file. */
 export function buildIsStale(): boolean {
-  if (!fs.existsSync(SERVER_ENTRY)) return true;
+  if (!fs.existsSync(SERVER_ENTRY) || !fs.existsSync(WORKER_BUNDLE)) return true;
   const built = fs.statSync(SERVER_ENTRY).mtimeMs;
   return SOURCES.some((s) => newestMtime(path.join(ROOT, s)) > built);
 }
 
 /**
- * Runs `react-router build` when the build is stale (or always with `force`). Returns the seconds
- * it took, or null when the build was already current. Throws when the build fails.
+ * Runs `npm run build` (`react-router build`, then the analysis worker's bundle) when the build is
+ * stale (or always with `force`). Returns the seconds it took, or null when the build was already
+ * current. Throws when the build fails.
  */
 export function buildApp({ force = false, quiet = false } = {}): number | null {
   if (!force && !buildIsStale()) return null;
   const started = performance.now();
-  const result = spawnSync(path.join(ROOT, "node_modules/.bin/react-router"), ["build"], {
-    cwd: ROOT,
-    stdio: quiet ? "pipe" : "inherit",
-    env: { ...process.env, NODE_ENV: "production" },
-  });
-  if (result.status !== 0) {
-    if (quiet) process.stderr.write(String(result.stdout ?? "") + String(result.stderr ?? ""));
-    throw new Error(`react-router build failed (exit ${result.status})`);
+  const steps: [string, string[]][] = [
+    [path.join(ROOT, "node_modules/.bin/react-router"), ["build"]],
+    [path.join(ROOT, "node_modules/.bin/tsx"), [path.join(ROOT, "scripts/build-analysis-worker.ts")]],
+  ];
+  for (const [command, args] of steps) {
+    const result = spawnSync(command, args, {
+      cwd: ROOT,
+      stdio: quiet ? "pipe" : "inherit",
+      env: { ...process.env, NODE_ENV: "production" },
+    });
+    if (result.status !== 0) {
+      if (quiet) process.stderr.write(String(result.stdout ?? "") + String(result.stderr ?? ""));
+      throw new Error(`${path.basename(command)} ${args.join(" ")} failed (exit ${result.status})`);
+    }
   }
   return (performance.now() - started) / 1000;
 }
