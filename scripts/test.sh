@@ -47,7 +47,7 @@ counted() {
 }
 
 stage "unit and integration tests" counted ./node_modules/.bin/vitest run
-if stage "build" ./node_modules/.bin/react-router build; then
+if stage "build" npm run --silent build; then
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else
   names+=("browser tests")

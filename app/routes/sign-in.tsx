@@ -23,8 +23,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 type ActionData = { errors?: FieldErrors; formError?: string; email: string };
 
-export async function action({ request }: Route.ActionArgs) {
-  const result = await signInWithPassword(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const result = await signInWithPassword(request, context?.clientAddress ?? null);
   switch (result.kind) {
     case "invalid":
       return data<ActionData>({ errors: result.errors, email: result.email }, { status: 400 });
