@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # `npm test`: every test. Installs Debian's chromium when /usr/bin/chromium is missing, then runs
-# the unit and integration tests (vitest), builds the app and runs the browser tests against it.
+# the unit and integration tests (vitest), builds the app, and runs the reliability tests (the
+# built server under bad, oversized and racing requests) and the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -48,11 +49,14 @@ counted() {
 
 stage "unit and integration tests" counted ./node_modules/.bin/vitest run
 if stage "build" npm run --silent build; then
+  stage "reliability tests" counted ./node_modules/.bin/vitest run --config vitest.reliability.config.ts
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else
-  names+=("browser tests")
-  results+=("skipped")
-  seconds+=("0")
+  for skipped in "reliability tests" "browser tests"; do
+    names+=("$skipped")
+    results+=("skipped")
+    seconds+=("0")
+  done
 fi
 
 echo

@@ -12,6 +12,12 @@ import { config } from "~/lib/config.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Sign in · Loftline" }];
 
+// An action's headers reach the answer only through this: the throttle's Retry-After with its 429.
+export const headers: Route.HeadersFunction = ({ actionHeaders }) => {
+  const retryAfter = actionHeaders.get("Retry-After");
+  return retryAfter ? { "Retry-After": retryAfter } : new Headers();
+};
+
 export async function loader({ request }: Route.LoaderArgs) {
   const redirectTo = new URL(request.url).searchParams.get("redirectTo") ?? undefined;
   if (await getUser(request)) throw redirect(safeRedirect(redirectTo));

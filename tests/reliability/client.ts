@@ -3,6 +3,7 @@
  * declare a false length, or run on after the server has answered), and the app's routes as
  * app/routes.ts lists them, with their parameters filled from the demo data.
  */
+import fs from "node:fs";
 import http from "node:http";
 import path from "node:path";
 import { createClient } from "@libsql/client";
@@ -138,4 +139,11 @@ export function fillPath(pattern: string, ids: Record<string, string>): string {
     if (name === "fileId") return "00000000-0000-4000-8000-000000000000";
     return ids[name] ?? "unknown";
   });
+}
+
+/** Photos stored in the data folder so far. */
+export function storedPhotos(): number {
+  const dir = path.join(inject("dataDir"), "files");
+  if (!fs.existsSync(dir)) return 0;
+  return fs.readdirSync(dir, { recursive: true }).filter((f) => /\.(png|jpg)$/.test(String(f))).length;
 }
