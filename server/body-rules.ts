@@ -3,7 +3,7 @@
  * A route not listed takes DEFAULT_BODY_RULE: a form of at most 64 KB. Each listed limit sits a
  * little above the route's own limit, so for an honest request the route's own message answers
  * first; the server's limit is the backstop for bodies that are sent in chunks or lie about their
- * length. docs/decisions/0306-request-body-limits.md gives the reasons.
+ * length. docs/decisions/0311-request-body-limits.md gives the reasons.
  */
 export type BodyType = "urlencoded" | "multipart" | "json";
 

@@ -3,7 +3,7 @@
  * the JSON API and uploads alike. A browser says where a request comes from in `Origin` (and in
  * `Sec-Fetch-Site`); the request passes when that is the app's own origin: APP_URL's, or the
  * origin the request itself was addressed to. Requests without either header come from programs
- * (curl, scripts), which carry no one else's cookie. See docs/decisions/0307-origin-check.md.
+ * (curl, scripts), which carry no one else's cookie. See docs/decisions/0312-origin-check.md.
  */
 import type { Request as ExpressRequest } from "express";
 

@@ -3,7 +3,7 @@
  * response's nonce (the framework's inline scripts carry it, see app/entry.server.tsx), no
  * framing, no MIME sniffing, no Referer to other sites (none at all from the token pages, whose
  * address holds a reset or invitation token), and HSTS in production.
- * See docs/decisions/0308-security-headers.md.
+ * See docs/decisions/0313-security-headers.md.
  */
 import type { IncomingMessage, ServerResponse } from "node:http";
 import helmet from "helmet";

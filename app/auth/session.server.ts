@@ -31,7 +31,7 @@ let storage: ReturnType<typeof createSessionStorage<SessionData, SessionFlash>> 
 /**
  * Sessions kept in the database (`sessions`), the signed cookie holding only a random id:
  * httpOnly, SameSite=Lax, Secure in production. Signing out deletes the row, so a copied cookie
- * stops working (docs/decisions/0309-server-side-sessions.md).
+ * stops working (docs/decisions/0314-server-side-sessions.md).
  */
 export function sessionStorage() {
   storage ??= createSessionStorage<SessionData, SessionFlash>({

@@ -88,7 +88,7 @@ export const passwordResets = sqliteTable("password_resets", {
 /**
  * Signed-in browsers (server-side sessions): the cookie carries only the signed id, so deleting
  * the row (signing out) ends the session for every copy of the cookie. `data` is the session's
- * JSON (user id, session version, flash notice). See docs/decisions/0309-server-side-sessions.md.
+ * JSON (user id, session version, flash notice). See docs/decisions/0314-server-side-sessions.md.
  */
 export const sessions = sqliteTable(
   "sessions",
