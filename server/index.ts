@@ -44,7 +44,20 @@ try {
   process.exit(2);
 }
 
+if (
+  process.env.CLIENT_ADDRESS_HEADER &&
+  !process.env.TRUSTED_PROXIES &&
+  process.env.CLIENT_ADDRESS_HEADER !== "none"
+) {
+  console.warn(
+    "[loftline] CLIENT_ADDRESS_HEADER is read only from TRUSTED_PROXIES, which is not set: the socket's address is used.",
+  );
+}
+
+// Every request, also one that waits for "100 Continue", goes through the app: it answers
+// "continue" only to a body it will read (server/react-router-handler.ts).
 const server = createServer(app);
+server.on("checkContinue", (req, res) => server.emit("request", req, res));
 server.listen(port, process.env.HOST, () => {
   const address = server.address();
   const actual = typeof address === "object" && address ? address.port : port;

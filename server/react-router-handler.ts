@@ -44,10 +44,17 @@ export function reactRouterHandler(opts: HandlerOptions) {
       let prepared: PreparedBody = { body: null };
       if (req.method !== "GET" && req.method !== "HEAD") {
         const rule = bodyRuleFor(route?.id);
-        const result = await prepareBody(req, rule, () => {
-          // A streamed body passed the limit while the route read it: answer now, stop the route.
-          refuse(req, res, form, 413, tooLargeMessage(rule.maxBytes));
-          controller.abort();
+        const result = await prepareBody(req, rule, {
+          // A client that sent "Expect: 100-continue" sends the body only after this; one whose
+          // body is refused (too large, wrong type) gets the refusal without sending it.
+          beforeRead: () => {
+            if (/100-continue/i.test(req.headers.expect ?? "")) res.writeContinue();
+          },
+          onTooLarge: () => {
+            // A streamed body passed the limit while the route read it: answer now, stop the route.
+            refuse(req, res, form, 413, tooLargeMessage(rule.maxBytes));
+            controller.abort();
+          },
         });
         if (isRefusal(result)) return refuse(req, res, form, result.status, result.message);
         prepared = result;

@@ -52,13 +52,15 @@ export function hasBody(req: IncomingMessage): boolean {
 }
 
 /**
- * The body to hand to the app, or why it is refused. `onTooLarge` runs when a counted stream
- * passes the limit after the app has started reading it (the caller answers 413 then).
+ * The body to hand to the app, or why it is refused. `beforeRead` runs once the body is accepted
+ * and is about to be read (the caller sends "100 Continue" to a client that waits for it);
+ * `onTooLarge` runs when a counted stream passes the limit after the app has started reading it
+ * (the caller answers 413 then).
  */
 export async function prepareBody(
   req: IncomingMessage,
   rule: BodyRule,
-  onTooLarge: () => void,
+  hooks: { beforeRead: () => void; onTooLarge: () => void },
 ): Promise<PreparedBody | Refusal> {
   const rawType = req.headers["content-type"];
   if (!hasBody(req)) {
@@ -83,8 +85,9 @@ export async function prepareBody(
   if (type === "multipart" && !/;\s*boundary=/i.test(rawType ?? "")) {
     return { status: 400, message: "The multipart form has no boundary in its Content-Type." };
   }
+  hooks.beforeRead();
   if (type === "json" || (type === "multipart" && rule.streamMultipart)) {
-    return { body: countedStream(req, rule.maxBytes, onTooLarge) };
+    return { body: countedStream(req, rule.maxBytes, hooks.onTooLarge) };
   }
 
   let bytes: Buffer;
