@@ -38,16 +38,24 @@ export function refuse(
   }
   res.statusCode = status;
   res.setHeader("Cache-Control", "no-store, no-transform");
-  res.setHeader("Content-Length", Buffer.byteLength(body));
+  sendWhole(req, res, Buffer.from(body));
+}
+
+/**
+ * Sends a whole answer (status and headers already set). When the request's body is still
+ * arriving, the answer goes out now and the connection stays open while the rest is read and
+ * dropped (never kept), then closes: closing at once would make the client's system reset the
+ * connection while it still sends, which can lose the answer on its way back.
+ */
+export function sendWhole(req: IncomingMessage, res: ServerResponse, body: Uint8Array): void {
+  res.setHeader("Content-Length", body.byteLength);
   if (!hasBody(req) || req.complete) {
     res.end(body);
     return;
   }
-  // The body is still arriving: the answer goes out now, and the connection stays open while the
-  // rest is read and dropped (never kept), then closes. Closing at once would make the client's
-  // system reset the connection while it still sends, which can lose the answer on its way.
   res.setHeader("Connection", "close");
   res.write(body);
+  (res as ServerResponse & { flush?: () => void }).flush?.(); // past compression's buffer
   void drainRest(req).then(() => res.end());
 }
 
@@ -59,7 +67,7 @@ const LINGER_BYTES = 16 * 1024 * 1024;
  * Reads and drops what is left of a request's body. Resolves true once it has ended, or false
  * when it goes on past LINGER_MS or LINGER_BYTES (the connection must then close after the answer).
  */
-export function drainRest(req: IncomingMessage): Promise<boolean> {
+function drainRest(req: IncomingMessage): Promise<boolean> {
   if (!hasBody(req) || req.complete) return Promise.resolve(true);
   return new Promise((resolve) => {
     let dropped = 0;

@@ -8,11 +8,11 @@ import type { IncomingMessage, ServerResponse } from "node:http";
 import { writeReadableStreamToWritable } from "@react-router/node";
 import type { NextFunction, Request as ExpressRequest, Response as ExpressResponse } from "express";
 import { createRequestHandler, type ServerBuild } from "react-router";
-import { drainRest, refuse, type AnswerForm } from "./answers";
+import { refuse, sendWhole, type AnswerForm } from "./answers";
 import { bodyRuleFor } from "./body-rules";
 import { clientAddress, type ClientAddressOptions } from "./client-address";
 import { CROSS_SITE_MESSAGE, originAllowed, requestOrigin } from "./origin-check";
-import { isRefusal, prepareBody, tooLargeMessage, type PreparedBody } from "./request-body";
+import { hasBody, isRefusal, prepareBody, tooLargeMessage, type PreparedBody } from "./request-body";
 import { isDataRequest, routeMatcher } from "./routes";
 import { TOKEN_ROUTES } from "./security-headers";
 
@@ -100,9 +100,6 @@ function fetchRequest(req: ExpressRequest, prepared: PreparedBody, signal: Abort
 }
 
 async function sendResponse(req: IncomingMessage, res: ServerResponse, response: Response): Promise<void> {
-  // The route answered without reading all of the body (e.g. 401 before an upload): drop the
-  // rest first, or close the connection after the answer when there is too much of it.
-  if (!res.headersSent && !(await drainRest(req))) res.setHeader("Connection", "close");
   if (res.headersSent || res.writableEnded || res.destroyed) {
     await response.body?.cancel().catch(() => {});
     return;
@@ -115,6 +112,12 @@ async function sendResponse(req: IncomingMessage, res: ServerResponse, response:
   for (const [key, value] of response.headers) if (key !== "set-cookie") res.setHeader(key, value);
   const cookies = response.headers.getSetCookie();
   if (cookies.length) res.setHeader("Set-Cookie", cookies);
+  if (hasBody(req) && !req.complete) {
+    // The route answered without reading all of the body (a refused upload, 401 before it): a
+    // short answer, sent whole while the rest of the body is dropped.
+    sendWhole(req, res, new Uint8Array(await response.arrayBuffer()));
+    return;
+  }
   if (!response.body) {
     res.end();
     return;

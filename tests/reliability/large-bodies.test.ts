@@ -83,6 +83,16 @@ describe("very large bodies", () => {
     expect(storedPhotos()).toBe(photosBefore);
   });
 
+  it("200 MB photo in chunks, signed out: 401 from the route, which never reads the body", async () => {
+    const answer = await send(`/layouts/${layoutId}/photo`, {
+      headers: { "Content-Type": "multipart/form-data; boundary=----loftline" },
+      prefix: PHOTO_PART,
+      chunkedBytes: 200 * MB,
+    });
+    expect(answer.status).toBe(401);
+    expect(JSON.parse(answer.text).error).toBe("Sign in first.");
+  });
+
   it("200 MB to the editor's save in chunks: 413", async () => {
     const answer = await send(`/layouts/${layoutId}/edit.data`, {
       headers: { "Content-Type": "application/json", Cookie: cookie },
