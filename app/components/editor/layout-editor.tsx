@@ -3,16 +3,18 @@
  * and the live analysis. State lives in one reducer (app/lib/editor/editor-state.ts, through
  * useEditorDocument); the canvas and the panels only dispatch changes.
  */
-import { useState } from "react";
-import type { LayoutDocument } from "~/analysis";
+import { useMemo, useState } from "react";
+import { resolveSections, sampleCentreLine, type LayoutDocument } from "~/analysis";
 import { photoUrl } from "~/components/drawing/drawing-title";
 import { isDirty } from "~/lib/editor/editor-state";
 import { canRedo, canUndo } from "~/lib/editor/history";
+import { CloseLoopProposal } from "./close-loop-proposal";
 import { ClosureBar } from "./closure-bar";
 import { ConflictDialog, RestoreBanner } from "./editor-dialogs";
 import { EditorHeader } from "./editor-header";
 import { EditorPanels } from "./editor-panels";
 import { EditorToolbar } from "./editor-toolbar";
+import { FieldProblemsScope, useFieldProblemList } from "./field-problems";
 import { LazyDrawingCanvas } from "./lazy-drawing-canvas";
 import { useAnalysis, type Skill } from "./use-analysis";
 import { useDraftBackup } from "./use-draft-backup";
@@ -38,19 +40,33 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   const dirty = isDirty(state);
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);
+  const fields = useFieldProblemList();
   const saver = useSave({
     layoutId: layout.id,
     present: doc,
     baseVersion: state.baseVersion,
     onSaved: ed.onSaved,
     onReloaded: ed.onReloaded,
-    beforeLeave: guard.allowNextNavigation,
+    problems: fields.problems,
   });
   const commands = useEditorCommands(ed, tools);
   const blocked = guard.blocker.state === "blocked" || saver.outcome.kind === "conflict";
   useEditorShortcuts(ed, tools, saver.save, !blocked);
+  const proposal = commands.closeProposal;
+  const ghost = useMemo(
+    () => (proposal?.ok ? sampleCentreLine(resolveSections(proposal.document), 0.5) : null),
+    [proposal],
+  );
+  // The analysis is drawn only over the drawing it was made for: after a change of the track it is
+  // cleared (the panel says a new one is being worked out), never left faded in the wrong place.
+  const overlayFits =
+    analysis.overlayDoc !== null &&
+    analysis.overlayDoc.sections === doc.sections &&
+    analysis.overlayDoc.start === doc.start &&
+    analysis.overlayDoc.trackWidth === doc.trackWidth;
 
   return (
+    <FieldProblemsScope registry={fields.registry}>
     <div className="space-y-3">
       <EditorHeader
         club={club}
@@ -59,6 +75,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         saver={saver}
         dirty={dirty}
         baseVersion={state.baseVersion}
+        onLeaveForCopy={guard.allowNextNavigation}
       />
       {backup.found ? (
         <RestoreBanner
@@ -92,8 +109,19 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         units={tools.units}
         editable
         message={commands.closeMessage}
-        onClose={commands.closeTheLoop}
-      />
+        proposing={proposal !== null}
+        onClose={commands.proposeClose}
+      >
+        {proposal ? (
+          <CloseLoopProposal
+            doc={doc}
+            result={proposal}
+            units={tools.units}
+            onApply={commands.applyClose}
+            onCancel={commands.cancelClose}
+          />
+        ) : null}
+      </ClosureBar>
       {state.notice ? (
         <p role="status" className="text-sm text-clay-700">
           {state.notice}
@@ -113,8 +141,9 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
             mode={tools.mode}
             snap={tools.snap}
             units={tools.units}
-            overlay={analysis.overlay}
+            overlay={overlayFits ? analysis.overlay : null}
             overlayStale={analysis.overlayDoc !== doc}
+            ghost={ghost}
             photoUrl={photoUrl(doc.background)}
             fitRequest={tools.fitRequest}
             calibrationPoints={tools.calibrationPoints}
@@ -144,5 +173,6 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         />
       ) : null}
     </div>
+    </FieldProblemsScope>
   );
 }

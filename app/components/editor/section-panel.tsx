@@ -2,6 +2,7 @@ import type { ResolvedSection } from "~/analysis";
 import type { OverlayJump } from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { checkSectionPatch } from "~/lib/editor/field-check";
+import { KEEP_CLOSED_LABELS, type KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
 import {
@@ -20,10 +21,16 @@ interface Props {
   resolved: ResolvedSection | undefined;
   snap: SnapSettings;
   overlayJump: OverlayJump | undefined;
-  /** Applies a changed section; `gesture` groups keystrokes of one field into one undo step. */
-  onSection(section: LayoutSection, gesture: string): void;
+  /**
+   * Applies a changed section; `gesture` groups keystrokes of one field into one undo step.
+   * @returns why it was refused (the end of a sentence), or null when applied.
+   */
+  onSection(section: LayoutSection, gesture: string): string | null;
   onPreset(preset: JumpPreset): void;
   onGestureEnd(): void;
+  /** Which straight keeps the loop closed when the jump changes size. */
+  keepClosedBy: KeepClosedBy;
+  onKeepClosedBy(by: KeepClosedBy): void;
 }
 
 const JUMP_FIELDS: Record<
@@ -78,14 +85,16 @@ export function SectionPanel({
   onSection,
   onPreset,
   onGestureEnd,
+  keepClosedBy,
+  onKeepClosedBy,
 }: Props) {
   const section = doc.sections[index];
   if (!section) return null;
+  const where = `section ${index + 1}`;
   const apply = (field: string, value: unknown): string | null => {
     const out = checkSectionPatch(doc, index, { [field]: value } as Partial<LayoutSection>);
     if (!out.ok) return out.issues.find((i) => i.field === field)?.message ?? out.issues[0].message;
-    onSection(out.section, `field-${section.id}-${field}`);
-    return null;
+    return onSection(out.section, `field-${section.id}-${field}`);
   };
   const num = (
     key: string,
@@ -103,6 +112,7 @@ export function SectionPanel({
       value={value}
       decimals={decimals}
       hint={hint ?? (unit === "m" ? feetHint(value) : undefined)}
+      where={where}
       onValue={(v) => apply(key, v - offset)}
       onDone={onGestureEnd}
     />
@@ -138,6 +148,18 @@ export function SectionPanel({
           onBlur={onGestureEnd}
         />
       </div>
+      <label className="flex items-start gap-2 text-xs text-ink-700">
+        <input
+          type="checkbox"
+          className="mt-0.5"
+          checked={section.locked === true}
+          onChange={(e) => apply("locked", e.target.checked ? true : undefined)}
+        />
+        <span>
+          <span className="font-medium">Locked</span>: <em>Close the loop</em> and the automatic adjustments
+          (a jump&apos;s new size, moving a jump) never change this section. You still can.
+        </span>
+      </label>
       {section.kind === "straight" ? num("length", "Length", "m", section.length) : null}
       {section.kind === "turn" ? (
         <div className="grid grid-cols-2 gap-2">
@@ -178,11 +200,28 @@ export function SectionPanel({
               ))}
             </select>
           </div>
+          <div className="space-y-1">
+            <label htmlFor="keep-closed" className="block text-xs font-medium text-ink-700">
+              When its size changes, keep the loop closed by changing
+            </label>
+            <select
+              id="keep-closed"
+              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
+              value={keepClosedBy}
+              onChange={(e) => onKeepClosedBy(e.target.value as KeepClosedBy)}
+            >
+              {(Object.keys(KEEP_CLOSED_LABELS) as KeepClosedBy[]).map((k) => (
+                <option key={k} value={k}>
+                  {KEEP_CLOSED_LABELS[k]}
+                </option>
+              ))}
+            </select>
+          </div>
           <JumpSideView
             section={section}
             snap={snap}
             takeoffSpeed={overlayJump?.takeoffSpeed}
-            onChange={(s, g) => onSection(s, g)}
+            onChange={(s, g) => void onSection(s, g)}
             onGestureEnd={onGestureEnd}
           />
           <div className="grid grid-cols-2 gap-2">

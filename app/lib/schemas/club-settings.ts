@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { parseNumberText } from "~/lib/number-text";
 import {
+  FIELD_LIMITS,
   GUIDANCE_SET_IDS,
   GUIDANCE_SET_LABELS,
   wordList,
@@ -27,8 +28,8 @@ export const RULE_FIELDS: readonly {
     id: "minTrackWidth",
     label: "Narrowest track width",
     unit: "m",
-    min: 1,
-    max: 10,
+    min: FIELD_LIMITS.trackWidth.min,
+    max: FIELD_LIMITS.trackWidth.max,
     hint: "Width between the track edges.",
   },
   {

@@ -1,13 +1,13 @@
-/** Form schemas for a layout's metadata (name, surface, track width) and its status changes. */
+/** Form schemas for a layout's metadata (name, surface, track width, car classes) and its status changes. */
 import { z } from "zod";
-import { SURFACE_LABELS, SURFACES, wordList, type Surface } from "~/analysis";
+import { FIELD_LIMITS, SURFACE_LABELS, SURFACES, wordList, type Surface } from "~/analysis";
 import { parseNumberText } from "~/lib/number-text";
 
 export type { Surface };
 
-/** Track width limits, m: narrower than 1.5 m two cars cannot pass; wider than 10 m is a car park. */
-export const TRACK_WIDTH_MIN_M = 1.5;
-export const TRACK_WIDTH_MAX_M = 10;
+/** Track width limits, m: the layout file's, the same in every form and the editor (FIELD_LIMITS). */
+export const TRACK_WIDTH_MIN_M = FIELD_LIMITS.trackWidth.min;
+export const TRACK_WIDTH_MAX_M = FIELD_LIMITS.trackWidth.max;
 
 export const layoutNameField = z
   .string({ error: "Enter a name for the layout." })
