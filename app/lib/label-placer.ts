@@ -127,9 +127,7 @@ export function placeLabels(
 ): { placed: PlacedLabel[]; dropped: string[] } {
   const gap = options.gap ?? 0;
   const obstacles = options.obstacles ?? [];
-  const order = requests
-    .map((r, k) => ({ r, k }))
-    .sort((a, b) => b.r.priority - a.r.priority || a.k - b.k);
+  const order = requests.map((r, k) => ({ r, k })).sort((a, b) => b.r.priority - a.r.priority || a.k - b.k);
   const placed: PlacedLabel[] = [];
   const dropped: string[] = [];
   for (const { r } of order) {

@@ -203,10 +203,7 @@ const layoutDocumentShape = z.object({
     .optional(),
   marshalPoints: z
     .array(
-      z.object(
-        { x: measure(L.position), y: measure(L.position) },
-        { error: "must be an object {x, y}" },
-      ),
+      z.object({ x: measure(L.position), y: measure(L.position) }, { error: "must be an object {x, y}" }),
       { error: "must be a list of {x, y}" },
     )
     .max(50, { error: "must have at most 50 points" })

@@ -21,7 +21,10 @@ function changeText(c: SectionChange): string {
 
 /** The tolerance in words: "5 cm and 0.5°". */
 export function toleranceText(units: LengthUnit): string {
-  const gap = units === "m" ? `${(CLOSURE_TOLERANCE.gap * 100).toFixed(0)} cm` : formatLength(CLOSURE_TOLERANCE.gap, units, 2);
+  const gap =
+    units === "m"
+      ? `${(CLOSURE_TOLERANCE.gap * 100).toFixed(0)} cm`
+      : formatLength(CLOSURE_TOLERANCE.gap, units, 2);
   return `${gap} and ${CLOSURE_TOLERANCE.headingDeg}°`;
 }
 
@@ -57,8 +60,8 @@ export function CloseLoopProposal({
   return (
     <div className="basis-full space-y-2 text-sm text-ink-900" data-testid="close-loop-proposal">
       <p className="font-semibold">
-        Proposed change (the dashed line on the plan). Jumps, their run-outs to the next turn and locked sections
-        stay as they are.
+        Proposed change (the dashed line on the plan). Jumps, their run-outs to the next turn and locked
+        sections stay as they are.
       </p>
       <ul className="list-disc space-y-0.5 pl-5" aria-label="Proposed changes">
         {result.changes.map((c) => (

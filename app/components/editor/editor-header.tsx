@@ -69,11 +69,7 @@ export function EditorHeader({
             Open the copy in the editor
           </Link>{" "}
           ·{" "}
-          <Link
-            className="font-medium underline"
-            to={`/layouts/${copied.layoutId}`}
-            onClick={onLeaveForCopy}
-          >
+          <Link className="font-medium underline" to={`/layouts/${copied.layoutId}`} onClick={onLeaveForCopy}>
             its layout page
           </Link>
           . This editor still shows {name}, with your changes unsaved here.

@@ -67,112 +67,112 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
 
   return (
     <FieldProblemsScope registry={fields.registry}>
-    <div className="space-y-3">
-      <EditorHeader
-        club={club}
-        layoutId={layout.id}
-        name={doc.name}
-        saver={saver}
-        dirty={dirty}
-        baseVersion={state.baseVersion}
-        onLeaveForCopy={guard.allowNextNavigation}
-      />
-      {backup.found ? (
-        <RestoreBanner
-          backup={backup.found}
-          onRestore={() => {
-            ed.change(backup.found!.document);
-            backup.dismiss();
-          }}
-          onDiscard={backup.dismiss}
+      <div className="space-y-3">
+        <EditorHeader
+          club={club}
+          layoutId={layout.id}
+          name={doc.name}
+          saver={saver}
+          dirty={dirty}
+          baseVersion={state.baseVersion}
+          onLeaveForCopy={guard.allowNextNavigation}
         />
-      ) : null}
-      <EditorToolbar
-        sectionSelected={selected !== null}
-        canUndo={canUndo(state.history)}
-        canRedo={canRedo(state.history)}
-        preset={tools.preset}
-        snap={tools.snap}
-        units={tools.units}
-        onPreset={tools.setPreset}
-        onAdd={commands.add}
-        onDelete={() => dispatch({ type: "delete-selected" })}
-        onDuplicate={() => dispatch({ type: "duplicate-selected" })}
-        onMove={commands.move}
-        onUndo={() => dispatch({ type: "undo" })}
-        onRedo={() => dispatch({ type: "redo" })}
-        onSnap={tools.setSnap}
-        onUnits={tools.setUnits}
-      />
-      <ClosureBar
-        closure={ed.closure}
-        units={tools.units}
-        editable
-        message={commands.closeMessage}
-        proposing={proposal !== null}
-        onClose={commands.proposeClose}
-      >
-        {proposal ? (
-          <CloseLoopProposal
-            doc={doc}
-            result={proposal}
-            units={tools.units}
-            onApply={commands.applyClose}
-            onCancel={commands.cancelClose}
+        {backup.found ? (
+          <RestoreBanner
+            backup={backup.found}
+            onRestore={() => {
+              ed.change(backup.found!.document);
+              backup.dismiss();
+            }}
+            onDiscard={backup.dismiss}
           />
         ) : null}
-      </ClosureBar>
-      {state.notice ? (
-        <p role="status" className="text-sm text-clay-700">
-          {state.notice}
-        </p>
-      ) : null}
-      <div className="flex flex-col gap-3 lg:flex-row">
-        <div
-          className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
-          aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard"
-          role="application"
+        <EditorToolbar
+          sectionSelected={selected !== null}
+          canUndo={canUndo(state.history)}
+          canRedo={canRedo(state.history)}
+          preset={tools.preset}
+          snap={tools.snap}
+          units={tools.units}
+          onPreset={tools.setPreset}
+          onAdd={commands.add}
+          onDelete={() => dispatch({ type: "delete-selected" })}
+          onDuplicate={() => dispatch({ type: "duplicate-selected" })}
+          onMove={commands.move}
+          onUndo={() => dispatch({ type: "undo" })}
+          onRedo={() => dispatch({ type: "redo" })}
+          onSnap={tools.setSnap}
+          onUnits={tools.setUnits}
+        />
+        <ClosureBar
+          closure={ed.closure}
+          units={tools.units}
+          editable
+          message={commands.closeMessage}
+          proposing={proposal !== null}
+          onClose={commands.proposeClose}
         >
-          <LazyDrawingCanvas
-            doc={doc}
-            sections={sections}
-            selection={state.selection}
-            editable
-            mode={tools.mode}
-            snap={tools.snap}
-            units={tools.units}
-            overlay={overlayFits ? analysis.overlay : null}
-            overlayStale={analysis.overlayDoc !== doc}
-            ghost={ghost}
-            photoUrl={photoUrl(doc.background)}
-            fitRequest={tools.fitRequest}
-            calibrationPoints={tools.calibrationPoints}
-            onSelect={ed.select}
-            onChange={ed.change}
-            onGestureEnd={ed.endGesture}
-            onPlanClick={commands.planClick}
+          {proposal ? (
+            <CloseLoopProposal
+              doc={doc}
+              result={proposal}
+              units={tools.units}
+              onApply={commands.applyClose}
+              onCancel={commands.cancelClose}
+            />
+          ) : null}
+        </ClosureBar>
+        {state.notice ? (
+          <p role="status" className="text-sm text-clay-700">
+            {state.notice}
+          </p>
+        ) : null}
+        <div className="flex flex-col gap-3 lg:flex-row">
+          <div
+            className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
+            aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard"
+            role="application"
+          >
+            <LazyDrawingCanvas
+              doc={doc}
+              sections={sections}
+              selection={state.selection}
+              editable
+              mode={tools.mode}
+              snap={tools.snap}
+              units={tools.units}
+              overlay={overlayFits ? analysis.overlay : null}
+              overlayStale={analysis.overlayDoc !== doc}
+              ghost={ghost}
+              photoUrl={photoUrl(doc.background)}
+              fitRequest={tools.fitRequest}
+              calibrationPoints={tools.calibrationPoints}
+              onSelect={ed.select}
+              onChange={ed.change}
+              onGestureEnd={ed.endGesture}
+              onPlanClick={commands.planClick}
+            />
+          </div>
+          <EditorPanels
+            layoutId={layout.id}
+            ed={ed}
+            tools={tools}
+            commands={commands}
+            analysis={analysis}
+            choice={{ classId, skill, setClassId, setSkill }}
           />
         </div>
-        <EditorPanels
-          layoutId={layout.id}
-          ed={ed}
-          tools={tools}
-          commands={commands}
-          analysis={analysis}
-          choice={{ classId, skill, setClassId, setSkill }}
-        />
+        <LeaveDialog blocker={guard.blocker} />
+        {saver.outcome.kind === "conflict" ? (
+          <ConflictDialog
+            message={saver.outcome.message}
+            busy={saver.busy}
+            onReload={saver.reload}
+            onCopy={saver.saveCopy}
+            onClose={saver.dismiss}
+          />
+        ) : null}
       </div>
-      <LeaveDialog blocker={guard.blocker} />
-      {saver.outcome.kind === "conflict" ? (
-        <ConflictDialog
-          message={saver.outcome.message}
-          busy={saver.busy}
-          onReload={saver.reload}
-          onCopy={saver.saveCopy}
-          onClose={saver.dismiss}
-        />
-      ) : null}
-    </div>
     </FieldProblemsScope>
   );
 }

@@ -15,7 +15,9 @@ export function SitePanel(p: SiteProps) {
         unit="m"
         value={doc.trackWidth}
         hint={`${limitRange(FIELD_LIMITS.trackWidth)} · ${feetHint(doc.trackWidth)} · guidance asks at least 2.4 m (3 m at national level)`}
-        onValue={(v) => inRange(v, FIELD_LIMITS.trackWidth) ?? (onChange(setTrackWidth(doc, v), "track-width"), null)}
+        onValue={(v) =>
+          inRange(v, FIELD_LIMITS.trackWidth) ?? (onChange(setTrackWidth(doc, v), "track-width"), null)
+        }
         onDone={onGestureEnd}
       />
 

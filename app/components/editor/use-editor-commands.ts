@@ -4,7 +4,13 @@
  * click on the plan, the site photo, and the keyboard shortcuts.
  */
 import { useState } from "react";
-import { closeLoop, sampleCentreLine, type CloseLoopResult, type JumpPreset, type LayoutDocument } from "~/analysis";
+import {
+  closeLoop,
+  sampleCentreLine,
+  type CloseLoopResult,
+  type JumpPreset,
+  type LayoutDocument,
+} from "~/analysis";
 import type { KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { Background } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";

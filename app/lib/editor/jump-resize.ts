@@ -47,7 +47,10 @@ export function resizeJump<D extends Pick<LayoutDocument, "sections">>(
   const neighbour = doc.sections[k];
   const side = by === "before" ? "before" : "after";
   if (neighbour.kind !== "straight")
-    return { ok: false, message: `cannot keep the loop closed: the section ${side} the jump is not a straight` };
+    return {
+      ok: false,
+      message: `cannot keep the loop closed: the section ${side} the jump is not a straight`,
+    };
   if (neighbour.locked)
     return { ok: false, message: `cannot keep the loop closed: the straight ${side} the jump is locked` };
   const length = Math.round((neighbour.length - delta) * 1e4) / 1e4;

@@ -115,18 +115,24 @@ function moved(s: JumpSection, id: string, d: number, h: number, snap: SnapSetti
   if (s.preset === "tabletop") {
     const topEnd = lipD + s.tableLength;
     if (id === "table") return { ...s, tableLength: within(L(d - lipD), F.tableLength) };
-    if (id === "foot") return { ...s, landingAngleDeg: within(A(angleOf(s.faceHeight, d - topEnd)), F.jumpAngle) };
+    if (id === "foot")
+      return { ...s, landingAngleDeg: within(A(angleOf(s.faceHeight, d - topEnd)), F.jumpAngle) };
     return null;
   }
-  if (id === "crest") return { ...s, gap: within(L(d - lipD), F.gap), landingHeight: within(H(h), F.jumpHeight) };
+  if (id === "crest")
+    return { ...s, gap: within(L(d - lipD), F.gap), landingHeight: within(H(h), F.jumpHeight) };
   const crestD = lipD + s.gap;
   if (s.preset === "step-up") {
     if (id === "deck") return { ...s, deckLength: within(L(d - crestD), F.deckLength) };
     if (id === "foot")
-      return { ...s, landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), F.jumpAngle) };
+      return {
+        ...s,
+        landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), F.jumpAngle),
+      };
     return null;
   }
-  if (id === "foot") return { ...s, landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD)), F.jumpAngle) };
+  if (id === "foot")
+    return { ...s, landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD)), F.jumpAngle) };
   return null;
 }
 

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { parseNumberText } from "~/lib/number-text";
+import { carClassesField } from "./layouts";
 import {
   FIELD_LIMITS,
   GUIDANCE_SET_IDS,
@@ -102,6 +103,12 @@ const overrideShape = Object.fromEntries(RULE_FIELDS.map((f) => [f.id, overrideF
   RuleId,
   ReturnType<typeof overrideField>
 >;
+
+/** The club's default car classes (a second form on the settings page, told apart by its intent). */
+export const clubCarClassesSchema = z.object({
+  intent: z.literal("default-classes"),
+  carClasses: carClassesField,
+});
 
 /** The settings form: guidance set plus one optional text field per rule. */
 export const clubSettingsSchema = z.object({

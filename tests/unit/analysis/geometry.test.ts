@@ -114,4 +114,3 @@ describe("layout geometry", () => {
     expect(wrapAngle(2 * Math.PI + 0.1)).toBeCloseTo(0.1, 12);
   });
 });
-

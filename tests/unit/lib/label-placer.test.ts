@@ -27,7 +27,9 @@ describe("label placer", () => {
   });
 
   it("never overlaps two labels, nor a label and an obstacle", () => {
-    const requests = Array.from({ length: 40 }, (_, k) => label(`l${k}`, 20 + (k % 8) * 22, 20 + Math.floor(k / 8) * 15, k % 3));
+    const requests = Array.from({ length: 40 }, (_, k) =>
+      label(`l${k}`, 20 + (k % 8) * 22, 20 + Math.floor(k / 8) * 15, k % 3),
+    );
     const obstacle = { x: 90, y: 40, width: 20, height: 20 };
     const { placed, dropped } = placeLabels(requests, { bounds, obstacles: [obstacle], gap: 1 });
     expect(placed.length + dropped.length).toBe(40);

@@ -117,10 +117,13 @@ export function canvasLabels(input: CanvasLabelInput): { labels: CanvasLabel[]; 
       fill: o.fill ?? PAPER,
     });
   };
-  const square = (p: Point, half: number) => obstacles.push({ x: p.x - half, y: p.y - half, width: 2 * half, height: 2 * half });
+  const square = (p: Point, half: number) =>
+    obstacles.push({ x: p.x - half, y: p.y - half, width: 2 * half, height: 2 * half });
   const halfWidth = (doc.trackWidth / 2) * view.scale;
 
-  add("start", "0", "Start", at(doc.start), Math.min(halfWidth, 40) + 4, { font: { size: 11, weight: "700" } });
+  add("start", "0", "Start", at(doc.start), Math.min(halfWidth, 40) + 4, {
+    font: { size: 11, weight: "700" },
+  });
   if (doc.driverStand) {
     const p = at(doc.driverStand);
     square(p, SYMBOL.stand);
@@ -135,7 +138,8 @@ export function canvasLabels(input: CanvasLabelInput): { labels: CanvasLabel[]; 
     const p = at(jumpMarkAt(j));
     square(p, SYMBOL.mark);
     const colour = PLAN.verdict[j.verdict];
-    const selected = input.selectedSection !== null && doc.sections[input.selectedSection]?.id === j.sectionId;
+    const selected =
+      input.selectedSection !== null && doc.sections[input.selectedSection]?.id === j.sectionId;
     add("jump", j.sectionId, `J${k + 1}`, p, SYMBOL.mark + 3, {
       font: { size: 11, weight: "700" },
       outline: colour,
@@ -175,7 +179,9 @@ type Add = (
   text: string,
   anchor: Point,
   offset: number,
-  o?: Partial<Pick<CanvasLabel, "colour" | "outline" | "fill" | "priority" | "positions">> & { font?: LabelFont },
+  o?: Partial<Pick<CanvasLabel, "colour" | "outline" | "fill" | "priority" | "positions">> & {
+    font?: LabelFont;
+  },
 ) => void;
 
 /** Section numbers beside their middles, when a lane is wide enough on screen (the selected one always). */
@@ -185,10 +191,17 @@ function sectionNumbers(input: CanvasLabelInput, add: Add, halfWidth: number) {
   sections.forEach((r, i) => {
     const selected = i === selectedSection;
     if (!all && !selected) return;
-    add("section", doc.sections[i].id, String(i + 1), worldToScreen(view, sectionMiddle(r)), Math.min(halfWidth, 30) + 3, {
-      font: { size: 11, weight: selected ? "700" : "normal" },
-      ...(selected ? { fill: PLAN.selected, colour: "#ffffff", priority: 95 } : {}),
-    });
+    add(
+      "section",
+      doc.sections[i].id,
+      String(i + 1),
+      worldToScreen(view, sectionMiddle(r)),
+      Math.min(halfWidth, 30) + 3,
+      {
+        font: { size: 11, weight: selected ? "700" : "normal" },
+        ...(selected ? { fill: PLAN.selected, colour: "#ffffff", priority: 95 } : {}),
+      },
+    );
   });
 }
 

@@ -172,6 +172,12 @@ function xy(p: Point): [number, number] {
 /** A round handle; its readout is a label of the label layer (canvas-labels.ts). */
 function Knob() {
   return (
-    <Circle radius={8} fill={PLAN.handleFill} stroke={PLAN.handleStroke} strokeWidth={2.5} hitStrokeWidth={16} />
+    <Circle
+      radius={8}
+      fill={PLAN.handleFill}
+      stroke={PLAN.handleStroke}
+      strokeWidth={2.5}
+      hitStrokeWidth={16}
+    />
   );
 }
