@@ -14,9 +14,9 @@ const { db } = useTestDatabase();
 type Errors = Record<string, string[]>;
 const errorsOf = (r: { data: unknown }) => (r.data as { errors: Errors }).errors;
 
-const create = (clubId: string, fields: Record<string, string>, cookie?: string) =>
+const create = (clubId: string, fields: Record<string, string | string[]>, cookie?: string) =>
   run(() => layoutNew.action(args(formRequest(`/clubs/${clubId}/layouts/new`, fields, cookie), { clubId })));
-const change = (layoutId: string, fields: Record<string, string>, cookie?: string) =>
+const change = (layoutId: string, fields: Record<string, string | string[]>, cookie?: string) =>
   run(() => layoutPage.action(args(formRequest(`/layouts/${layoutId}`, fields, cookie), { layoutId })));
 const open = (layoutId: string, cookie?: string) =>
   run(() => layoutPage.loader(args(getRequest(`/layouts/${layoutId}`, cookie), { layoutId })));
