@@ -1,6 +1,6 @@
 /**
  * Which editor fields show a refused value right now, so that a save can be refused while any
- * does, naming them (docs/decisions/0511-save-refused-while-a-field-is-wrong.md). Fields report
+ * does, naming them (docs/decisions/0511-keys-and-saving.md). Fields report
  * through useReportProblem; the editor reads the list through useFieldProblemList.
  */
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from "react";
