@@ -1,4 +1,6 @@
+import { Form } from "react-router";
 import { CAR_CLASS_COUNT } from "~/analysis";
+import { Button } from "~/components/ui/button";
 import { FieldError } from "~/components/ui/form";
 import { CAR_CLASS_OPTIONS, carClassLabel } from "~/lib/car-classes";
 
@@ -44,5 +46,37 @@ export function CarClassPicker({
       </p>
       <FieldError id={errorId} errors={errors} />
     </fieldset>
+  );
+}
+
+/** The club's default car classes: what the new-layout form starts with. */
+export function DefaultClassesForm({
+  checked,
+  errors,
+  busy,
+}: {
+  checked: readonly string[];
+  errors: string[] | undefined;
+  busy: boolean;
+}) {
+  return (
+    <section aria-labelledby="classes-heading" className="space-y-3">
+      <div>
+        <h2 id="classes-heading" className="text-lg font-semibold">
+          Car classes of new layouts
+        </h2>
+        <p className="mt-1 max-w-prose text-sm text-ink-700">
+          A new layout is analysed for these classes until its own settings say otherwise. Each layout keeps
+          the classes it was given.
+        </p>
+      </div>
+      <Form method="post" className="space-y-3" noValidate>
+        <input type="hidden" name="intent" value="default-classes" />
+        <CarClassPicker checked={checked} errors={errors} legend="Default car classes" />
+        <Button type="submit" disabled={busy}>
+          Save the default classes
+        </Button>
+      </Form>
+    </section>
   );
 }

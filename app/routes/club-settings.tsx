@@ -23,7 +23,7 @@ import {
 } from "~/lib/schemas/club-settings";
 import { LIST_FIELDS } from "~/lib/schemas/layouts";
 import { loadClubCarClasses, saveClubCarClasses } from "~/clubs/car-classes.server";
-import { CarClassPicker } from "~/components/car-class-picker";
+import { DefaultClassesForm } from "~/components/car-class-picker";
 
 export const meta: Route.MetaFunction = () => [{ title: "Club settings · Loftline" }];
 
@@ -102,7 +102,7 @@ export default function ClubSettings({ loaderData, actionData }: Route.Component
     values ? (values[id] ?? "") : (guidance.overrides[id as keyof GuidanceOverrides]?.toString() ?? "");
   return (
     <div className="max-w-4xl space-y-10">
-      <DefaultClasses
+      <DefaultClassesForm
         checked={
           classesSent
             ? ((actionData?.values?.carClasses as string[] | undefined) ?? [])
@@ -202,37 +202,5 @@ export default function ClubSettings({ loaderData, actionData }: Route.Component
         </Form>
       </section>
     </div>
-  );
-}
-
-/** The club's default car classes: what the new-layout form starts with. */
-function DefaultClasses({
-  checked,
-  errors,
-  busy,
-}: {
-  checked: readonly string[];
-  errors: string[] | undefined;
-  busy: boolean;
-}) {
-  return (
-    <section aria-labelledby="classes-heading" className="space-y-3">
-      <div>
-        <h2 id="classes-heading" className="text-lg font-semibold">
-          Car classes of new layouts
-        </h2>
-        <p className="mt-1 max-w-prose text-sm text-ink-700">
-          A new layout is analysed for these classes until its own settings say otherwise. Each layout keeps
-          the classes it was given.
-        </p>
-      </div>
-      <Form method="post" className="space-y-3" noValidate>
-        <input type="hidden" name="intent" value="default-classes" />
-        <CarClassPicker checked={checked} errors={errors} legend="Default car classes" />
-        <Button type="submit" disabled={busy}>
-          Save the default classes
-        </Button>
-      </Form>
-    </section>
   );
 }

@@ -2,16 +2,11 @@ import type { ResolvedSection } from "~/analysis";
 import type { OverlayJump } from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { checkSectionPatch } from "~/lib/editor/field-check";
-import { KEEP_CLOSED_LABELS, type KeepClosedBy } from "~/lib/editor/jump-resize";
+import type { KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
-import {
-  JUMP_PRESET_LABELS,
-  JUMP_PRESETS,
-  type JumpPreset,
-  type LayoutDocument,
-  type LayoutSection,
-} from "~/analysis";
+import { JUMP_PRESET_LABELS, type JumpPreset, type LayoutDocument, type LayoutSection } from "~/analysis";
+import { JUMP_FIELDS, JumpChoices } from "./jump-fields";
 import { JumpSideView } from "./jump-side-view";
 import { NumberField } from "./number-field";
 
@@ -31,41 +26,6 @@ interface Props {
   /** Which straight keeps the loop closed when the jump changes size. */
   keepClosedBy: KeepClosedBy;
   onKeepClosedBy(by: KeepClosedBy): void;
-}
-
-const JUMP_FIELDS: Record<
-  Exclude<JumpPreset, "custom">,
-  { key: string; label: string; unit: string; decimals?: number }[]
-> = {
-  tabletop: [
-    { key: "faceHeight", label: "Face height", unit: "m" },
-    { key: "faceAngleDeg", label: "Face angle", unit: "deg", decimals: 1 },
-    { key: "tableLength", label: "Table length", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle", unit: "deg", decimals: 1 },
-  ],
-  double: gapFields(),
-  triple: gapFields(),
-  "step-down": gapFields(),
-  "step-up": [
-    ...gapFields().slice(0, 4),
-    { key: "deckLength", label: "Deck length", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle (off the deck)", unit: "deg", decimals: 1 },
-  ],
-  whoops: [
-    { key: "count", label: "Number of bumps", unit: "bumps", decimals: 0 },
-    { key: "bumpHeight", label: "Bump height", unit: "m" },
-    { key: "spacing", label: "Crest to crest", unit: "m" },
-  ],
-};
-
-function gapFields() {
-  return [
-    { key: "faceHeight", label: "Face height", unit: "m" },
-    { key: "faceAngleDeg", label: "Face angle", unit: "deg", decimals: 1 },
-    { key: "gap", label: "Gap (lip to landing crest)", unit: "m" },
-    { key: "landingHeight", label: "Landing height", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle", unit: "deg", decimals: 1 },
-  ];
 }
 
 /** What a turn reads as in the trade's words (common practice, no source). */
@@ -183,40 +143,12 @@ export function SectionPanel({
       ) : null}
       {section.kind === "jump" ? (
         <>
-          <div className="space-y-1">
-            <label htmlFor="jump-preset" className="block text-xs font-medium text-ink-700">
-              Jump shape
-            </label>
-            <select
-              id="jump-preset"
-              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
-              value={section.preset}
-              onChange={(e) => onPreset(e.target.value as JumpPreset)}
-            >
-              {JUMP_PRESETS.map((p) => (
-                <option key={p} value={p}>
-                  {JUMP_PRESET_LABELS[p]}
-                </option>
-              ))}
-            </select>
-          </div>
-          <div className="space-y-1">
-            <label htmlFor="keep-closed" className="block text-xs font-medium text-ink-700">
-              When its size changes, keep the loop closed by changing
-            </label>
-            <select
-              id="keep-closed"
-              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
-              value={keepClosedBy}
-              onChange={(e) => onKeepClosedBy(e.target.value as KeepClosedBy)}
-            >
-              {(Object.keys(KEEP_CLOSED_LABELS) as KeepClosedBy[]).map((k) => (
-                <option key={k} value={k}>
-                  {KEEP_CLOSED_LABELS[k]}
-                </option>
-              ))}
-            </select>
-          </div>
+          <JumpChoices
+            preset={section.preset}
+            keepClosedBy={keepClosedBy}
+            onPreset={onPreset}
+            onKeepClosedBy={onKeepClosedBy}
+          />
           <JumpSideView
             section={section}
             snap={snap}
