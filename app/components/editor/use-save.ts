@@ -53,6 +53,8 @@ export function useSave({ layoutId, present, baseVersion, onSaved, onReloaded, p
   const reloader = useFetcher({ key: `editor-reload-${layoutId}` });
   /** A save was refused because of fields in error; shown while any field still is. */
   const [blocked, setBlocked] = useState(false);
+  // Once every field is right again, the refusal is over (a later error does not bring it back).
+  if (blocked && problems.length === 0) setBlocked(false);
   const sent = useRef<LayoutDocument | null>(null);
   const handled = useRef<unknown>(null);
   const handledReload = useRef<unknown>(null);
