@@ -47,6 +47,15 @@
  *
  * New jumps (jump-presets.ts)
  * - `defaultJump(preset, id)` -> the preset's starting shape; `DEFAULT_JUMP_PRESET`.
+ *
+ * Field limits (field-limits.ts)
+ * - `FIELD_LIMITS` (min, max, unit of every typed value: trackWidth, straightLength, ...),
+ *   `CAR_CLASS_COUNT`, `limitProblem(value, limit)`, `limitRange(limit)`: forms and editor use them.
+ *
+ * Closing the loop (close-loop.ts)
+ * - `closeLoop(doc, { lengthStep?, angleStep? })` -> the proposed document and its changes (never a
+ *   jump, a run-out or a locked section; snapped to the steps given) or the reason it cannot;
+ *   `isLoopClosed(closure)` within `CLOSURE_TOLERANCE` (5 cm, 0.5 deg); `sectionRoles(sections)`.
  */
 export * from "./words";
 export * from "./format";

@@ -26,7 +26,7 @@ export function isRuleError(error: unknown): error is RuleError {
  * The answer to a refused form: the message beside its field (or the form) with the rule's
  * status. Anything that is not a RuleError is thrown on, to the error page.
  */
-export function refusal(error: unknown, values: Record<string, string> = {}) {
+export function refusal<V extends Record<string, string | string[]>>(error: unknown, values: V = {} as V) {
   if (!isRuleError(error)) throw error;
   const errors: FieldErrors = { [error.field ?? "form"]: [error.message] };
   return data({ errors, values }, { status: error.status });

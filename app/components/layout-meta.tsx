@@ -1,7 +1,9 @@
 import { Field, SelectField, type FieldErrors } from "~/components/ui/form";
 import type { LayoutStatus } from "~/lib/roles";
 import { SURFACE_LABELS, SURFACES, type Surface } from "~/analysis";
+import { carClassLabel } from "~/lib/car-classes";
 import { TRACK_WIDTH_MAX_M, TRACK_WIDTH_MIN_M } from "~/lib/schemas/layouts";
+import { CarClassPicker } from "./car-class-picker";
 
 const STATUS_STYLES: Record<LayoutStatus, string> = {
   draft: "border-clay-500 bg-clay-100 text-clay-700",
@@ -35,6 +37,8 @@ export type LayoutMetaProps = {
   surface: string;
   /** Track width between the edges, m. */
   trackWidth: number;
+  /** Car class ids the layout is analysed for. */
+  carClasses: readonly string[];
   status: LayoutStatus;
   version: number;
   createdAt: Date | string;
@@ -61,6 +65,7 @@ export function LayoutMeta(props: LayoutMetaProps) {
     ["Status", <StatusBadge key="s" status={props.status} />],
     ["Surface", surfaceLabel(props.surface)],
     ["Track width", `${props.trackWidth} m`],
+    ["Car classes", props.carClasses.map(carClassLabel).join(", ")],
     ["Version", String(props.version)],
     [
       "Created",
@@ -80,14 +85,17 @@ export function LayoutMeta(props: LayoutMetaProps) {
   );
 }
 
-/** The name, surface and track width fields, shared by the new-layout form and the layout page. */
+/** The name, surface, track width and car class fields, shared by the new-layout form and the layout page. */
 export function LayoutMetaFields({
   errors,
   values,
 }: {
   errors?: FieldErrors;
-  values?: { name?: string; surface?: string; trackWidth?: number | string };
+  /** What the fields show: the layout's values, or what was sent with an error. */
+  values?: { [field: string]: unknown };
 }) {
+  const text = (v: unknown) => (typeof v === "string" || typeof v === "number" ? String(v) : undefined);
+  const classes = values?.carClasses;
   return (
     <>
       <Field
@@ -95,13 +103,13 @@ export function LayoutMetaFields({
         name="name"
         required
         maxLength={100}
-        defaultValue={values?.name}
+        defaultValue={text(values?.name)}
         errors={errors?.name}
       />
       <SelectField
         label="Surface"
         name="surface"
-        defaultValue={values?.surface ?? "dirt"}
+        defaultValue={text(values?.surface) ?? "dirt"}
         errors={errors?.surface}
       >
         {SURFACES.map((s) => (
@@ -115,9 +123,13 @@ export function LayoutMetaFields({
         name="trackWidth"
         inputMode="decimal"
         required
-        defaultValue={values?.trackWidth ?? 3}
+        defaultValue={text(values?.trackWidth) ?? 3}
         errors={errors?.trackWidth}
         hint={`Between the track edges, ${TRACK_WIDTH_MIN_M} to ${TRACK_WIDTH_MAX_M} m.`}
+      />
+      <CarClassPicker
+        checked={Array.isArray(classes) ? classes.map(String) : typeof classes === "string" ? [classes] : []}
+        errors={errors?.carClasses}
       />
     </>
   );

@@ -35,6 +35,8 @@ export const clubs = sqliteTable("clubs", {
   guidanceSet: text("guidance_set").notNull().default("club"),
   /** JSON object of per-club overrides of guidance values, by rule id. */
   guidanceOverrides: text("guidance_overrides").notNull().default("{}"),
+  /** JSON list of the car class ids a new layout of the club is analysed for; null: the default class. */
+  defaultCarClasses: text("default_car_classes"),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });
@@ -126,6 +128,11 @@ export const layouts = sqliteTable(
     name: text("name").notNull(),
     surface: text("surface").notNull().default("dirt"),
     trackWidth: real("track_width").notNull().default(3),
+    /**
+     * JSON list of the car class ids the layout is analysed for, laid over its document like the
+     * name and width; null: the document's own list (layouts saved before the column existed).
+     */
+    carClasses: text("car_classes"),
     status: text("status", { enum: LAYOUT_STATUSES }).notNull().default("draft"),
     /** Optimistic concurrency: every save must name the version it started from. */
     version: integer("version").notNull().default(1),

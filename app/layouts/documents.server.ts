@@ -3,6 +3,7 @@ import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
 import { type LayoutDocument, parseLayoutDocument } from "~/analysis";
 import { starterDocument } from "~/analysis";
+import { DEFAULT_CAR_CLASSES, readCarClasses } from "~/lib/car-classes";
 
 type LayoutRow = typeof layouts.$inferSelect;
 
@@ -19,9 +20,9 @@ export class StaleVersionError extends Error {
 }
 
 /**
- * The layout's latest document. The layout row owns name, surface and track width (they can be
- * changed from the metadata form), so they are laid over the stored document. A layout that has
- * never been drawn gets the starter loop.
+ * The layout's latest document. The layout row owns name, surface, track width and car classes
+ * (they can be changed from the metadata form), so they are laid over the stored document. A
+ * layout that has never been drawn gets the starter loop.
  */
 export async function loadLayoutDocument(
   layout: LayoutRow,
@@ -33,13 +34,15 @@ export async function loadLayoutDocument(
     .where(eq(layoutVersions.layoutId, layout.id))
     .orderBy(desc(layoutVersions.number))
     .limit(1);
+  const classes = readCarClasses(layout.carClasses);
+  const starter = () => starterDocument(layout.name, layout.trackWidth, classes ?? DEFAULT_CAR_CLASSES);
   let document: LayoutDocument;
   if (latest) {
     const parsed = parseLayoutDocument(latest.document);
     // A stored document was valid when saved; if a later format change broke it, start over visibly.
-    document = parsed.ok ? parsed.document : starterDocument(layout.name, layout.trackWidth);
+    document = parsed.ok ? parsed.document : starter();
   } else {
-    document = starterDocument(layout.name, layout.trackWidth);
+    document = starter();
   }
   return {
     document: {
@@ -47,6 +50,7 @@ export async function loadLayoutDocument(
       name: layout.name,
       surface: layout.surface as LayoutDocument["surface"],
       trackWidth: layout.trackWidth,
+      carClasses: classes ?? document.carClasses,
     },
     versionNumber: latest?.number ?? null,
   };
@@ -66,7 +70,7 @@ export async function loadVersionDocument(layoutId: string, number: number): Pro
 
 /**
  * Saves a document as a new version of the layout, only if the layout is still at `baseVersion`
- * (optimistic concurrency). Updates the row's name, surface and width from the document. All in
+ * (optimistic concurrency). Updates the row's name, surface, width and classes from the document. All in
  * one transaction: either both the version and the row change, or nothing does.
  * @throws StaleVersionError when someone saved meanwhile.
  */
@@ -86,6 +90,7 @@ export async function saveLayoutDocument(
         name: document.name,
         surface: document.surface,
         trackWidth: document.trackWidth,
+        carClasses: JSON.stringify(document.carClasses),
         updatedAt: new Date(),
       })
       .where(and(eq(layouts.id, layoutId), eq(layouts.version, baseVersion)))
@@ -127,6 +132,7 @@ export async function createLayoutFromDocument(
         name: document.name,
         surface: document.surface,
         trackWidth: document.trackWidth,
+        carClasses: JSON.stringify(document.carClasses),
         status: "draft",
         version: 1,
         createdBy: userId,

@@ -1,5 +1,5 @@
 /**
- * A layout's metadata: name, surface, track width, status and version. The drawing itself (the
+ * A layout's metadata: name, surface, track width, car classes, status and version. The drawing itself (the
  * layout document in layout_versions) belongs to the editor. Every change here names the version
  * it started from and bumps it, so two directors editing at once cannot overwrite each other.
  */
@@ -11,7 +11,12 @@ import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
 
-export type LayoutFields = { name: string; surface: Surface; trackWidth: number };
+export type LayoutFields = { name: string; surface: Surface; trackWidth: number; carClasses: string[] };
+
+/** The fields as the row stores them (the class list as JSON). */
+function rowFields({ carClasses, ...rest }: LayoutFields) {
+  return { ...rest, carClasses: JSON.stringify(carClasses) };
+}
 
 export type LayoutListItem = {
   id: string;
@@ -52,7 +57,7 @@ export async function createLayout(
   const db = await getDb();
   const [row] = await db
     .insert(layouts)
-    .values({ clubId, createdBy: userId, ...fields, status: "draft" })
+    .values({ clubId, createdBy: userId, ...rowFields(fields), status: "draft" })
     .returning({ id: layouts.id });
   return row;
 }
@@ -93,9 +98,9 @@ async function changeAt(
   throw new RuleError(409, `This layout is ${now.status}; that change does not apply to it.`, "intent");
 }
 
-/** Renames the layout and sets its surface and track width. */
+/** Renames the layout and sets its surface, track width and car classes. */
 export async function updateLayoutMeta(layoutId: string, expectedVersion: number, fields: LayoutFields) {
-  return changeAt(layoutId, expectedVersion, fields);
+  return changeAt(layoutId, expectedVersion, rowFields(fields));
 }
 
 /** Which status each status change moves from and to. */

@@ -4,14 +4,17 @@ export type FieldErrors = Partial<Record<string, string[]>>;
 
 /**
  * Parses FormData through a zod schema. On failure returns the field errors keyed by field name
- * (nested paths joined with dots), ready to show beside each field.
+ * (nested paths joined with dots), ready to show beside each field. Fields named in `lists` (a
+ * group of checkboxes) are read as lists of every value sent, even one or none.
  */
 export function parseForm<S extends z.ZodType>(
   schema: S,
   formData: FormData,
+  lists: readonly string[] = [],
 ): { ok: true; data: z.infer<S> } | { ok: false; errors: FieldErrors } {
-  const raw: Record<string, FormDataEntryValue> = {};
+  const raw: Record<string, FormDataEntryValue | FormDataEntryValue[]> = {};
   for (const [key, value] of formData) raw[key] = value;
+  for (const key of lists) raw[key] = formData.getAll(key);
   const result = schema.safeParse(raw);
   if (result.success) return { ok: true, data: result.data };
   const errors: FieldErrors = {};

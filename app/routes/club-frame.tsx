@@ -30,7 +30,7 @@ export default function ClubLayout({ loaderData }: Route.ComponentProps) {
           </NavLink>
           {role === "director" ? (
             <NavLink to={`/clubs/${club.id}/settings`} className={tabClass}>
-              Track guidance
+              Settings: classes and guidance
             </NavLink>
           ) : null}
         </nav>

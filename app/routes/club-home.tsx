@@ -25,7 +25,7 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
         {isDirector ? (
           <div className="flex flex-wrap items-center gap-3">
             <Link to={`/clubs/${club.id}/settings`} className="text-sm text-pine-700 hover:underline">
-              Track guidance
+              Settings: classes and guidance
             </Link>
             <Link to={`/clubs/${club.id}/layouts/new`} className={buttonClass()}>
               New layout

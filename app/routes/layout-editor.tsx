@@ -160,7 +160,8 @@ export function shouldRevalidate({ formMethod, defaultShouldRevalidate }: Should
 }
 
 export default function LayoutEditorRoute({ loaderData }: Route.ComponentProps) {
-  return <LayoutEditor {...loaderData} />;
+  // A new layout (the copy, say) gets a fresh editor, not the last one's state.
+  return <LayoutEditor key={loaderData.layout.id} {...loaderData} />;
 }
 
 export function ErrorBoundary({ error, params }: Route.ErrorBoundaryProps) {

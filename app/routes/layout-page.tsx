@@ -19,7 +19,7 @@ import {
 } from "~/layouts/layouts.server";
 import { parseForm } from "~/lib/forms";
 import { formValues } from "~/clubs/form-values.server";
-import { layoutActionSchema } from "~/lib/schemas/layouts";
+import { layoutActionSchema, LIST_FIELDS } from "~/lib/schemas/layouts";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.layout.name ?? "Layout"} · Loftline` },
@@ -56,6 +56,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     name: layout.name,
     surface: layout.surface,
     trackWidth: layout.trackWidth,
+    carClasses: page.document.carClasses,
     status: layout.status,
     version: layout.version,
     createdAt: layout.createdAt,
@@ -79,8 +80,9 @@ const DONE: Record<string, string> = {
 export async function action({ request, params }: Route.ActionArgs) {
   const { layout, club } = await requireLayoutAccess(request, params.layoutId, "director");
   const formData = await request.formData();
-  const parsed = parseForm(layoutActionSchema, formData);
-  if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
+  const parsed = parseForm(layoutActionSchema, formData, LIST_FIELDS);
+  const values = () => ({ ...formValues(formData), carClasses: formData.getAll("carClasses").map(String) });
+  if (!parsed.ok) return data({ errors: parsed.errors, values: values() }, { status: 400 });
   const input = parsed.data;
   try {
     if (input.intent === "delete") {
@@ -88,14 +90,14 @@ export async function action({ request, params }: Route.ActionArgs) {
       throw await redirectWithNotice(request, `/clubs/${club.id}`, `${name} is deleted.`);
     }
     if (input.intent === "update") {
-      const { name, surface, trackWidth } = input;
-      await updateLayoutMeta(layout.id, input.version, { name, surface, trackWidth });
+      const { name, surface, trackWidth, carClasses } = input;
+      await updateLayoutMeta(layout.id, input.version, { name, surface, trackWidth, carClasses });
     } else {
       await changeLayoutStatus(layout.id, input.version, input.intent);
     }
   } catch (error) {
     if (error instanceof Response) throw error;
-    return refusal(error, formValues(formData));
+    return refusal(error, values());
   }
   throw await redirectWithNotice(request, `/layouts/${layout.id}`, DONE[input.intent]);
 }
@@ -143,9 +145,16 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
 }
 
 type Tools = {
-  layout: { name: string; surface: string; trackWidth: number; status: LayoutStatus; version: number };
+  layout: {
+    name: string;
+    surface: string;
+    trackWidth: number;
+    carClasses: readonly string[];
+    status: LayoutStatus;
+    version: number;
+  };
   errors?: FieldErrors;
-  values?: Record<string, string>;
+  values?: Record<string, string | string[]>;
 };
 
 function DirectorTools({ layout, errors, values }: Tools) {

@@ -148,8 +148,26 @@ describe("layout editor", () => {
     await page.keyboard.press("Control+Shift+z");
     await expect.poll(() => sectionList(page).nth(2).textContent()).toBe(dragged);
 
-    await page.getByRole("button", { name: "Close the loop" }).click();
+    // closing the loop first shows the change: a dashed centre line and the list; then applies it
+    await page.getByRole("button", { name: "Close the loop…" }).click();
+    const proposal = page.getByTestId("close-loop-proposal");
+    await proposal.waitFor();
+    expect(await konvaCount(page, "^close-loop-ghost$")).toBe(1);
+    expect(await proposal.getByRole("list", { name: "Proposed changes" }).getByRole("listitem").count()).toBe(
+      1,
+    );
+    expect(await sectionList(page).nth(2).textContent()).toBe(dragged); // nothing changed yet
+    await proposal.getByRole("button", { name: "Apply the change" }).click();
     await page.getByTestId("closure").getByText("Loop closed").waitFor();
+    expect(await konvaCount(page, "^close-loop-ghost$")).toBe(0);
+    // with snapping on, the new length is on the 0.1 m grid
+    const closedLength = Number(
+      /Straight ([\d.]+) m/.exec((await sectionList(page).nth(0).textContent()) ?? "")?.[1] ?? NaN,
+    );
+    const backLength = Number(
+      /Straight ([\d.]+) m/.exec((await sectionList(page).nth(2).textContent()) ?? "")?.[1] ?? NaN,
+    );
+    expect([closedLength, backLength].every((l) => Math.abs(l * 10 - Math.round(l * 10)) < 1e-6)).toBe(true);
     // leaving with unsaved changes asks first
     await page.getByRole("link", { name: "Layout page" }).click();
     const leave = page.getByRole("alertdialog", { name: "Leave without saving?" });
@@ -282,6 +300,13 @@ describe("layout editor", () => {
     await second.keyboard.press("Control+z");
     await expect.poll(() => sectionList(second).first().textContent()).toBe("1. Straight 28.0 m");
     await second.getByRole("button", { name: "Save as a copy" }).click();
+    // the editor stays and says where the copy is, with a link to it
+    const copied = second.getByTestId("copy-status");
+    await copied.waitFor();
+    expect(await copied.textContent()).toMatch(
+      /Saved as a copy: “Two directors .* \(copy\)”, a new draft layout of/,
+    );
+    await copied.getByRole("link", { name: "Open the copy in the editor" }).click();
     await second.waitForURL((u) => u.pathname.endsWith("/edit") && !u.pathname.includes(id));
     await second.waitForFunction(
       () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
@@ -350,6 +375,91 @@ describe("layout editor", () => {
     expect(stage.width).toBeGreaterThan(300);
     expect(stage.height).toBeGreaterThan(300);
     await screenshot(phone, "26-plan-read-only-phone");
+  });
+
+  it("saves with Ctrl+S from a focused field, and refuses to save while a field shows an error, naming it", async () => {
+    const id = await createLayout(`Keyboard ${Date.now()}`);
+    const page = await browser.newPage();
+    await login(page, demoAccount("director"));
+    await openEditor(page, id);
+    await sectionList(page).first().click();
+    const length = page.getByLabel("Length (m)");
+    await length.fill("0.2");
+    await page.getByRole("alert").filter({ hasText: "Length must be at least 0.5 m." }).waitFor();
+    await length.press("Control+s");
+    const status = page.getByTestId("save-status");
+    await expect
+      .poll(() => status.textContent())
+      .toMatch(/^Not saved: Length \(section 1\) shows a value that is refused/);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute("aria-invalid"))).toBe("true");
+    expect(
+      (await queryDb<{ n: number }>("select count(*) as n from layout_versions where layout_id = ?", [id]))[0]
+        .n,
+    ).toBe(0);
+    await length.fill("31.5");
+    await length.press("Control+s"); // still in the field: the editor saves, the browser's dialog stays shut
+    await expect.poll(() => status.textContent()).toMatch(/Saved as version 2|Version 2, no unsaved changes/);
+    expect(await length.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect((await storedDocument(id)).sections[0]).toMatchObject({ length: 31.5 });
+  });
+
+  it("places the canvas labels of the demo layouts so that no two overlap and none leaves the canvas", async () => {
+    const page = await browser.newPage();
+    await login(page, demoAccount("director"));
+    const demo = await queryDb<{ id: string; name: string }>(
+      "select l.id, l.name from layouts l join clubs c on c.id = l.club_id where c.name = ? and l.name in ('Summer layout', 'Wet-weather layout')",
+      [DEMO_CLUB],
+    );
+    expect(demo.length).toBe(2);
+    for (const layout of demo) {
+      await openEditor(page, layout.id);
+      await expect
+        .poll(() => page.getByTestId("analysis-status").textContent(), { timeout: 30_000 })
+        .toMatch(/up to date/);
+      await expect.poll(() => konvaCount(page, "^label label-jump$")).toBeGreaterThan(0);
+      const labels = await page.evaluate(() => {
+        type Rect = { x: number; y: number; width: number; height: number };
+        type Node = {
+          getClientRect(): Rect;
+          getParent(): Node | null;
+          getClassName(): string;
+          text(): string;
+        };
+        const stage = (
+          window as unknown as {
+            Konva: { stages: { find(s: string): Node[]; width(): number; height(): number }[] };
+          }
+        ).Konva.stages[0];
+        const boxes = stage.find("Text").map((t) => {
+          const parent = t.getParent();
+          const r = (parent?.getClassName() === "Label" ? parent : t).getClientRect();
+          return { text: t.text(), ...r };
+        });
+        return { boxes, width: stage.width(), height: stage.height() };
+      });
+      expect(labels.boxes.length).toBeGreaterThan(5);
+      const { boxes } = labels;
+      for (let i = 0; i < boxes.length; i++) {
+        const a = boxes[i];
+        expect(a.x, a.text).toBeGreaterThanOrEqual(-0.5);
+        expect(a.y, a.text).toBeGreaterThanOrEqual(-0.5);
+        expect(a.x + a.width, a.text).toBeLessThanOrEqual(labels.width + 0.5);
+        expect(a.y + a.height, a.text).toBeLessThanOrEqual(labels.height + 0.5);
+        for (let j = i + 1; j < boxes.length; j++) {
+          const b = boxes[j];
+          const overlap =
+            a.x < b.x + b.width - 0.5 &&
+            b.x < a.x + a.width - 0.5 &&
+            a.y < b.y + b.height - 0.5 &&
+            b.y < a.y + a.height - 0.5;
+          expect(overlap, `"${a.text}" and "${b.text}" overlap`).toBe(false);
+        }
+      }
+      // J numbers and M numbers are drawn as on the layout page's plan
+      expect(boxes.some((b) => /^J1$/.test(b.text))).toBe(true);
+      expect(boxes.some((b) => /^M1$/.test(b.text))).toBe(true);
+      await screenshot(page, `28-editor-labels-${layout.name.toLowerCase().replace(/\W+/g, "-")}`);
+    }
   });
 
   it("drags smoothly on a 60-section layout (frame times printed)", async () => {

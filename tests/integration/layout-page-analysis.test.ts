@@ -59,6 +59,7 @@ describe("the layout page's analysis", () => {
       name: "Blank",
       surface: "dirt",
       trackWidth: 3,
+      carClasses: ["buggy-2wd-10"],
     });
     const r = await page(id, "", director.cookie);
     expect(r.status).toBe(200);

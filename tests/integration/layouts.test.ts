@@ -14,9 +14,9 @@ const { db } = useTestDatabase();
 type Errors = Record<string, string[]>;
 const errorsOf = (r: { data: unknown }) => (r.data as { errors: Errors }).errors;
 
-const create = (clubId: string, fields: Record<string, string>, cookie?: string) =>
+const create = (clubId: string, fields: Record<string, string | string[]>, cookie?: string) =>
   run(() => layoutNew.action(args(formRequest(`/clubs/${clubId}/layouts/new`, fields, cookie), { clubId })));
-const change = (layoutId: string, fields: Record<string, string>, cookie?: string) =>
+const change = (layoutId: string, fields: Record<string, string | string[]>, cookie?: string) =>
   run(() => layoutPage.action(args(formRequest(`/layouts/${layoutId}`, fields, cookie), { layoutId })));
 const open = (layoutId: string, cookie?: string) =>
   run(() => layoutPage.loader(args(getRequest(`/layouts/${layoutId}`, cookie), { layoutId })));
@@ -29,7 +29,7 @@ describe("creating a layout", () => {
     const { club, director } = await makeClubWithRoles();
     const r = await create(
       club.id,
-      { name: " Summer loop ", surface: "clay", trackWidth: "3,5" },
+      { name: " Summer loop ", surface: "clay", trackWidth: "3,5", carClasses: ["buggy-2wd-10", "sct-10"] },
       director.cookie,
     );
     expect(r.status).toBe(302);
@@ -39,6 +39,7 @@ describe("creating a layout", () => {
       name: "Summer loop",
       surface: "clay",
       trackWidth: 3.5,
+      carClasses: JSON.stringify(["buggy-2wd-10", "sct-10"]),
       status: "draft",
       version: 1,
       createdBy: director.id,
@@ -54,8 +55,10 @@ describe("creating a layout", () => {
     expect(errors.surface).toEqual(["Choose a surface: dirt, clay, turf or carpet."]);
     expect(errors.trackWidth).toEqual(["Track width must be at most 10 m."]);
     expect((r.data as { values: Record<string, string> }).values.name).toBe("");
-    const narrow = await create(club.id, { name: "A", surface: "dirt", trackWidth: "1.4" }, director.cookie);
-    expect(errorsOf(narrow).trackWidth).toEqual(["Track width must be at least 1.5 m."]);
+    expect(errors.carClasses).toEqual(["Choose at least one car class."]);
+    // the width limits are the layout file's and the editor's (FIELD_LIMITS): 1 to 10 m
+    const narrow = await create(club.id, { name: "A", surface: "dirt", trackWidth: "0.9" }, director.cookie);
+    expect(errorsOf(narrow).trackWidth).toEqual(["Track width must be at least 1 m."]);
     expect(await clubLayouts(club.id)).toEqual([]);
   });
 });
@@ -124,7 +127,14 @@ describe("changing a layout", () => {
     const layout = await makeLayout(club.id, { name: "First" });
     const r = await change(
       layout.id,
-      { intent: "update", version: "1", name: "Second", surface: "turf", trackWidth: "4" },
+      {
+        intent: "update",
+        version: "1",
+        name: "Second",
+        surface: "turf",
+        trackWidth: "4",
+        carClasses: "buggy-2wd-10",
+      },
       director.cookie,
     );
     expect(r.status).toBe(302);
@@ -142,12 +152,26 @@ describe("changing a layout", () => {
     const layout = await makeLayout(club.id, { name: "Kept" });
     await change(
       layout.id,
-      { intent: "update", version: "1", name: "Newer", surface: "dirt", trackWidth: "3" },
+      {
+        intent: "update",
+        version: "1",
+        name: "Newer",
+        surface: "dirt",
+        trackWidth: "3",
+        carClasses: "buggy-2wd-10",
+      },
       director.cookie,
     );
     const stale = await change(
       layout.id,
-      { intent: "update", version: "1", name: "Older", surface: "clay", trackWidth: "5" },
+      {
+        intent: "update",
+        version: "1",
+        name: "Older",
+        surface: "clay",
+        trackWidth: "5",
+        carClasses: "buggy-2wd-10",
+      },
       director.cookie,
     );
     expect(stale.status).toBe(409);
@@ -202,7 +226,14 @@ describe("changing a layout", () => {
     const layout = await makeLayout(club.id);
     const r = await change(
       layout.id,
-      { intent: "update", version: "1", name: "X", surface: "dirt", trackWidth: "wide" },
+      {
+        intent: "update",
+        version: "1",
+        name: "X",
+        surface: "dirt",
+        trackWidth: "wide",
+        carClasses: "buggy-2wd-10",
+      },
       director.cookie,
     );
     expect(r.status).toBe(400);
@@ -223,7 +254,17 @@ describe("director-only layout actions", () => {
     const forms: [string, Record<string, string>][] = [];
     for (const target of [draft, published]) {
       forms.push(
-        [target.id, { intent: "update", version: "1", name: "Renamed", surface: "clay", trackWidth: "4" }],
+        [
+          target.id,
+          {
+            intent: "update",
+            version: "1",
+            name: "Renamed",
+            surface: "clay",
+            trackWidth: "4",
+            carClasses: "buggy-2wd-10",
+          },
+        ],
         [target.id, { intent: "publish", version: "1" }],
         [target.id, { intent: "unpublish", version: "1" }],
         [target.id, { intent: "archive", version: "1" }],
@@ -242,19 +283,38 @@ describe("director-only layout actions", () => {
     }
     for (const who of [marshal, driver, outsider]) {
       expect(
-        (await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" }, who.cookie)).status,
+        (
+          await create(
+            club.id,
+            { name: "Sneaky", surface: "dirt", trackWidth: "3", carClasses: "buggy-2wd-10" },
+            who.cookie,
+          )
+        ).status,
       ).toBe(403);
     }
-    expect((await create(club.id, { name: "Sneaky", surface: "dirt", trackWidth: "3" })).location).toMatch(
-      /^\/sign-in/,
-    );
+    expect(
+      (
+        await create(club.id, {
+          name: "Sneaky",
+          surface: "dirt",
+          trackWidth: "3",
+          carClasses: "buggy-2wd-10",
+        })
+      ).location,
+    ).toMatch(/^\/sign-in/);
     expect(await clubLayouts(club.id)).toEqual(before);
   });
 
   it("answers 404 for a club or a layout that does not exist", async () => {
     const { director } = await makeClubWithRoles();
     expect(
-      (await create("no-such-club", { name: "X", surface: "dirt", trackWidth: "3" }, director.cookie)).status,
+      (
+        await create(
+          "no-such-club",
+          { name: "X", surface: "dirt", trackWidth: "3", carClasses: "buggy-2wd-10" },
+          director.cookie,
+        )
+      ).status,
     ).toBe(404);
     expect(
       (await change("no-such-layout", { intent: "delete", confirm: "yes" }, director.cookie)).status,

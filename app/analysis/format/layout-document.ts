@@ -7,12 +7,13 @@
  */
 import { z } from "zod";
 import { crossFieldIssues } from "./layout-document-checks";
+import { CAR_CLASS_COUNT, FIELD_LIMITS as L, type FieldLimit } from "./field-limits";
 import { GUIDANCE_SET_IDS, JUMP_PRESETS, quotedList, SURFACES } from "../words";
 
 export { MOUND_BACK_SLOPE_DEG, minimumGap } from "./layout-document-checks";
 
 /** A number in a range with messages that name the unit ("must be at least 1 m"). */
-function measure(min: number, max: number, unit: string) {
+function measure({ min, max, unit }: FieldLimit) {
   const u = unit === "" ? "" : ` ${unit}`;
   return z
     .number({
@@ -23,7 +24,7 @@ function measure(min: number, max: number, unit: string) {
 }
 
 function count(min: number, max: number) {
-  return measure(min, max, "").int({ error: "must be a whole number" });
+  return measure({ min, max, unit: "" }).int({ error: "must be a whole number" });
 }
 
 const idSchema = z
@@ -36,29 +37,34 @@ const sectionBase = {
   id: idSchema,
   /** Optional display name, e.g. "Back tabletop". */
   name: z.string({ error: "must be text" }).max(60, { error: "must be at most 60 characters" }).optional(),
+  /**
+   * Locked by the director: "Close the loop" and the editor's automatic adjustments (keeping the
+   * loop closed when a jump changes size, moving a jump along its stretch) never change it.
+   */
+  locked: z.boolean({ error: "must be true or false" }).optional(),
 };
 
 export const straightSectionSchema = z.object({
   ...sectionBase,
   kind: z.literal("straight"),
   /** Length along the centre line, m. */
-  length: measure(0.5, 300, "m"),
+  length: measure(L.straightLength),
 });
 
 export const turnSectionSchema = z.object({
   ...sectionBase,
   kind: z.literal("turn"),
   /** Centre-line radius, m. */
-  radius: measure(1, 300, "m"),
+  radius: measure(L.turnRadius),
   /** Angle turned, degrees (positive; the direction says which way). */
-  angleDeg: measure(1, 360, "deg"),
+  angleDeg: measure(L.turnAngle),
   direction: z.enum(["left", "right"], { error: 'must be "left" or "right"' }),
 });
 
 const jumpBase = { ...sectionBase, kind: z.literal("jump") };
-const faceHeight = measure(0.05, 2, "m");
-const faceAngleDeg = measure(5, 60, "deg");
-const landingAngleDeg = measure(5, 60, "deg");
+const faceHeight = measure(L.jumpHeight);
+const faceAngleDeg = measure(L.jumpAngle);
+const landingAngleDeg = measure(L.jumpAngle);
 
 export const tabletopJumpSchema = z.object({
   ...jumpBase,
@@ -66,7 +72,7 @@ export const tabletopJumpSchema = z.object({
   faceHeight,
   faceAngleDeg,
   /** Flat top between the lip and the top of the landing, m. */
-  tableLength: measure(0.5, 15, "m"),
+  tableLength: measure(L.eyeHeight),
   landingAngleDeg,
 });
 
@@ -75,9 +81,9 @@ const gapJumpFields = {
   faceHeight,
   faceAngleDeg,
   /** Horizontal distance from the lip to the crest of the landing, m. */
-  gap: measure(1, 15, "m"),
+  gap: measure(L.gap),
   /** Height of the landing crest, m. */
-  landingHeight: measure(0.05, 2, "m"),
+  landingHeight: measure(L.jumpHeight),
   landingAngleDeg,
 };
 
@@ -90,11 +96,11 @@ export const stepUpJumpSchema = z.object({
   preset: z.literal("step-up"),
   faceHeight,
   faceAngleDeg,
-  gap: measure(1, 15, "m"),
+  gap: measure(L.gap),
   /** Height of the upper deck the car lands on, m. */
-  landingHeight: measure(0.05, 2, "m"),
+  landingHeight: measure(L.jumpHeight),
   /** Length of the upper deck, m. */
-  deckLength: measure(0.5, 10, "m"),
+  deckLength: measure(L.deckLength),
   /** Angle of the ramp down from the deck, degrees. */
   landingAngleDeg,
 });
@@ -102,13 +108,13 @@ export const stepUpJumpSchema = z.object({
 export const whoopsJumpSchema = z.object({
   ...jumpBase,
   preset: z.literal("whoops"),
-  count: count(2, 30),
-  bumpHeight: measure(0.03, 0.5, "m"),
+  count: count(L.whoopsCount.min, L.whoopsCount.max),
+  bumpHeight: measure(L.bumpHeight),
   /** Crest-to-crest distance, m. */
-  spacing: measure(0.4, 3, "m"),
+  spacing: measure(L.spacing),
 });
 
-const profilePoint = z.tuple([measure(0, 100, "m"), measure(-2, 3, "m")], {
+const profilePoint = z.tuple([measure(L.profileDistance), measure(L.profileHeight)], {
   error: "must be a pair [distance m, height m]",
 });
 
@@ -152,7 +158,7 @@ export const sectionSchema = z.discriminatedUnion(
   },
 );
 
-const pointSchema = z.tuple([measure(-10000, 10000, "m"), measure(-10000, 10000, "m")], {
+const pointSchema = z.tuple([measure(L.position), measure(L.position)], {
   error: "must be a pair [x m, y m]",
 });
 
@@ -172,10 +178,10 @@ const layoutDocumentShape = z.object({
     .optional(),
   surface: z.enum(SURFACES, { error: `must be ${quotedList(SURFACES)}` }),
   /** Track width between the edges, m. */
-  trackWidth: measure(1, 10, "m"),
+  trackWidth: measure(L.trackWidth),
   /** Start pose: position of the start line on the centre line, m, and heading, degrees anticlockwise from +X. */
   start: z.object(
-    { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), headingDeg: measure(-360, 360, "deg") },
+    { x: measure(L.position), y: measure(L.position), headingDeg: measure(L.headingDeg) },
     { error: "must be an object {x, y, headingDeg}" },
   ),
   sections: z
@@ -191,16 +197,13 @@ const layoutDocumentShape = z.object({
   /** Driver stand: position m and the drivers' eye height above the ground m. */
   driverStand: z
     .object(
-      { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m"), eyeHeight: measure(0.5, 15, "m") },
+      { x: measure(L.position), y: measure(L.position), eyeHeight: measure(L.eyeHeight) },
       { error: "must be an object {x, y, eyeHeight}" },
     )
     .optional(),
   marshalPoints: z
     .array(
-      z.object(
-        { x: measure(-10000, 10000, "m"), y: measure(-10000, 10000, "m") },
-        { error: "must be an object {x, y}" },
-      ),
+      z.object({ x: measure(L.position), y: measure(L.position) }, { error: "must be an object {x, y}" }),
       { error: "must be a list of {x, y}" },
     )
     .max(50, { error: "must have at most 50 points" })
@@ -208,8 +211,8 @@ const layoutDocumentShape = z.object({
   /** Car class ids (class presets or a club's own classes). */
   carClasses: z
     .array(idSchema, { error: "must be a list of class ids" })
-    .min(1, { error: "must name at least one car class" })
-    .max(10, { error: "must have at most 10 classes" }),
+    .min(CAR_CLASS_COUNT.min, { error: "must name at least one car class" })
+    .max(CAR_CLASS_COUNT.max, { error: `must have at most ${CAR_CLASS_COUNT.max} classes` }),
   /** Track guidance set the rule checks use. */
   guidance: z.enum(GUIDANCE_SET_IDS, { error: `must be ${quotedList(GUIDANCE_SET_IDS)}` }).default("club"),
   /**
@@ -220,11 +223,11 @@ const layoutDocumentShape = z.object({
     .object(
       {
         fileId: idSchema,
-        x: measure(-10000, 10000, "m"),
-        y: measure(-10000, 10000, "m"),
-        metresPerPixel: measure(0.0001, 10, "m per pixel"),
-        rotationDeg: measure(-360, 360, "deg"),
-        opacity: measure(0, 1, ""),
+        x: measure(L.position),
+        y: measure(L.position),
+        metresPerPixel: measure(L.metresPerPixel),
+        rotationDeg: measure(L.rotationDeg),
+        opacity: measure(L.opacity),
         hidden: z.boolean({ error: "must be true or false" }).default(false),
       },
       { error: "must be an object {fileId, x, y, metresPerPixel, rotationDeg, opacity, hidden}" },

@@ -1,10 +1,17 @@
 import type { LayoutDocument } from "./layout-document";
 
+/** The class a layout is analysed for when nobody chose one: the 1/10 two-wheel-drive buggy. */
+export const DEFAULT_CAR_CLASS = "buggy-2wd-10";
+
 /**
  * The loop a new layout starts from: a closed oval (two 30 m straights joined by two 180-degree
- * turns of radius 8 m), for the 1/10 two-wheel-drive buggy class.
+ * turns of radius 8 m), for the given car classes (the default class when none are given).
  */
-export function starterDocument(name: string, trackWidth: number): LayoutDocument {
+export function starterDocument(
+  name: string,
+  trackWidth: number,
+  carClasses: readonly string[] = [DEFAULT_CAR_CLASS],
+): LayoutDocument {
   return {
     format: "loftline-layout",
     formatVersion: 1,
@@ -20,7 +27,7 @@ export function starterDocument(name: string, trackWidth: number): LayoutDocumen
       { id: "t2", kind: "turn", radius: 8, angleDeg: 180, direction: "left" },
     ],
     marshalPoints: [],
-    carClasses: ["buggy-2wd-10"],
+    carClasses: [...carClasses],
     guidance: "club",
   };
 }

@@ -1,26 +1,37 @@
 /**
- * "Close the loop": adjusts the last sections of a layout so that its end pose meets its start
- * pose (gap 0 m, heading difference 0 deg). See docs/decisions/0202-close-the-loop.md.
+ * "Close the loop": proposes new lengths, radii and angles so that the end of the last section
+ * meets the start within the closure tolerance, keeping the design. See
+ * docs/decisions/0509-close-the-loop-keeps-the-design.md (it replaces decision 0202).
  *
- * Method: among the last few sections, the adjustable values are straight lengths, turn angles and
- * turn radii (jump shapes are never changed). For every choice of three of them, Newton's method
- * solves the three closure equations (x, y, heading); of the solutions that keep every value in
- * its allowed range, the one with the smallest change wins (1 m of length or radius counts as
- * much as 10 degrees of angle).
+ * 1. The heading: only turn angles change it, so one turn (the cheapest whose new angle stays in
+ *    range and, with snapping, on the angle grid) takes the whole heading error.
+ * 2. The position: once the angles are fixed, the end moves exactly linearly with each straight's
+ *    length (along its heading) and each turn's radius (along its chord per metre of radius). Every
+ *    single value and pair of values that cancels the gap is solved, its new values snapped (both
+ *    roundings tried), and the cheapest that closes within tolerance wins.
+ * Jumps, run-outs and locked sections never change (close-loop-values.ts).
  */
 import type { LayoutDocument, LayoutSection } from "../format/layout-document";
-import {
-  advancePose,
-  closureError,
-  resolveSections,
-  sectionShape,
-  startPose,
-  wrapAngle,
-  type Closure,
-  type Pose,
-} from "./geometry";
+import { adjustableValues, type AdjustableField, type AdjustableValue } from "./close-loop-values";
+import { closureError, resolveSections, startPose, type Closure, type ResolvedSection } from "./geometry";
 
-export type AdjustableField = "length" | "angleDeg" | "radius";
+export type { AdjustableField, AdjustableValue, Protection } from "./close-loop-values";
+export { adjustableValues, sectionRoles } from "./close-loop-values";
+
+/** A loop whose end is this close to its start counts as closed: gap m, heading deg. */
+export const CLOSURE_TOLERANCE = { gap: 0.05, headingDeg: 0.5 } as const;
+
+/** True when the gap and the heading error are both within CLOSURE_TOLERANCE. */
+export function isLoopClosed(c: Pick<Closure, "gap" | "headingDeg">): boolean {
+  return c.gap <= CLOSURE_TOLERANCE.gap && Math.abs(c.headingDeg) <= CLOSURE_TOLERANCE.headingDeg;
+}
+
+export interface CloseLoopOptions {
+  /** Snapping step of new lengths and radii, m (0 or absent: no snapping). */
+  lengthStep?: number;
+  /** Snapping step of new angles, degrees (0 or absent: no snapping). */
+  angleStep?: number;
+}
 
 export interface SectionChange {
   index: number;
@@ -32,165 +43,216 @@ export interface SectionChange {
 }
 
 export type CloseLoopResult<T> =
-  | { ok: true; document: T; changes: SectionChange[]; closure: Closure }
+  | {
+      ok: true;
+      document: T;
+      changes: SectionChange[];
+      /** Closure of the proposed document. */
+      closure: Closure;
+      /** False when snapping left a gap larger than the tolerance (the closure says how much). */
+      closed: boolean;
+    }
   | { ok: false; reason: string; closure: Closure };
 
-interface Param {
-  index: number;
-  field: AdjustableField;
-  value: number;
-  min: number;
-  max: number;
-  /** Size of a change that counts as 1 in the score. */
-  unit: number;
+type Doc = Pick<LayoutDocument, "start" | "sections">;
+type Change = { value: AdjustableValue; to: number };
+interface Plan {
+  changes: Change[];
+  cost: number;
+  /** Gap left, m. */
+  residual: number;
 }
 
-const DEG = Math.PI / 180;
-/** Weight of heading against position in the residual, m/rad. */
-const HEADING_WEIGHT = 10;
-const LIMITS: Record<AdjustableField, [number, number, number]> = {
-  length: [0.5, 300, 1],
-  angleDeg: [1, 360, 10],
-  radius: [1, 300, 1],
-};
+/** Heading options tried, cheapest first; pairs of position values come from this many cheapest. */
+const HEADING_OPTIONS = 16;
+const POSITION_VALUES = 48;
 
 /**
- * Adjusts values among the last `tailSections` sections to close the loop.
- * @returns a new document and the changes, or the reason it cannot be closed that way.
+ * Proposes the change that closes the loop. The document is not changed; the result holds a new
+ * one and the list of changes.
  */
-export function closeLoop<T extends Pick<LayoutDocument, "start" | "sections">>(
-  doc: T,
-  tailSections = 6,
-): CloseLoopResult<T> {
-  const sections = resolveSections(doc);
+export function closeLoop<T extends Doc>(doc: T, options: CloseLoopOptions = {}): CloseLoopResult<T> {
   const start = startPose(doc);
-  const closure = closureError(sections, start);
-  if (closure.gap < 1e-6 && Math.abs(closure.headingDeg) < 1e-6)
-    return { ok: true, document: doc, changes: [], closure };
-  const first = Math.max(0, doc.sections.length - tailSections);
-  const params: Param[] = [];
-  for (let i = first; i < doc.sections.length; i++) params.push(...adjustable(doc.sections[i], i));
-  const tailStart = sections[first].start;
-  const tail = doc.sections.slice(first).map((s) => sectionShape(s));
-  let best: { values: number[]; picked: Param[]; score: number } | null = null;
-  for (let a = 0; a < params.length; a++)
-    for (let b = a + 1; b < params.length; b++)
-      for (let c = b + 1; c < params.length; c++) {
-        const picked = [params[a], params[b], params[c]];
-        const values = solve(picked, tail, first, tailStart, start);
-        if (!values) continue;
-        const score = picked.reduce((sum, p, k) => sum + Math.abs(values[k] - p.value) / p.unit, 0);
-        if (!best || score < best.score) best = { values, picked, score };
-      }
-  if (!best) {
-    const reason =
-      "no choice of lengths, angles and radii in the last sections closes the loop within their allowed ranges; reshape the layout by hand";
-    return { ok: false, reason, closure };
+  const closure = closureError(resolveSections(doc), start);
+  if (isLoopClosed(closure)) return { ok: true, document: doc, changes: [], closure, closed: true };
+  const values = adjustableValues(doc.sections);
+  if (values.length === 0)
+    return fail(
+      "every section is a jump, a jump's run-out to the next turn or locked: nothing may change",
+      closure,
+    );
+  const headings = headingFixes(values, doc.sections, closure.headingDeg, options.angleStep ?? 0);
+  if (headings.length === 0) {
+    const grid = options.angleStep ? ` on the ${options.angleStep}° snapping grid` : "";
+    return fail(
+      `no turn that may change can take the heading error of ${Math.abs(closure.headingDeg).toFixed(1)}°${grid}; switch angle snapping off or change a turn by hand`,
+      closure,
+    );
   }
-  const newSections = doc.sections.slice() as LayoutSection[];
-  const changes: SectionChange[] = [];
-  best.picked.forEach((p, k) => {
-    const to = Math.round(best.values[k] * 1e4) / 1e4;
-    if (to === p.value) return;
-    newSections[p.index] = { ...newSections[p.index], [p.field]: to } as LayoutSection;
-    changes.push({ index: p.index, sectionId: doc.sections[p.index].id, field: p.field, from: p.value, to });
-  });
-  const document = { ...doc, sections: newSections };
-  return { ok: true, document, changes, closure: closureError(resolveSections(document), start) };
+  let best: Plan | null = null;
+  for (const h of headings) {
+    const sections = apply(doc.sections, h.changes);
+    const resolved = resolveSections({ start: doc.start, sections });
+    const c = closureError(resolved, start);
+    const movable = values.filter((v) => v.field !== "angleDeg");
+    const p = positionFix(resolved, movable, c, options.lengthStep ?? 0);
+    if (!p) continue;
+    const plan = { changes: [...h.changes, ...p.changes], cost: h.cost + p.cost, residual: p.residual };
+    if (better(plan, best)) best = plan;
+  }
+  if (!best)
+    return fail(
+      "no change of the straights and turns that may change closes the loop within their allowed ranges; reshape the layout by hand",
+      closure,
+    );
+  const document = { ...doc, sections: apply(doc.sections, best.changes) };
+  const after = closureError(resolveSections(document), start);
+  const changes = best.changes
+    .filter((c) => c.to !== c.value.value)
+    .map((c) => ({
+      index: c.value.index,
+      sectionId: doc.sections[c.value.index].id,
+      field: c.value.field,
+      from: c.value.value,
+      to: c.to,
+    }))
+    .sort((a, b) => a.index - b.index);
+  return { ok: true, document, changes, closure: after, closed: isLoopClosed(after) };
 }
 
-function adjustable(s: LayoutSection, index: number): Param[] {
-  const make = (field: AdjustableField, value: number): Param => {
-    const [min, max, unit] = LIMITS[field];
-    return { index, field, value, min, max, unit };
-  };
-  if (s.kind === "straight") return [make("length", s.length)];
-  if (s.kind === "turn") return [make("angleDeg", s.angleDeg), make("radius", s.radius)];
-  return [];
+function fail<T>(reason: string, closure: Closure): CloseLoopResult<T> {
+  return { ok: false, reason, closure };
 }
 
-type Shape = { length: number; curvature: number };
-
-/** Weighted closure residual of the tail with the picked values. */
-function residual(
-  picked: Param[],
-  values: number[],
-  tail: Shape[],
-  first: number,
-  tailStart: Pose,
-  start: Pose,
-  out: number[],
-): void {
-  const pose: Pose = { ...tailStart };
-  for (let k = 0; k < tail.length; k++) {
-    let { length, curvature } = tail[k];
-    const index = first + k;
-    const sign = Math.sign(curvature);
-    let radius = sign === 0 ? 0 : 1 / Math.abs(curvature);
-    let angle = sign === 0 ? 0 : length / radius;
-    for (let p = 0; p < picked.length; p++) {
-      if (picked[p].index !== index) continue;
-      if (picked[p].field === "length") length = values[p];
-      else if (picked[p].field === "radius") radius = values[p];
-      else angle = values[p] * DEG;
-    }
-    if (sign !== 0) {
-      curvature = sign / radius;
-      length = angle * radius;
-    }
-    advancePose(pose, length, curvature, pose);
-  }
-  out[0] = pose.x - start.x;
-  out[1] = pose.y - start.y;
-  out[2] = HEADING_WEIGHT * wrapAngle(pose.heading - start.heading);
+/** A plan that closes beats one that does not; then the cheaper, or the one leaving less gap. */
+function better(a: Plan, b: Plan | null): boolean {
+  if (!b) return true;
+  const aCloses = a.residual <= CLOSURE_TOLERANCE.gap;
+  const bCloses = b.residual <= CLOSURE_TOLERANCE.gap;
+  if (aCloses !== bCloses) return aCloses;
+  return aCloses ? a.cost < b.cost - 1e-12 : a.residual < b.residual - 1e-9;
 }
 
-/** Newton's method on the three picked values; null when it fails or leaves the allowed ranges. */
-function solve(picked: Param[], tail: Shape[], first: number, tailStart: Pose, start: Pose): number[] | null {
-  const v = picked.map((p) => p.value);
-  const r = [0, 0, 0];
-  const rp = [0, 0, 0];
-  const J = [
-    [0, 0, 0],
-    [0, 0, 0],
-    [0, 0, 0],
-  ];
-  for (let iter = 0; iter < 40; iter++) {
-    residual(picked, v, tail, first, tailStart, start, r);
-    if (Math.hypot(r[0], r[1], r[2]) < 1e-9)
-      return v.every((x, k) => x >= picked[k].min && x <= picked[k].max) ? v : null;
-    for (let k = 0; k < 3; k++) {
-      const h = 1e-6 * Math.max(1, Math.abs(v[k]));
-      const keep = v[k];
-      v[k] = keep + h;
-      residual(picked, v, tail, first, tailStart, start, rp);
-      v[k] = keep;
-      for (let row = 0; row < 3; row++) J[row][k] = (rp[row] - r[row]) / h;
-    }
-    const step = solve3(J, r);
-    if (!step) return null;
-    // Damp big steps so a value does not jump far outside its range in one go.
-    let scale = 1;
-    for (let k = 0; k < 3; k++)
-      scale = Math.min(scale, (20 * picked[k].unit) / Math.max(1e-12, Math.abs(step[k])));
-    for (let k = 0; k < 3; k++) v[k] -= scale * step[k];
-    if (v.some((x) => !Number.isFinite(x) || x <= 0)) return null;
-  }
-  return null;
-}
-
-/** Solves J x = r for 3x3 J by Cramer's rule; null when J is (nearly) singular. */
-function solve3(J: number[][], r: number[]): number[] | null {
-  const det = (m: number[][]) =>
-    m[0][0] * (m[1][1] * m[2][2] - m[1][2] * m[2][1]) -
-    m[0][1] * (m[1][0] * m[2][2] - m[1][2] * m[2][0]) +
-    m[0][2] * (m[1][0] * m[2][1] - m[1][1] * m[2][0]);
-  const d = det(J);
-  if (!Number.isFinite(d) || Math.abs(d) < 1e-10) return null;
-  const out = [0, 0, 0];
-  for (let k = 0; k < 3; k++) {
-    const m = J.map((row, i) => row.map((x, j) => (j === k ? r[i] : x)));
-    out[k] = det(m) / d;
-  }
+function apply(sections: readonly LayoutSection[], changes: Change[]): LayoutSection[] {
+  const out = sections.slice();
+  for (const c of changes)
+    out[c.value.index] = { ...out[c.value.index], [c.value.field]: c.to } as LayoutSection;
   return out;
+}
+
+/** Cleans binary noise off a value: 0.1 mm or 0.0001 degree. */
+const clean = (x: number) => Math.round(x * 1e4) / 1e4;
+
+function onGrid(x: number, step: number): boolean {
+  return !(step > 0) || Math.abs(x / step - Math.round(x / step)) < 1e-7;
+}
+
+/** One turn taking the whole heading error, cheapest first (none needed when within tolerance). */
+function headingFixes(
+  values: AdjustableValue[],
+  sections: readonly LayoutSection[],
+  headingDeg: number,
+  step: number,
+): { changes: Change[]; cost: number }[] {
+  if (Math.abs(headingDeg) <= CLOSURE_TOLERANCE.headingDeg) return [{ changes: [], cost: 0 }];
+  const out: { changes: Change[]; cost: number }[] = [];
+  for (const v of values) {
+    if (v.field !== "angleDeg") continue;
+    const s = sections[v.index] as Extract<LayoutSection, { kind: "turn" }>;
+    const sign = s.direction === "left" ? 1 : -1;
+    const options = [-360, 0, 360]
+      .map((k) => clean(v.value - sign * headingDeg + k))
+      .filter((to) => to >= v.limit.min && to <= v.limit.max && onGrid(to, step))
+      .sort((a, b) => Math.abs(a - v.value) - Math.abs(b - v.value));
+    if (options.length) {
+      const to = options[0];
+      out.push({ changes: [{ value: v, to }], cost: Math.abs(to - v.value) * v.unitCost });
+    }
+  }
+  return out.sort((a, b) => a.cost - b.cost).slice(0, HEADING_OPTIONS);
+}
+
+/** How the end moves per unit of a length (along the straight) or a radius (along the chord), m/m. */
+function direction(v: AdjustableValue, r: ResolvedSection): [number, number] {
+  const h = r.start.heading;
+  if (v.field === "length") return [Math.cos(h), Math.sin(h)];
+  const sign = Math.sign(r.curvature);
+  const h2 = r.end.heading;
+  return [sign * (Math.sin(h2) - Math.sin(h)), sign * (Math.cos(h) - Math.cos(h2))];
+}
+
+/** The cheapest single value or pair of values (lengths, radii) that cancels the gap. */
+function positionFix(
+  resolved: ResolvedSection[],
+  values: AdjustableValue[],
+  c: Closure,
+  step: number,
+): Plan | null {
+  if (c.gap <= CLOSURE_TOLERANCE.gap) return { changes: [], cost: 0, residual: c.gap };
+  const g: [number, number] = [c.dx, c.dy];
+  const cands = values
+    .map((v) => ({ v, w: direction(v, resolved[v.index]) }))
+    .filter((x) => Math.hypot(x.w[0], x.w[1]) > 1e-9)
+    .sort((a, b) => a.v.unitCost - b.v.unitCost)
+    .slice(0, POSITION_VALUES);
+  let best: Plan | null = null;
+  const consider = (picked: { v: AdjustableValue; w: [number, number] }[], deltas: number[]) => {
+    const p = snapped(picked, deltas, g, step);
+    if (p && better(p, best)) best = p;
+  };
+  for (let a = 0; a < cands.length; a++) {
+    const A = cands[a];
+    const ww = A.w[0] * A.w[0] + A.w[1] * A.w[1];
+    const cross = A.w[0] * g[1] - A.w[1] * g[0];
+    if (Math.abs(cross) <= 1e-9 * Math.sqrt(ww) * c.gap + 1e-12)
+      consider([A], [-(A.w[0] * g[0] + A.w[1] * g[1]) / ww]);
+    for (let b = a + 1; b < cands.length; b++) {
+      const B = cands[b];
+      const det = A.w[0] * B.w[1] - A.w[1] * B.w[0];
+      if (Math.abs(det) < 1e-6) continue;
+      // Solve dA wA + dB wB = -g by Cramer's rule.
+      const dA = (-g[0] * B.w[1] + g[1] * B.w[0]) / det;
+      const dB = (-A.w[0] * g[1] + A.w[1] * g[0]) / det;
+      consider([A, B], [dA, dB]);
+    }
+  }
+  return best;
+}
+
+/** The picked values moved by the deltas, snapped (each rounding tried), inside their ranges. */
+function snapped(
+  picked: { v: AdjustableValue; w: [number, number] }[],
+  deltas: number[],
+  g: [number, number],
+  step: number,
+): Plan | null {
+  const options = picked.map(({ v }, k) => {
+    const x = v.value + deltas[k];
+    if (Math.abs(deltas[k]) < 1e-9) return [v.value];
+    const raw = step > 0 ? [Math.floor(x / step) * step, Math.ceil(x / step) * step] : [x];
+    return [...new Set(raw.map(clean))].filter((to) => to >= v.limit.min && to <= v.limit.max);
+  });
+  if (options.some((o) => o.length === 0)) return null;
+  let best: Plan | null = null;
+  const pick = (k: number, chosen: number[]) => {
+    if (k === picked.length) {
+      let rx = g[0];
+      let ry = g[1];
+      let cost = 0;
+      const changes: Change[] = [];
+      chosen.forEach((to, i) => {
+        const { v, w } = picked[i];
+        rx += (to - v.value) * w[0];
+        ry += (to - v.value) * w[1];
+        cost += Math.abs(to - v.value) * v.unitCost;
+        changes.push({ value: v, to });
+      });
+      const plan = { changes, cost, residual: Math.hypot(rx, ry) };
+      if (better(plan, best)) best = plan;
+      return;
+    }
+    for (const to of options[k]) pick(k + 1, [...chosen, to]);
+  };
+  pick(0, []);
+  return best;
 }

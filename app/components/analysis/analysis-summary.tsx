@@ -1,3 +1,4 @@
+import { isLoopClosed } from "~/analysis";
 import type { SummaryData } from "./summary-data";
 import { degrees, metres, seconds, speed } from "./format";
 
@@ -6,7 +7,7 @@ import { degrees, metres, seconds, speed } from "./format";
  * the approach is too short to clear. Every figure is a model estimate (the note says so).
  */
 export function AnalysisSummary({ analysis }: { analysis: SummaryData }) {
-  const closed = analysis.closure.gap < 0.05 && Math.abs(analysis.closure.headingDeg) < 1;
+  const closed = isLoopClosed(analysis.closure);
   return (
     <section aria-labelledby="summary-heading" className="space-y-3">
       <h2 id="summary-heading" className="text-lg font-semibold">

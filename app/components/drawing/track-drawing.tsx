@@ -2,6 +2,7 @@ import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { SPEED_BINS } from "~/lib/editor/speed-scale";
 import { extent } from "./drawing-geometry";
+import { drawingLabels } from "./drawing-labels";
 import { DrawingLegend } from "./drawing-legend";
 import { TrackLines } from "./track-lines";
 import { JumpMarks, SiteMarks, StartAndSpeeds } from "./track-marks";
@@ -25,7 +26,9 @@ type Props = {
  * the speed of the chosen class, speeds printed at each corner and straight, jump marks whose shape
  * gives the verdict (each a link to the jump's page), the driver stand, marshal points, the site
  * boundary, stretches hidden from the stand and lanes that come too close. The parts are drawn by
- * track-lines.tsx and track-marks.tsx with one pen (track-pen.ts).
+ * track-lines.tsx and track-marks.tsx with one pen (track-pen.ts); every label is placed by the
+ * label placer the editor's canvas uses too (drawing-labels.ts), so none overlaps another or is cut
+ * off at the edge.
  */
 export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, classLabel }: Props) {
   const { line, speedRange } = overlay;
@@ -39,6 +42,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
   const w = box.maxX - box.minX;
   const h = box.maxY - box.minY;
   const pen = makePen(Math.max(w, h));
+  const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
   return (
     <figure className="space-y-3">
       <svg
@@ -49,10 +53,17 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
         aria-label={`${title}: plan drawn to scale, ${overlay.jumps.length} jumps marked`}
         fontFamily="Inter, sans-serif"
       >
-        <TrackLines overlay={overlay} site={site} pts={pts} pen={pen} />
-        <StartAndSpeeds pts={pts} speed={line.speed} trackWidth={site.trackWidth} pen={pen} />
-        <SiteMarks site={site} pen={pen} />
-        <JumpMarks jumps={overlay.jumps} numbers={numbers} names={names} jumpHref={jumpHref} pen={pen} />
+        <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
+        <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
+        <SiteMarks site={site} labels={labels} pen={pen} />
+        <JumpMarks
+          jumps={overlay.jumps}
+          numbers={numbers}
+          names={names}
+          jumpHref={jumpHref}
+          labels={labels}
+          pen={pen}
+        />
       </svg>
       <figcaption className="space-y-3">
         <p className="text-sm text-ink-700">

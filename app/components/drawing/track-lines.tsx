@@ -6,6 +6,7 @@
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { binStyle, SPEED_BINS, speedRuns } from "~/lib/editor/speed-scale";
+import { LabelText, type Labels } from "./track-marks";
 import type { Pen } from "./track-pen";
 
 type Site = Pick<LayoutDocument, "siteBoundary" | "trackWidth">;
@@ -14,12 +15,14 @@ export function TrackLines({
   overlay,
   site,
   pts,
+  labels,
   pen,
 }: {
   overlay: AnalysisOverlay;
   site: Site;
   /** The centre line's points, plan m. */
   pts: [number, number][];
+  labels: Labels;
   pen: Pen;
 }) {
   const { P, fs } = pen;
@@ -74,13 +77,21 @@ export function TrackLines({
           />
         );
       })}
-      <LaneConflicts conflicts={overlay.laneConflicts} pen={pen} />
+      <LaneConflicts conflicts={overlay.laneConflicts} labels={labels} pen={pen} />
     </>
   );
 }
 
-/** Lanes that come too close: a line between the two points and the distance written on it. */
-function LaneConflicts({ conflicts, pen }: { conflicts: AnalysisOverlay["laneConflicts"]; pen: Pen }) {
+/** Lanes that come too close: a line between the two points and the distance written beside it. */
+function LaneConflicts({
+  conflicts,
+  labels,
+  pen,
+}: {
+  conflicts: AnalysisOverlay["laneConflicts"];
+  labels: Labels;
+  pen: Pen;
+}) {
   return conflicts.map((c, i) => (
     <g key={`c${i}`}>
       <line
@@ -92,15 +103,7 @@ function LaneConflicts({ conflicts, pen }: { conflicts: AnalysisOverlay["laneCon
         strokeWidth={2}
         vectorEffect="non-scaling-stroke"
       />
-      <text
-        x={(c.a[0] + c.b[0]) / 2}
-        y={-(c.a[1] + c.b[1]) / 2}
-        fontSize={pen.fs * 0.8}
-        fill={PLAN.conflict}
-        {...pen.halo}
-      >
-        {c.distance.toFixed(1)} m apart
-      </text>
+      <LabelText label={labels.get(`conflict-${i}`)} pen={pen} fill={PLAN.conflict} />
     </g>
   ));
 }

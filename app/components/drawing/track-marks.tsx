@@ -6,23 +6,51 @@
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { VERDICT_MARK_OUTLINE, VERDICT_MARKS } from "~/lib/verdict-marks";
 import { PLAN } from "~/components/editor/colours";
-import { speedLabels } from "./drawing-geometry";
+import { MARK, type DrawingLabel } from "./drawing-labels";
 import type { Pen } from "./track-pen";
+
+/** Placed labels by id (drawing-labels.ts); a label that is missing was dropped for want of room. */
+export type Labels = ReadonlyMap<string, DrawingLabel>;
+
+/** One placed label's text, centred in its box, with the paper halo. */
+export function LabelText({
+  label,
+  pen,
+  fill = PLAN.text,
+}: {
+  label: DrawingLabel | undefined;
+  pen: Pen;
+  fill?: string;
+}) {
+  if (!label) return null;
+  return (
+    <text
+      x={label.x + label.width / 2}
+      y={label.y + label.height / 2}
+      fontSize={label.size}
+      fontWeight={label.bold ? 600 : undefined}
+      textAnchor="middle"
+      dominantBaseline="central"
+      fill={fill}
+      {...pen.halo}
+    >
+      {label.text}
+    </text>
+  );
+}
 
 /** The start bar and chevron, "Start" beside it, and the slowest and fastest speeds along the lap. */
 export function StartAndSpeeds({
   pts,
-  speed,
   trackWidth,
+  labels,
   pen,
 }: {
   pts: [number, number][];
-  speed: readonly number[];
   trackWidth: number;
+  labels: Labels;
   pen: Pen;
 }) {
-  const { fs, halo } = pen;
-  const labels = speedLabels(speed, 1, Math.max(10, Math.round(pts.length / 14)));
   return (
     <>
       <path
@@ -32,74 +60,51 @@ export function StartAndSpeeds({
         strokeWidth={2}
         vectorEffect="non-scaling-stroke"
       />
-      <text
-        x={pts[0][0]}
-        y={-pts[0][1] + trackWidth + fs}
-        fontSize={fs}
-        textAnchor="middle"
-        fill={PLAN.text}
-        {...halo}
-      >
-        Start
-      </text>
-      {labels.map((l) => (
-        <text
-          key={l.index}
-          x={pts[l.index][0] + fs * 0.5}
-          y={-pts[l.index][1] + fs * 1.2}
-          fontSize={fs * 0.85}
-          fill={PLAN.text}
-          {...halo}
-        >
-          {l.kind === "min" ? "\u25bc" : "\u25b2"}
-          {l.speed.toFixed(1)}
-        </text>
-      ))}
+      <LabelText label={labels.get("start")} pen={pen} />
+      {[...labels.keys()]
+        .filter((id) => id.startsWith("speed-"))
+        .map((id) => (
+          <LabelText key={id} label={labels.get(id)} pen={pen} />
+        ))}
     </>
   );
 }
 
-/** The driver stand (a square) and the marshal points (numbered diamonds). */
+/** The driver stand (a square) and the marshal points (diamonds), each with its placed label. */
 export function SiteMarks({
   site,
+  labels,
   pen,
 }: {
   site: Pick<LayoutDocument, "driverStand" | "marshalPoints">;
+  labels: Labels;
   pen: Pen;
 }) {
-  const { fs, halo } = pen;
+  const { fs } = pen;
+  const s = fs * MARK.stand;
+  const m = fs * MARK.marshal;
   return (
     <>
       {site.driverStand ? (
         <g>
           <rect
-            x={site.driverStand.x - fs * 0.6}
-            y={-site.driverStand.y - fs * 0.6}
-            width={fs * 1.2}
-            height={fs * 1.2}
+            x={site.driverStand.x - s}
+            y={-site.driverStand.y - s}
+            width={2 * s}
+            height={2 * s}
             fill={PLAN.stand}
           />
-          <text
-            x={site.driverStand.x}
-            y={-site.driverStand.y + fs * 1.8}
-            fontSize={fs}
-            textAnchor="middle"
-            fill={PLAN.text}
-            {...halo}
-          >
-            Driver stand
-          </text>
+          <LabelText label={labels.get("stand")} pen={pen} />
         </g>
       ) : null}
-      {site.marshalPoints.map((m, i) => (
-        <g key={`m${i}`} transform={`translate(${m.x} ${-m.y})`}>
+      {site.marshalPoints.map((p, i) => (
+        <g key={`m${i}`}>
           <path
-            d={`M 0 ${-fs * 0.6} L ${fs * 0.6} 0 L 0 ${fs * 0.6} L ${-fs * 0.6} 0 Z`}
+            d={`M 0 ${-m} L ${m} 0 L 0 ${m} L ${-m} 0 Z`}
+            transform={`translate(${p.x} ${-p.y})`}
             fill={PLAN.marshal}
           />
-          <text x={fs * 0.8} y={fs * 0.35} fontSize={fs * 0.8} fill={PLAN.text} {...halo}>
-            M{i + 1}
-          </text>
+          <LabelText label={labels.get(`marshal-${i}`)} pen={pen} />
         </g>
       ))}
     </>
@@ -112,17 +117,19 @@ export function JumpMarks({
   numbers,
   names,
   jumpHref,
+  labels,
   pen,
 }: {
   jumps: AnalysisOverlay["jumps"];
   numbers: Record<string, number>;
   names: Record<string, string>;
   jumpHref: (sectionId: string) => string;
+  labels: Labels;
   pen: Pen;
 }) {
-  const { fs, halo } = pen;
+  const { fs } = pen;
   return jumps.map((j) => {
-    const r = fs * 0.75;
+    const r = fs * MARK.jump;
     const n = numbers[j.sectionId];
     return (
       <a
@@ -149,17 +156,7 @@ export function JumpMarks({
           stroke="white"
           strokeWidth={VERDICT_MARK_OUTLINE}
         />
-        <text
-          x={j.lip[0]}
-          y={-j.lip[1] - r * 1.5}
-          fontSize={fs * 0.9}
-          fontWeight={600}
-          textAnchor="middle"
-          fill={PLAN.text}
-          {...halo}
-        >
-          J{n}
-        </text>
+        <LabelText label={labels.get(`jump-${j.sectionId}`)} pen={pen} />
       </a>
     );
   });

@@ -2,7 +2,7 @@
  * What the plan canvas needs and reports. Kept apart from the canvas itself so the editor's
  * panels can use the types without loading konva (which only the canvas chunk imports).
  */
-import type { ResolvedSection } from "~/analysis";
+import type { CentreLine, ResolvedSection } from "~/analysis";
 import type { AnalysisOverlay } from "~/analysis";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { Selection } from "~/lib/editor/editor-state";
@@ -29,6 +29,8 @@ export interface DrawingCanvasProps {
   overlay: AnalysisOverlay | null;
   /** The overlay was computed for an older drawing (shown faded until the new one arrives). */
   overlayStale: boolean;
+  /** The centre line "Close the loop" proposes, drawn dashed over the track until applied or dismissed. */
+  ghost?: CentreLine | null;
   photoUrl: string | null;
   /** Increase to ask the canvas to fit the layout into view. */
   fitRequest: number;

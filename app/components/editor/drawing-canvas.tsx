@@ -9,7 +9,7 @@ import { useState } from "react";
 import { Layer, Stage } from "react-konva";
 import type { DrawingCanvasProps } from "./canvas-types";
 import { ScaleBar, SpeedLegend, ZoomControls } from "./canvas-overlays";
-import { OverlayShape } from "~/components/editor/canvas/overlay-shape";
+import { GhostLine, OverlayShape } from "~/components/editor/canvas/overlay-shape";
 import { BackdropLayer, MarkerLayer, TrackLayer } from "~/components/editor/canvas/plan-layers";
 import { useCanvasPointer } from "~/components/editor/canvas/use-canvas-pointer";
 import { useCanvasView } from "~/components/editor/canvas/use-canvas-view";
@@ -58,8 +58,9 @@ export default function DrawingCanvas(props: DrawingCanvasProps) {
           />
           <Layer listening={false}>
             {overlay ? <OverlayShape overlay={overlay} view={view} stale={props.overlayStale} /> : null}
+            {props.ghost ? <GhostLine line={props.ghost} view={view} /> : null}
           </Layer>
-          <MarkerLayer props={props} view={view} selectedSection={selectedSection} />
+          <MarkerLayer props={props} view={view} size={size} selectedSection={selectedSection} />
         </Stage>
       ) : null}
       {view ? <ScaleBar scale={view.scale} units={props.units} /> : null}

@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import { DrawingTitle } from "~/components/drawing/drawing-title";
 import { Button } from "~/components/ui/button";
 import type { useSave } from "./use-save";
@@ -21,6 +22,7 @@ export function EditorHeader({
   saver,
   dirty,
   baseVersion,
+  onLeaveForCopy,
 }: {
   club: { id: string; name: string };
   layoutId: string;
@@ -28,8 +30,11 @@ export function EditorHeader({
   saver: Saver;
   dirty: boolean;
   baseVersion: number;
+  /** Lets the way to the copy through the unsaved-changes guard (the drawing is in the copy). */
+  onLeaveForCopy(): void;
 }) {
   const refused = saver.outcome.kind === "refused";
+  const copied = saver.outcome.kind === "copied" ? saver.outcome : null;
   return (
     <header className="flex flex-wrap items-center gap-x-4 gap-y-2">
       <DrawingTitle
@@ -53,6 +58,23 @@ export function EditorHeader({
           Save
         </Button>
       </div>
+      {copied ? (
+        <p
+          role="status"
+          data-testid="copy-status"
+          className="basis-full rounded-md bg-ok-100 px-3 py-1.5 text-sm text-ok-700"
+        >
+          Saved as a copy: “{copied.name}”, a new draft layout of {club.name}.{" "}
+          <Link className="font-medium underline" to={copied.url} onClick={onLeaveForCopy}>
+            Open the copy in the editor
+          </Link>{" "}
+          ·{" "}
+          <Link className="font-medium underline" to={`/layouts/${copied.layoutId}`} onClick={onLeaveForCopy}>
+            its layout page
+          </Link>
+          . This editor still shows {name}, with your changes unsaved here.
+        </p>
+      ) : null}
     </header>
   );
 }

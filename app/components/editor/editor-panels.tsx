@@ -1,5 +1,7 @@
 import { initialPlacement } from "~/lib/editor/background";
+import { resizeJump } from "~/lib/editor/jump-resize";
 import { changeSectionKind } from "~/lib/editor/section-ops";
+import type { LayoutSection } from "~/analysis";
 import { AnalysisPanel } from "./analysis-panel";
 import { HelpPanel } from "./help-panel";
 import { Panel } from "./panel";
@@ -31,6 +33,17 @@ interface Props {
 export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }: Props) {
   const { doc, sections, selected, state, change, select, endGesture } = ed;
   const selectSection = (index: number) => select({ kind: "section", index });
+  /** A changed section; a jump's new size is given or taken by the straight chosen to keep the loop closed. */
+  const onSection = (index: number, s: LayoutSection, gesture: string): string | null => {
+    if (s.kind === "jump") {
+      const out = resizeJump(doc, index, s, tools.keepClosedBy);
+      if (!out.ok) return out.message;
+      change(out.doc, gesture);
+      return null;
+    }
+    change({ ...doc, sections: doc.sections.map((x, i) => (i === index ? s : x)) }, gesture);
+    return null;
+  };
   return (
     <aside
       className="space-y-2 lg:max-h-[calc(62vh+9rem)] lg:w-[22rem] lg:overflow-y-auto"
@@ -44,11 +57,15 @@ export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }
             resolved={sections[selected]}
             snap={tools.snap}
             overlayJump={analysis.overlay?.jumps.find((j) => j.sectionId === doc.sections[selected]?.id)}
-            onSection={(s, g) =>
-              change({ ...doc, sections: doc.sections.map((x, i) => (i === selected ? s : x)) }, g)
-            }
-            onPreset={(p) => change(changeSectionKind(doc, selected, "jump", p))}
+            onSection={(s, g) => onSection(selected, s, g)}
+            onPreset={(p) => {
+              const next = changeSectionKind(doc, selected, "jump", p);
+              const kept = resizeJump(doc, selected, next.sections[selected] as never, tools.keepClosedBy);
+              change(kept.ok ? kept.doc : next);
+            }}
             onGestureEnd={endGesture}
+            keepClosedBy={tools.keepClosedBy}
+            onKeepClosedBy={tools.setKeepClosedBy}
           />
         ) : (
           <p className="text-sm text-ink-500">Click a section on the plan or in the list to change it.</p>

@@ -3,16 +3,18 @@
  * and the live analysis. State lives in one reducer (app/lib/editor/editor-state.ts, through
  * useEditorDocument); the canvas and the panels only dispatch changes.
  */
-import { useState } from "react";
-import type { LayoutDocument } from "~/analysis";
+import { useMemo, useState } from "react";
+import { resolveSections, sampleCentreLine, type LayoutDocument } from "~/analysis";
 import { photoUrl } from "~/components/drawing/drawing-title";
 import { isDirty } from "~/lib/editor/editor-state";
 import { canRedo, canUndo } from "~/lib/editor/history";
+import { CloseLoopProposal } from "./close-loop-proposal";
 import { ClosureBar } from "./closure-bar";
 import { ConflictDialog, RestoreBanner } from "./editor-dialogs";
 import { EditorHeader } from "./editor-header";
 import { EditorPanels } from "./editor-panels";
 import { EditorToolbar } from "./editor-toolbar";
+import { FieldProblemsScope, useFieldProblemList } from "./field-problems";
 import { LazyDrawingCanvas } from "./lazy-drawing-canvas";
 import { useAnalysis, type Skill } from "./use-analysis";
 import { useDraftBackup } from "./use-draft-backup";
@@ -38,111 +40,139 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
   const dirty = isDirty(state);
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);
+  const fields = useFieldProblemList();
   const saver = useSave({
     layoutId: layout.id,
     present: doc,
     baseVersion: state.baseVersion,
     onSaved: ed.onSaved,
     onReloaded: ed.onReloaded,
-    beforeLeave: guard.allowNextNavigation,
+    problems: fields.problems,
   });
   const commands = useEditorCommands(ed, tools);
   const blocked = guard.blocker.state === "blocked" || saver.outcome.kind === "conflict";
   useEditorShortcuts(ed, tools, saver.save, !blocked);
+  const proposal = commands.closeProposal;
+  const ghost = useMemo(
+    () => (proposal?.ok ? sampleCentreLine(resolveSections(proposal.document), 0.5) : null),
+    [proposal],
+  );
+  // The analysis is drawn only over the drawing it was made for: after a change of the track it is
+  // cleared (the panel says a new one is being worked out), never left faded in the wrong place.
+  const overlayFits =
+    analysis.overlayDoc !== null &&
+    analysis.overlayDoc.sections === doc.sections &&
+    analysis.overlayDoc.start === doc.start &&
+    analysis.overlayDoc.trackWidth === doc.trackWidth;
 
   return (
-    <div className="space-y-3">
-      <EditorHeader
-        club={club}
-        layoutId={layout.id}
-        name={doc.name}
-        saver={saver}
-        dirty={dirty}
-        baseVersion={state.baseVersion}
-      />
-      {backup.found ? (
-        <RestoreBanner
-          backup={backup.found}
-          onRestore={() => {
-            ed.change(backup.found!.document);
-            backup.dismiss();
-          }}
-          onDiscard={backup.dismiss}
+    <FieldProblemsScope registry={fields.registry}>
+      <div className="space-y-3">
+        <EditorHeader
+          club={club}
+          layoutId={layout.id}
+          name={doc.name}
+          saver={saver}
+          dirty={dirty}
+          baseVersion={state.baseVersion}
+          onLeaveForCopy={guard.allowNextNavigation}
         />
-      ) : null}
-      <EditorToolbar
-        sectionSelected={selected !== null}
-        canUndo={canUndo(state.history)}
-        canRedo={canRedo(state.history)}
-        preset={tools.preset}
-        snap={tools.snap}
-        units={tools.units}
-        onPreset={tools.setPreset}
-        onAdd={commands.add}
-        onDelete={() => dispatch({ type: "delete-selected" })}
-        onDuplicate={() => dispatch({ type: "duplicate-selected" })}
-        onMove={commands.move}
-        onUndo={() => dispatch({ type: "undo" })}
-        onRedo={() => dispatch({ type: "redo" })}
-        onSnap={tools.setSnap}
-        onUnits={tools.setUnits}
-      />
-      <ClosureBar
-        closure={ed.closure}
-        units={tools.units}
-        editable
-        message={commands.closeMessage}
-        onClose={commands.closeTheLoop}
-      />
-      {state.notice ? (
-        <p role="status" className="text-sm text-clay-700">
-          {state.notice}
-        </p>
-      ) : null}
-      <div className="flex flex-col gap-3 lg:flex-row">
-        <div
-          className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
-          aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard"
-          role="application"
+        {backup.found ? (
+          <RestoreBanner
+            backup={backup.found}
+            onRestore={() => {
+              ed.change(backup.found!.document);
+              backup.dismiss();
+            }}
+            onDiscard={backup.dismiss}
+          />
+        ) : null}
+        <EditorToolbar
+          sectionSelected={selected !== null}
+          canUndo={canUndo(state.history)}
+          canRedo={canRedo(state.history)}
+          preset={tools.preset}
+          snap={tools.snap}
+          units={tools.units}
+          onPreset={tools.setPreset}
+          onAdd={commands.add}
+          onDelete={() => dispatch({ type: "delete-selected" })}
+          onDuplicate={() => dispatch({ type: "duplicate-selected" })}
+          onMove={commands.move}
+          onUndo={() => dispatch({ type: "undo" })}
+          onRedo={() => dispatch({ type: "redo" })}
+          onSnap={tools.setSnap}
+          onUnits={tools.setUnits}
+        />
+        <ClosureBar
+          closure={ed.closure}
+          units={tools.units}
+          editable
+          message={commands.closeMessage}
+          proposing={proposal !== null}
+          onClose={commands.proposeClose}
         >
-          <LazyDrawingCanvas
-            doc={doc}
-            sections={sections}
-            selection={state.selection}
-            editable
-            mode={tools.mode}
-            snap={tools.snap}
-            units={tools.units}
-            overlay={analysis.overlay}
-            overlayStale={analysis.overlayDoc !== doc}
-            photoUrl={photoUrl(doc.background)}
-            fitRequest={tools.fitRequest}
-            calibrationPoints={tools.calibrationPoints}
-            onSelect={ed.select}
-            onChange={ed.change}
-            onGestureEnd={ed.endGesture}
-            onPlanClick={commands.planClick}
+          {proposal ? (
+            <CloseLoopProposal
+              doc={doc}
+              result={proposal}
+              units={tools.units}
+              onApply={commands.applyClose}
+              onCancel={commands.cancelClose}
+            />
+          ) : null}
+        </ClosureBar>
+        {state.notice ? (
+          <p role="status" className="text-sm text-clay-700">
+            {state.notice}
+          </p>
+        ) : null}
+        <div className="flex flex-col gap-3 lg:flex-row">
+          <div
+            className="relative h-[62vh] min-h-[380px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
+            aria-label="Plan of the layout: drag handles to reshape, or use the panels and keyboard"
+            role="application"
+          >
+            <LazyDrawingCanvas
+              doc={doc}
+              sections={sections}
+              selection={state.selection}
+              editable
+              mode={tools.mode}
+              snap={tools.snap}
+              units={tools.units}
+              overlay={overlayFits ? analysis.overlay : null}
+              overlayStale={analysis.overlayDoc !== doc}
+              ghost={ghost}
+              photoUrl={photoUrl(doc.background)}
+              fitRequest={tools.fitRequest}
+              calibrationPoints={tools.calibrationPoints}
+              onSelect={ed.select}
+              onChange={ed.change}
+              onGestureEnd={ed.endGesture}
+              onPlanClick={commands.planClick}
+            />
+          </div>
+          <EditorPanels
+            layoutId={layout.id}
+            ed={ed}
+            tools={tools}
+            commands={commands}
+            analysis={analysis}
+            choice={{ classId, skill, setClassId, setSkill }}
           />
         </div>
-        <EditorPanels
-          layoutId={layout.id}
-          ed={ed}
-          tools={tools}
-          commands={commands}
-          analysis={analysis}
-          choice={{ classId, skill, setClassId, setSkill }}
-        />
+        <LeaveDialog blocker={guard.blocker} />
+        {saver.outcome.kind === "conflict" ? (
+          <ConflictDialog
+            message={saver.outcome.message}
+            busy={saver.busy}
+            onReload={saver.reload}
+            onCopy={saver.saveCopy}
+            onClose={saver.dismiss}
+          />
+        ) : null}
       </div>
-      <LeaveDialog blocker={guard.blocker} />
-      {saver.outcome.kind === "conflict" ? (
-        <ConflictDialog
-          message={saver.outcome.message}
-          busy={saver.busy}
-          onReload={saver.reload}
-          onCopy={saver.saveCopy}
-          onClose={saver.dismiss}
-        />
-      ) : null}
-    </div>
+    </FieldProblemsScope>
   );
 }

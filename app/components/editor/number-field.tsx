@@ -1,5 +1,6 @@
 import { useId, useState } from "react";
 import { parseNumberText } from "~/lib/number-text";
+import { useReportProblem } from "./field-problems";
 
 const inputClass =
   "block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm tabular-nums shadow-sm focus:border-pine-600 aria-[invalid=true]:border-danger-700";
@@ -14,6 +15,8 @@ export interface NumberFieldProps {
   /** What the up and down arrow keys add or take away (default 1). */
   step?: number;
   hint?: string;
+  /** Where the field is, named when a save is refused because of it, e.g. "section 3". */
+  where?: string;
   /** Gets the typed number; returns an error message for the field, or null when accepted. */
   onValue(value: number): string | null;
   onDone?(): void;
@@ -32,6 +35,7 @@ export function NumberField({
   decimals = 2,
   step,
   hint,
+  where,
   onValue,
   onDone,
   disabled,
@@ -41,6 +45,7 @@ export function NumberField({
   const [error, setError] = useState<string | null>(null);
   const [focused, setFocused] = useState(false);
   const [shown, setShown] = useState(value);
+  useReportProblem(id, error ? { label: where ? `${label} (${where})` : label, inputId: id } : null);
   // Follow changes made elsewhere (a drag, undo); never overwrite what is being typed.
   if (!focused && value !== shown) {
     setShown(value);

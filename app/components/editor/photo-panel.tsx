@@ -1,3 +1,4 @@
+import { FIELD_LIMITS, limitProblem } from "~/analysis";
 import type { Background } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { CanvasMode } from "./canvas-types";
@@ -133,9 +134,8 @@ function PhotoAdjustments({
         value={bg.rotationDeg}
         decimals={1}
         onValue={(v) =>
-          Math.abs(v) > 360
-            ? "must be between -360 and 360 deg"
-            : (onBackground({ ...bg, rotationDeg: v }, "photo-rotation"), null)
+          limitProblem(v, FIELD_LIMITS.rotationDeg) ??
+          (onBackground({ ...bg, rotationDeg: v }, "photo-rotation"), null)
         }
         onDone={onGestureEnd}
       />

@@ -2,15 +2,11 @@ import type { ResolvedSection } from "~/analysis";
 import type { OverlayJump } from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { checkSectionPatch } from "~/lib/editor/field-check";
+import type { KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
-import {
-  JUMP_PRESET_LABELS,
-  JUMP_PRESETS,
-  type JumpPreset,
-  type LayoutDocument,
-  type LayoutSection,
-} from "~/analysis";
+import { JUMP_PRESET_LABELS, type JumpPreset, type LayoutDocument, type LayoutSection } from "~/analysis";
+import { JUMP_FIELDS, JumpChoices } from "./jump-fields";
 import { JumpSideView } from "./jump-side-view";
 import { NumberField } from "./number-field";
 
@@ -20,45 +16,16 @@ interface Props {
   resolved: ResolvedSection | undefined;
   snap: SnapSettings;
   overlayJump: OverlayJump | undefined;
-  /** Applies a changed section; `gesture` groups keystrokes of one field into one undo step. */
-  onSection(section: LayoutSection, gesture: string): void;
+  /**
+   * Applies a changed section; `gesture` groups keystrokes of one field into one undo step.
+   * @returns why it was refused (the end of a sentence), or null when applied.
+   */
+  onSection(section: LayoutSection, gesture: string): string | null;
   onPreset(preset: JumpPreset): void;
   onGestureEnd(): void;
-}
-
-const JUMP_FIELDS: Record<
-  Exclude<JumpPreset, "custom">,
-  { key: string; label: string; unit: string; decimals?: number }[]
-> = {
-  tabletop: [
-    { key: "faceHeight", label: "Face height", unit: "m" },
-    { key: "faceAngleDeg", label: "Face angle", unit: "deg", decimals: 1 },
-    { key: "tableLength", label: "Table length", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle", unit: "deg", decimals: 1 },
-  ],
-  double: gapFields(),
-  triple: gapFields(),
-  "step-down": gapFields(),
-  "step-up": [
-    ...gapFields().slice(0, 4),
-    { key: "deckLength", label: "Deck length", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle (off the deck)", unit: "deg", decimals: 1 },
-  ],
-  whoops: [
-    { key: "count", label: "Number of bumps", unit: "bumps", decimals: 0 },
-    { key: "bumpHeight", label: "Bump height", unit: "m" },
-    { key: "spacing", label: "Crest to crest", unit: "m" },
-  ],
-};
-
-function gapFields() {
-  return [
-    { key: "faceHeight", label: "Face height", unit: "m" },
-    { key: "faceAngleDeg", label: "Face angle", unit: "deg", decimals: 1 },
-    { key: "gap", label: "Gap (lip to landing crest)", unit: "m" },
-    { key: "landingHeight", label: "Landing height", unit: "m" },
-    { key: "landingAngleDeg", label: "Landing angle", unit: "deg", decimals: 1 },
-  ];
+  /** Which straight keeps the loop closed when the jump changes size. */
+  keepClosedBy: KeepClosedBy;
+  onKeepClosedBy(by: KeepClosedBy): void;
 }
 
 /** What a turn reads as in the trade's words (common practice, no source). */
@@ -78,14 +45,16 @@ export function SectionPanel({
   onSection,
   onPreset,
   onGestureEnd,
+  keepClosedBy,
+  onKeepClosedBy,
 }: Props) {
   const section = doc.sections[index];
   if (!section) return null;
+  const where = `section ${index + 1}`;
   const apply = (field: string, value: unknown): string | null => {
     const out = checkSectionPatch(doc, index, { [field]: value } as Partial<LayoutSection>);
     if (!out.ok) return out.issues.find((i) => i.field === field)?.message ?? out.issues[0].message;
-    onSection(out.section, `field-${section.id}-${field}`);
-    return null;
+    return onSection(out.section, `field-${section.id}-${field}`);
   };
   const num = (
     key: string,
@@ -103,6 +72,7 @@ export function SectionPanel({
       value={value}
       decimals={decimals}
       hint={hint ?? (unit === "m" ? feetHint(value) : undefined)}
+      where={where}
       onValue={(v) => apply(key, v - offset)}
       onDone={onGestureEnd}
     />
@@ -138,6 +108,18 @@ export function SectionPanel({
           onBlur={onGestureEnd}
         />
       </div>
+      <label className="flex items-start gap-2 text-xs text-ink-700">
+        <input
+          type="checkbox"
+          className="mt-0.5"
+          checked={section.locked === true}
+          onChange={(e) => apply("locked", e.target.checked ? true : undefined)}
+        />
+        <span>
+          <span className="font-medium">Locked</span>: <em>Close the loop</em> and the automatic adjustments
+          (a jump&apos;s new size, moving a jump) never change this section. You still can.
+        </span>
+      </label>
       {section.kind === "straight" ? num("length", "Length", "m", section.length) : null}
       {section.kind === "turn" ? (
         <div className="grid grid-cols-2 gap-2">
@@ -161,28 +143,17 @@ export function SectionPanel({
       ) : null}
       {section.kind === "jump" ? (
         <>
-          <div className="space-y-1">
-            <label htmlFor="jump-preset" className="block text-xs font-medium text-ink-700">
-              Jump shape
-            </label>
-            <select
-              id="jump-preset"
-              className="block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm"
-              value={section.preset}
-              onChange={(e) => onPreset(e.target.value as JumpPreset)}
-            >
-              {JUMP_PRESETS.map((p) => (
-                <option key={p} value={p}>
-                  {JUMP_PRESET_LABELS[p]}
-                </option>
-              ))}
-            </select>
-          </div>
+          <JumpChoices
+            preset={section.preset}
+            keepClosedBy={keepClosedBy}
+            onPreset={onPreset}
+            onKeepClosedBy={onKeepClosedBy}
+          />
           <JumpSideView
             section={section}
             snap={snap}
             takeoffSpeed={overlayJump?.takeoffSpeed}
-            onChange={(s, g) => onSection(s, g)}
+            onChange={(s, g) => void onSection(s, g)}
             onGestureEnd={onGestureEnd}
           />
           <div className="grid grid-cols-2 gap-2">

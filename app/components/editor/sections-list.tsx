@@ -4,7 +4,7 @@ import { turnWord } from "./section-panel";
 
 /** One line describing a section: "Left hairpin 180° R 6.0 m". */
 export function describeSection(s: LayoutSection, r?: ResolvedSection): string {
-  const name = s.name ? ` “${s.name}”` : "";
+  const name = `${s.name ? ` “${s.name}”` : ""}${s.locked ? " (locked)" : ""}`;
   if (s.kind === "straight") return `Straight ${s.length.toFixed(1)} m${name}`;
   if (s.kind === "turn")
     return `${s.direction === "left" ? "Left" : "Right"} ${turnWord(s.radius, s.angleDeg)} ${s.angleDeg.toFixed(0)}° R ${s.radius.toFixed(1)} m${name}`;

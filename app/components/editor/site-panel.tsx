@@ -1,3 +1,4 @@
+import { FIELD_LIMITS, limitRange } from "~/analysis";
 import { placeDriverStand, removeDriverStand, setTrackWidth } from "~/lib/editor/site-ops";
 import { feetHint } from "~/lib/editor/units";
 import { toolClass } from "./editor-toolbar";
@@ -13,8 +14,10 @@ export function SitePanel(p: SiteProps) {
         label="Track width"
         unit="m"
         value={doc.trackWidth}
-        hint={`${feetHint(doc.trackWidth)} · guidance asks at least 2.4 m (3 m at national level)`}
-        onValue={(v) => inRange(v, 1, 10, "m") ?? (onChange(setTrackWidth(doc, v), "track-width"), null)}
+        hint={`${limitRange(FIELD_LIMITS.trackWidth)} · ${feetHint(doc.trackWidth)} · guidance asks at least 2.4 m (3 m at national level)`}
+        onValue={(v) =>
+          inRange(v, FIELD_LIMITS.trackWidth) ?? (onChange(setTrackWidth(doc, v), "track-width"), null)
+        }
         onDone={onGestureEnd}
       />
 
@@ -56,7 +59,7 @@ export function StandSection(p: SiteProps) {
               unit="m"
               value={doc.driverStand.eyeHeight}
               onValue={(v) =>
-                inRange(v, 0.5, 15, "m") ??
+                inRange(v, FIELD_LIMITS.eyeHeight) ??
                 (onChange(placeDriverStand(doc, doc.driverStand!, v), "stand-eye"), null)
               }
               onDone={onGestureEnd}

@@ -10,7 +10,7 @@ import {
   type Bounds,
   rectangleBoundary,
 } from "~/lib/editor/site-ops";
-import type { LayoutDocument } from "~/analysis";
+import { FIELD_LIMITS, limitProblem, type FieldLimit, type LayoutDocument } from "~/analysis";
 import type { CanvasMode } from "./canvas-types";
 import { toolClass } from "./editor-toolbar";
 import { NumberField } from "./number-field";
@@ -27,8 +27,8 @@ export interface SiteProps {
   onGestureEnd(): void;
 }
 
-export const inRange = (v: number, min: number, max: number, unit: string) =>
-  v < min ? `must be at least ${min} ${unit}` : v > max ? `must be at most ${max} ${unit}` : null;
+/** Why a typed value is refused by its limit (FIELD_LIMITS), or null. */
+export const inRange = (v: number, l: FieldLimit) => limitProblem(v, l);
 
 /** The parts' shared helpers: toggle a placing mode, its pressed look, and a coordinate field. */
 export function siteTools({ mode, onMode, onChange, onGestureEnd }: SiteProps) {
@@ -40,7 +40,7 @@ export function siteTools({ mode, onMode, onChange, onGestureEnd }: SiteProps) {
       unit="m"
       value={value}
       decimals={2}
-      onValue={(v) => inRange(v, -10000, 10000, "m") ?? (onChange(set(v), gesture), null)}
+      onValue={(v) => inRange(v, FIELD_LIMITS.position) ?? (onChange(set(v), gesture), null)}
       onDone={onGestureEnd}
     />
   );

@@ -4,16 +4,24 @@
  * click on the plan, the site photo, and the keyboard shortcuts.
  */
 import { useState } from "react";
-import { closeLoop, sampleCentreLine, type JumpPreset } from "~/analysis";
+import {
+  closeLoop,
+  sampleCentreLine,
+  type CloseLoopResult,
+  type JumpPreset,
+  type LayoutDocument,
+} from "~/analysis";
+import type { KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { Background } from "~/lib/editor/background";
 import type { Point } from "~/lib/editor/drag-maths";
 import { insertSection, moveSection, newSection, type NewSectionKind } from "~/lib/editor/section-ops";
 import { addBoundaryPoint, addMarshalPoint, placeDriverStand } from "~/lib/editor/site-ops";
-import { DEFAULT_SNAP, type SnapSettings } from "~/lib/editor/snap";
+import { DEFAULT_SNAP, SNAP_STEPS, type SnapSettings } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
 import { layoutBounds } from "~/lib/editor/view";
 import type { CanvasMode } from "./canvas-types";
 import type { EditorDocument } from "./use-editor-document";
+import { appliedText } from "./close-loop-proposal";
 import { useEditorKeys } from "./use-editor-keys";
 
 export function useEditorTools() {
@@ -23,6 +31,8 @@ export function useEditorTools() {
   const [preset, setPreset] = useState<JumpPreset>("tabletop");
   const [fitRequest, setFitRequest] = useState(0);
   const [calibrationPoints, setCalibrationPoints] = useState<Point[]>([]);
+  /** Which straight gives or takes the length when a jump changes size. */
+  const [keepClosedBy, setKeepClosedBy] = useState<KeepClosedBy>("before");
   const requestFit = () => setFitRequest((n) => n + 1);
   return {
     mode,
@@ -37,22 +47,24 @@ export function useEditorTools() {
     requestFit,
     calibrationPoints,
     setCalibrationPoints,
+    keepClosedBy,
+    setKeepClosedBy,
   };
 }
 
 export type EditorTools = ReturnType<typeof useEditorTools>;
 
-/** A sentence listing what closing the loop changed, or null when it changed nothing. */
-function closeLoopMessage(changes: { index: number; field: string; from: number; to: number }[]) {
-  const what = changes.map(
-    (c) =>
-      `section ${c.index + 1} ${c.field === "angleDeg" ? "angle" : c.field} ${c.from.toFixed(1)} → ${c.to.toFixed(1)}${c.field === "angleDeg" ? "°" : " m"}`,
-  );
-  return what.length ? `Closed by changing ${what.join(", ")}. Undo brings the old values back.` : null;
+/** A proposal of "Close the loop" for the drawing it was made from. */
+interface Proposal {
+  from: LayoutDocument;
+  result: CloseLoopResult<LayoutDocument>;
 }
 
 export function useEditorCommands({ doc, sections, selected, change }: EditorDocument, tools: EditorTools) {
-  const [closeMessage, setCloseMessage] = useState<string | null>(null);
+  const [applied, setApplied] = useState<{ doc: LayoutDocument; message: string } | null>(null);
+  const [proposal, setProposal] = useState<Proposal | null>(null);
+  /** The proposal, while the drawing is still the one it was made for. */
+  const closeProposal = proposal && proposal.from === doc ? proposal.result : null;
   const { mode, setMode, preset, setCalibrationPoints } = tools;
   const bounds = () => layoutBounds(doc, sampleCentreLine(sections, 1));
   const add = (kind: NewSectionKind) => {
@@ -65,12 +77,22 @@ export function useEditorCommands({ doc, sections, selected, change }: EditorDoc
     if (to < 0 || to >= doc.sections.length) return;
     change(moveSection(doc, selected, to), undefined, { kind: "section", index: to });
   };
-  const closeTheLoop = () => {
-    const out = closeLoop(doc);
-    if (!out.ok) return setCloseMessage(`Could not close the loop: ${out.reason}.`);
-    change(out.document);
-    setCloseMessage(closeLoopMessage(out.changes));
+  /** Works out the change that would close the loop (with the snapping in force) and shows it. */
+  const proposeClose = () => {
+    const options = {
+      lengthStep: tools.snap.lengths ? SNAP_STEPS.length : 0,
+      angleStep: tools.snap.angles ? SNAP_STEPS.angle : 0,
+    };
+    setProposal({ from: doc, result: closeLoop(doc, options) });
   };
+  const applyClose = () => {
+    if (closeProposal?.ok && closeProposal.changes.length) {
+      change(closeProposal.document);
+      setApplied({ doc: closeProposal.document, message: appliedText(closeProposal.changes) });
+    }
+    setProposal(null);
+  };
+  const cancelClose = () => setProposal(null);
   const planClick = (p: Point) => {
     if (mode === "marshal") {
       const out = addMarshalPoint(doc, p);
@@ -89,7 +111,19 @@ export function useEditorCommands({ doc, sections, selected, change }: EditorDoc
     const { background: _old, ...rest } = doc;
     change(bg ? { ...rest, background: bg } : rest, gesture, bg ? { kind: "photo" } : null);
   };
-  return { closeMessage, bounds, add, move, closeTheLoop, planClick, setBackground };
+  const closeMessage = applied && applied.doc === doc ? applied.message : null;
+  return {
+    closeMessage,
+    closeProposal,
+    proposeClose,
+    applyClose,
+    cancelClose,
+    bounds,
+    add,
+    move,
+    planClick,
+    setBackground,
+  };
 }
 
 export type EditorCommands = ReturnType<typeof useEditorCommands>;

@@ -23,7 +23,7 @@ export const SHORTCUTS: { keys: string; action: string }[] = [
   { keys: "Ctrl+D (⌘D)", action: "Duplicate the selected section" },
   { keys: "Arrow keys", action: `Nudge the selection ${NUDGE_STEP} m (a section moves the whole track)` },
   { keys: "Shift+arrow keys", action: `Nudge ${NUDGE_STEP_LARGE} m` },
-  { keys: "Ctrl+S (⌘S)", action: "Save a new version" },
+  { keys: "Ctrl+S (⌘S)", action: "Save a new version (also while typing in a field)" },
   { keys: "F", action: "Fit the layout into view" },
   { keys: "Escape", action: "Clear the selection, stop placing" },
   { keys: "Space+drag, or drag the background", action: "Pan" },
@@ -37,25 +37,34 @@ function typingIn(target: EventTarget | null): boolean {
   );
 }
 
-/** Editor shortcuts on the whole page, except while typing in a field or while a dialog is open. */
+/**
+ * Editor shortcuts on the whole page, except while typing in a field or while a dialog is open.
+ * Ctrl+S (Cmd+S) saves from anywhere, fields included, and never opens the browser's "Save page
+ * as" dialog, even while a dialog of the editor is open (it then does nothing).
+ */
 export function useEditorKeys(handlers: EditorKeyHandlers, enabled: boolean) {
   const ref = useRef(handlers);
+  const on = useRef(enabled);
   useEffect(() => {
     ref.current = handlers;
+    on.current = enabled;
   });
   useEffect(() => {
-    if (!enabled) return;
     const onKey = (e: KeyboardEvent) => {
       const h = ref.current;
       const mod = e.ctrlKey || e.metaKey;
-      if (typingIn(e.target)) return;
-      if (document.querySelector("dialog[open]")) return;
       const key = e.key.toLowerCase();
+      if (mod && key === "s" && !e.altKey) {
+        e.preventDefault();
+        if (on.current && !document.querySelector("dialog[open]")) h.save();
+        return;
+      }
+      if (!on.current || typingIn(e.target)) return;
+      if (document.querySelector("dialog[open]")) return;
       let handled = true;
       if (mod && key === "z" && !e.shiftKey) h.undo();
       else if (mod && (key === "y" || (key === "z" && e.shiftKey))) h.redo();
       else if (mod && key === "d") h.duplicate();
-      else if (mod && key === "s") h.save();
       else if (mod || e.altKey) handled = false;
       else if (e.key === "Delete" || e.key === "Backspace") h.deleteSelected();
       else if (e.key === "Escape") h.escape();
@@ -70,5 +79,5 @@ export function useEditorKeys(handlers: EditorKeyHandlers, enabled: boolean) {
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [enabled]);
+  }, []);
 }

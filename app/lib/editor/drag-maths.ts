@@ -3,15 +3,19 @@
  * plan point gives. Plan frame as in engine.md: X right, Y up, headings anticlockwise from +X (rad).
  * Results are snapped (switchable) and kept inside the document's allowed ranges.
  */
-import type { Pose, ResolvedSection } from "~/analysis";
+import { FIELD_LIMITS, type Pose, type ResolvedSection } from "~/analysis";
 import type { LayoutDocument, TurnSection } from "~/analysis";
 import { clamp, snapAngle, snapLength, type SnapSettings } from "./snap";
 
 export type Point = { x: number; y: number };
 
 const DEG = Math.PI / 180;
-/** Allowed ranges of the document format (app/lib/layout-document.ts). */
-export const LIMITS = { length: [0.5, 300], radius: [1, 300], angleDeg: [1, 360] } as const;
+/** Allowed ranges of the document format (FIELD_LIMITS, app/analysis/format/field-limits.ts). */
+export const LIMITS = {
+  length: [FIELD_LIMITS.straightLength.min, FIELD_LIMITS.straightLength.max],
+  radius: [FIELD_LIMITS.turnRadius.min, FIELD_LIMITS.turnRadius.max],
+  angleDeg: [FIELD_LIMITS.turnAngle.min, FIELD_LIMITS.turnAngle.max],
+} as const;
 
 /** Unit vector of a heading. */
 function dir(heading: number): Point {
@@ -120,6 +124,8 @@ export function jumpMoveBlocker(doc: Pick<LayoutDocument, "sections">, index: nu
   if (doc.sections[index]?.kind !== "jump") return "Only jumps move along their stretch.";
   if (before?.kind !== "straight" || after?.kind !== "straight")
     return "A jump moves along the track when there is a straight right before it and right after it.";
+  if (before.locked || after.locked)
+    return "A jump moves along the track by changing the straights either side; one of them is locked.";
   return null;
 }
 

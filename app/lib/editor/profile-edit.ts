@@ -5,7 +5,7 @@
  * would break a rule spanning fields (a step-up lower than its takeoff, a gap too short for the
  * heights) is refused: the jump stays as it was.
  */
-import type { CustomJumpSection, JumpSection } from "~/analysis";
+import { FIELD_LIMITS as F, type CustomJumpSection, type FieldLimit, type JumpSection } from "~/analysis";
 import { clamp, snapAngle, snapHeight, snapLength, type SnapSettings } from "./snap";
 import { sectionIssues } from "./field-check";
 
@@ -19,6 +19,7 @@ export interface ProfileHandle {
 }
 
 const DEG = Math.PI / 180;
+const within = (v: number, l: FieldLimit) => clamp(v, l.min, l.max);
 const run = (height: number, angleDeg: number) => height / Math.tan(angleDeg * DEG);
 
 /** The draggable points of a jump's side view. */
@@ -104,28 +105,34 @@ function moved(s: JumpSection, id: string, d: number, h: number, snap: SnapSetti
   if (s.preset === "custom") return movedCustom(s, id, L(d), H(h));
   if (s.preset === "whoops") {
     if (id !== "crest") return null;
-    return { ...s, spacing: clamp(L(2 * d), 0.4, 3), bumpHeight: clamp(H(h), 0.03, 0.5) };
+    return { ...s, spacing: within(L(2 * d), F.spacing), bumpHeight: within(H(h), F.bumpHeight) };
   }
   if (id === "lip") {
-    const faceHeight = clamp(H(h), 0.05, 2);
-    return { ...s, faceHeight, faceAngleDeg: clamp(A(angleOf(faceHeight, d)), 5, 60) };
+    const faceHeight = within(H(h), F.jumpHeight);
+    return { ...s, faceHeight, faceAngleDeg: within(A(angleOf(faceHeight, d)), F.jumpAngle) };
   }
   const lipD = run(s.faceHeight, s.faceAngleDeg);
   if (s.preset === "tabletop") {
     const topEnd = lipD + s.tableLength;
-    if (id === "table") return { ...s, tableLength: clamp(L(d - lipD), 0.5, 15) };
-    if (id === "foot") return { ...s, landingAngleDeg: clamp(A(angleOf(s.faceHeight, d - topEnd)), 5, 60) };
+    if (id === "table") return { ...s, tableLength: within(L(d - lipD), F.tableLength) };
+    if (id === "foot")
+      return { ...s, landingAngleDeg: within(A(angleOf(s.faceHeight, d - topEnd)), F.jumpAngle) };
     return null;
   }
-  if (id === "crest") return { ...s, gap: clamp(L(d - lipD), 1, 15), landingHeight: clamp(H(h), 0.05, 2) };
+  if (id === "crest")
+    return { ...s, gap: within(L(d - lipD), F.gap), landingHeight: within(H(h), F.jumpHeight) };
   const crestD = lipD + s.gap;
   if (s.preset === "step-up") {
-    if (id === "deck") return { ...s, deckLength: clamp(L(d - crestD), 0.5, 10) };
+    if (id === "deck") return { ...s, deckLength: within(L(d - crestD), F.deckLength) };
     if (id === "foot")
-      return { ...s, landingAngleDeg: clamp(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), 5, 60) };
+      return {
+        ...s,
+        landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD - s.deckLength)), F.jumpAngle),
+      };
     return null;
   }
-  if (id === "foot") return { ...s, landingAngleDeg: clamp(A(angleOf(s.landingHeight, d - crestD)), 5, 60) };
+  if (id === "foot")
+    return { ...s, landingAngleDeg: within(A(angleOf(s.landingHeight, d - crestD)), F.jumpAngle) };
   return null;
 }
 
@@ -141,7 +148,7 @@ function movedCustom(s: CustomJumpSection, id: string, d: number, h: number): Cu
   const profile = p.map((pt) => [pt[0], pt[1]] as [number, number]);
   profile[k] = [
     Number(clamp(d, lo, hi).toFixed(3)),
-    k === p.length - 1 ? 0 : Number(clamp(h, -2, 3).toFixed(3)),
+    k === p.length - 1 ? 0 : Number(within(h, F.profileHeight).toFixed(3)),
   ];
   return { ...s, profile };
 }

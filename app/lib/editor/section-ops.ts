@@ -3,8 +3,15 @@
  * delete, reorder, duplicate and change. Each returns a new document and leaves the old one as it
  * was, so the undo history can keep both by reference.
  */
-import { DEFAULT_JUMP_PRESET, defaultJump } from "~/analysis";
-import type { JumpPreset, LayoutDocument, LayoutSection, TurnSection } from "~/analysis";
+import { DEFAULT_JUMP_PRESET, defaultJump, FIELD_LIMITS, jumpProfile } from "~/analysis";
+import type {
+  CustomJumpSection,
+  JumpPreset,
+  JumpSection,
+  LayoutDocument,
+  LayoutSection,
+  TurnSection,
+} from "~/analysis";
 
 export type NewSectionKind = "straight" | "turn-left" | "turn-right" | "jump";
 
@@ -102,7 +109,8 @@ export function updateSection<D extends Pick<LayoutDocument, "sections">>(
 
 /**
  * Turns a section into another kind in place (same id and position): a straight of the same plan
- * length, a turn of the same direction, or a jump of the preset.
+ * length, a turn of the same direction, or a jump of the preset. A jump made a free profile keeps
+ * its current shape's points (asFreeProfile).
  */
 export function changeSectionKind<D extends Pick<LayoutDocument, "sections">>(
   doc: D,
@@ -112,12 +120,58 @@ export function changeSectionKind<D extends Pick<LayoutDocument, "sections">>(
 ): D {
   const old = doc.sections[index];
   if (!old) return doc;
+  if (old.kind === "jump" && kind === "jump" && preset === "custom" && old.preset !== "custom") {
+    const sections = doc.sections.slice();
+    sections[index] = asFreeProfile(old);
+    return { ...doc, sections };
+  }
   const fresh = newSection({ sections: [] }, kind, preset);
-  const next = { ...fresh, id: old.id, ...(old.name ? { name: old.name } : {}) } as LayoutSection;
+  const next = {
+    ...fresh,
+    id: old.id,
+    ...(old.name ? { name: old.name } : {}),
+    ...(old.locked ? { locked: true } : {}),
+  } as LayoutSection;
   if (next.kind === "straight" && old.kind === "turn")
     next.length = Math.max(0.5, Math.round(old.radius * old.angleDeg * (Math.PI / 180) * 10) / 10);
   if (next.kind === "straight" && old.kind === "straight") return doc;
   const sections = doc.sections.slice();
   sections[index] = next;
   return { ...doc, sections };
+}
+
+/**
+ * A preset jump as a free profile with the same points (rounded to 1 mm), the same lip and the
+ * same landing ramp, so switching to "Free profile" changes nothing until a point is moved.
+ */
+export function asFreeProfile(jump: Exclude<JumpSection, CustomJumpSection>): CustomJumpSection {
+  const p = jumpProfile(jump);
+  const mm = (x: number) => Math.round(x * 1000) / 1000;
+  const { min, max } = FIELD_LIMITS.profileHeight;
+  const profile: [number, number][] = [];
+  const indexOf: number[] = [];
+  p.d.forEach((d, k) => {
+    const point: [number, number] = [mm(d), Math.min(max, Math.max(min, mm(p.h[k])))];
+    const last = profile[profile.length - 1];
+    // Points closer than 1 mm along the track become one (the format wants increasing distances).
+    if (last && point[0] <= last[0]) indexOf.push(profile.length - 1);
+    else {
+      indexOf.push(profile.length);
+      profile.push(point);
+    }
+  });
+  profile[0] = [0, 0];
+  profile[profile.length - 1] = [profile[profile.length - 1][0], 0];
+  const { id, name, locked } = jump;
+  return {
+    id,
+    ...(name ? { name } : {}),
+    ...(locked ? { locked } : {}),
+    kind: "jump",
+    preset: "custom",
+    profile,
+    lipIndex: indexOf[p.lipIndex],
+    landingStartIndex: indexOf[p.landingStartIndex],
+    landingEndIndex: indexOf[p.landingEndIndex],
+  };
 }

@@ -5,7 +5,9 @@
  */
 import { z } from "zod";
 import { parseNumberText } from "~/lib/number-text";
+import { carClassesField } from "./layouts";
 import {
+  FIELD_LIMITS,
   GUIDANCE_SET_IDS,
   GUIDANCE_SET_LABELS,
   wordList,
@@ -27,8 +29,8 @@ export const RULE_FIELDS: readonly {
     id: "minTrackWidth",
     label: "Narrowest track width",
     unit: "m",
-    min: 1,
-    max: 10,
+    min: FIELD_LIMITS.trackWidth.min,
+    max: FIELD_LIMITS.trackWidth.max,
     hint: "Width between the track edges.",
   },
   {
@@ -125,6 +127,12 @@ const overrideShape = Object.fromEntries(RULE_FIELDS.map((f) => [f.id, overrideF
   RuleId,
   ReturnType<typeof overrideField>
 >;
+
+/** The club's default car classes (a second form on the settings page, told apart by its intent). */
+export const clubCarClassesSchema = z.object({
+  intent: z.literal("default-classes"),
+  carClasses: carClassesField,
+});
 
 /** The settings form: guidance set plus one optional text field per rule. */
 export const clubSettingsSchema = z.object({

@@ -1,13 +1,21 @@
-/** Form schemas for a layout's metadata (name, surface, track width) and its status changes. */
+/** Form schemas for a layout's metadata (name, surface, track width, car classes) and its status changes. */
 import { z } from "zod";
-import { SURFACE_LABELS, SURFACES, wordList, type Surface } from "~/analysis";
+import {
+  CAR_CLASS_COUNT,
+  CAR_PRESET_IDS,
+  FIELD_LIMITS,
+  SURFACE_LABELS,
+  SURFACES,
+  wordList,
+  type Surface,
+} from "~/analysis";
 import { parseNumberText } from "~/lib/number-text";
 
 export type { Surface };
 
-/** Track width limits, m: narrower than 1.5 m two cars cannot pass; wider than 10 m is a car park. */
-export const TRACK_WIDTH_MIN_M = 1.5;
-export const TRACK_WIDTH_MAX_M = 10;
+/** Track width limits, m: the layout file's, the same in every form and the editor (FIELD_LIMITS). */
+export const TRACK_WIDTH_MIN_M = FIELD_LIMITS.trackWidth.min;
+export const TRACK_WIDTH_MAX_M = FIELD_LIMITS.trackWidth.max;
 
 export const layoutNameField = z
   .string({ error: "Enter a name for the layout." })
@@ -32,16 +40,39 @@ export const trackWidthField = z
       .max(TRACK_WIDTH_MAX_M, { error: `Track width must be at most ${TRACK_WIDTH_MAX_M} m.` }),
   );
 
+/** Form fields read as lists (checkboxes): pass to parseForm. */
+export const LIST_FIELDS = ["carClasses"] as const;
+
+/** Car classes from checkboxes: 1 to 10 class presets (repeats count once). */
+export const carClassesField = z
+  .array(z.string({ error: "Choose the car classes from the list." }), {
+    error: "Choose at least one car class.",
+  })
+  .transform((list) => [...new Set(list.map((s) => s.trim()))])
+  .superRefine((list, ctx) => {
+    if (list.length < CAR_CLASS_COUNT.min)
+      ctx.addIssue({ code: "custom", message: "Choose at least one car class." });
+    if (list.length > CAR_CLASS_COUNT.max)
+      ctx.addIssue({ code: "custom", message: `Choose at most ${CAR_CLASS_COUNT.max} car classes.` });
+    const unknown = list.filter((id) => !(CAR_PRESET_IDS as readonly string[]).includes(id));
+    if (unknown.length)
+      ctx.addIssue({
+        code: "custom",
+        message: `Choose the car classes from the list (${unknown.map((u) => `"${u.slice(0, 40)}"`).join(", ")} is not one).`,
+      });
+  });
+
 const versionField = z
   .string({ error: "The form is missing the layout's version; reload the page." })
   .regex(/^\d{1,9}$/, { error: "The form's layout version is not valid; reload the page." })
   .transform(Number);
 
-/** New layout: metadata only; the drawing comes from the editor. */
+/** New layout: metadata and car classes only; the drawing comes from the editor. */
 export const createLayoutSchema = z.object({
   name: layoutNameField,
   surface: surfaceField,
   trackWidth: trackWidthField,
+  carClasses: carClassesField,
 });
 
 /** The layout page's forms, told apart by their `intent` button. */

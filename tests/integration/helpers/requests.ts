@@ -14,10 +14,10 @@ export function getRequest(pathname: string, cookie?: string, headers: Record<st
   return new Request(BASE + pathname, { headers: { ...(cookie ? { Cookie: cookie } : {}), ...headers } });
 }
 
-/** A POST with an urlencoded form body, as a browser's form submission sends it. */
+/** A POST with an urlencoded form body, as a browser's form submission sends it (a list: one entry each). */
 export function formRequest(
   pathname: string,
-  fields: Record<string, string>,
+  fields: Record<string, string | string[]>,
   cookie?: string,
   headers: Record<string, string> = {},
 ) {
@@ -28,7 +28,9 @@ export function formRequest(
       ...(cookie ? { Cookie: cookie } : {}),
       ...headers,
     },
-    body: new URLSearchParams(fields).toString(),
+    body: new URLSearchParams(
+      Object.entries(fields).flatMap(([k, v]) => (Array.isArray(v) ? v.map((x) => [k, x]) : [[k, v]])),
+    ).toString(),
   });
 }
 

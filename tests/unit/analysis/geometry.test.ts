@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import type { LayoutDocument, LayoutSection } from "~/analysis/format/layout-document";
-import { closeLoop } from "~/analysis/track/close-loop";
 import { advancePose, layoutGeometry, nearestSample, trackEdges, wrapAngle } from "~/analysis/track/geometry";
 import { jumpProfile, profileHeightAt } from "~/analysis/track/jump-profile";
 
@@ -113,46 +112,5 @@ describe("layout geometry", () => {
     expect(wrapAngle(3 * Math.PI)).toBeCloseTo(Math.PI, 12);
     expect(wrapAngle(-Math.PI)).toBeCloseTo(Math.PI, 12);
     expect(wrapAngle(2 * Math.PI + 0.1)).toBeCloseTo(0.1, 12);
-  });
-});
-
-describe("close the loop", () => {
-  it("leaves a closed loop alone", () => {
-    const r = closeLoop(oval(30, 8));
-    expect(r.ok && r.changes).toEqual([]);
-  });
-
-  it("closes a loop that misses its start by adjusting the last sections", () => {
-    const open = oval(30, 8);
-    open.sections[2] = { id: "c", kind: "straight", length: 28.7 };
-    open.sections[3] = { id: "d", kind: "turn", radius: 8, angleDeg: 176, direction: "left" };
-    open.sections.push({ id: "e", kind: "straight", length: 2 });
-    const before = layoutGeometry(open).closure;
-    expect(before.gap).toBeGreaterThan(1);
-    const r = closeLoop(open);
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
-    expect(r.changes.length).toBeGreaterThan(0);
-    const after = layoutGeometry(r.document).closure;
-    expect(after.gap).toBeLessThan(1e-3);
-    expect(Math.abs(after.headingDeg)).toBeLessThan(1e-3);
-    expect(r.closure.gap).toBeCloseTo(after.gap, 12);
-    // Only the reported fields changed.
-    r.document.sections.forEach((s, i) => {
-      const changed = r.changes.filter((c) => c.index === i);
-      if (changed.length === 0) expect(s).toEqual(open.sections[i]);
-    });
-  });
-
-  it("says so when the last sections cannot close the loop", () => {
-    const open = oval(30, 8);
-    open.sections[0] = { id: "a", kind: "straight", length: 40 };
-    // Only a jump and a short straight at the end: nothing there can turn the heading.
-    open.sections.push({ id: "j", kind: "jump", preset: "whoops", count: 3, bumpHeight: 0.1, spacing: 1 });
-    const r = closeLoop(open, 1);
-    expect(r.ok).toBe(false);
-    if (r.ok) return;
-    expect(r.reason).toMatch(/cannot|no choice/);
-    expect(r.closure.gap).toBeGreaterThan(1);
   });
 });

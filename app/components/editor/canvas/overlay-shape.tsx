@@ -1,14 +1,15 @@
 import { memo } from "react";
-import { Shape } from "react-konva";
-import type { AnalysisOverlay } from "~/analysis";
+import { Line, Shape } from "react-konva";
+import type { AnalysisOverlay, CentreLine } from "~/analysis";
 import { binStyle, speedRuns } from "~/lib/editor/speed-scale";
-import type { View } from "~/lib/editor/view";
+import { worldToScreen, type View } from "~/lib/editor/view";
 import { PLAN } from "../colours";
 
 /**
  * The analysis drawn over the track in screen space: the racing line coloured and widened by
- * speed, stretches hidden from the driver stand (dashed, labelled) and lanes too close together
- * (dotted, with the distance). Faded while a newer drawing is being analysed.
+ * speed, stretches hidden from the driver stand (dashed) and lanes too close together (dotted);
+ * their words are labels of the label layer. Faded while a newer drawing with the same track is
+ * being analysed; the editor clears it when the track itself changed.
  */
 export const OverlayShape = memo(function OverlayShape({
   overlay,
@@ -40,7 +41,6 @@ export const OverlayShape = memo(function OverlayShape({
           ctx.lineWidth = style.width;
           ctx.stroke();
         }
-        ctx.font = "600 11px Inter, sans-serif";
         ctx.setLineDash([8, 5]);
         for (const stretch of overlay.hidden) {
           if (stretch.points.length < 2) continue;
@@ -49,14 +49,6 @@ export const OverlayShape = memo(function OverlayShape({
           ctx.strokeStyle = PLAN.hidden;
           ctx.lineWidth = 4;
           ctx.stroke();
-          const [mx, my] = stretch.points[Math.floor(stretch.points.length / 2)];
-          label(
-            ctx,
-            `Hidden from the stand (${stretch.length.toFixed(0)} m)`,
-            sx(mx),
-            sy(my) - 10,
-            PLAN.hidden,
-          );
         }
         ctx.setLineDash([2, 4]);
         for (const c of overlay.laneConflicts) {
@@ -66,13 +58,6 @@ export const OverlayShape = memo(function OverlayShape({
           ctx.strokeStyle = PLAN.conflict;
           ctx.lineWidth = 2.5;
           ctx.stroke();
-          label(
-            ctx,
-            `Lanes ${c.distance.toFixed(1)} m apart`,
-            (sx(c.a[0]) + sx(c.b[0])) / 2,
-            (sy(c.a[1]) + sy(c.b[1])) / 2,
-            PLAN.conflict,
-          );
         }
         ctx.setLineDash([]);
       }}
@@ -80,12 +65,23 @@ export const OverlayShape = memo(function OverlayShape({
   );
 });
 
-function label(ctx: CanvasRenderingContext2D, text: string, x: number, y: number, colour: string) {
-  const w = ctx.measureText(text).width + 8;
-  ctx.fillStyle = "rgba(251, 249, 245, 0.9)";
-  ctx.fillRect(x - w / 2, y - 9, w, 16);
-  ctx.fillStyle = colour;
-  ctx.textAlign = "center";
-  ctx.textBaseline = "middle";
-  ctx.fillText(text, x, y);
+/** The centre line "Close the loop" proposes, dashed in the selection colour (screen space). */
+export function GhostLine({ line, view }: { line: CentreLine; view: View }) {
+  const points: number[] = [];
+  for (let i = 0; i < line.count; i++) {
+    const p = worldToScreen(view, { x: line.x[i], y: line.y[i] });
+    points.push(p.x, p.y);
+  }
+  return (
+    <Line
+      name="close-loop-ghost"
+      points={points}
+      stroke={PLAN.selected}
+      strokeWidth={2.5}
+      dash={[9, 6]}
+      lineCap="round"
+      lineJoin="round"
+      perfectDrawEnabled={false}
+    />
+  );
 }

@@ -11,6 +11,7 @@ import type { LengthUnit } from "~/lib/editor/units";
 import type { DrawingCanvasProps } from "../canvas-types";
 import { PLAN } from "../colours";
 import { GridShape } from "./grid-shape";
+import { LabelLayerContent } from "./label-layer";
 import { PhotoImage } from "./photo-image";
 import { SectionHandles } from "./section-handles";
 import { SectionShape } from "./section-shape";
@@ -60,8 +61,8 @@ export function BackdropLayer({
 }
 
 /**
- * The track, one memoised group per section in plan metres; numbers only when a lane is wide
- * enough on screen. Not listening while a handle is dragged (nothing can be clicked then).
+ * The track, one memoised shape per section in plan metres (their numbers are labels of the
+ * marker layer). Not listening while a handle is dragged (nothing can be clicked then).
  */
 export function TrackLayer({
   doc,
@@ -76,7 +77,6 @@ export function TrackLayer({
   selectedSection: number | null;
   listening: boolean;
 }) {
-  const showLabels = view.scale * doc.trackWidth > 14;
   return (
     <Layer listening={listening}>
       <Group x={view.ox} y={view.oy} scaleX={view.scale} scaleY={-view.scale}>
@@ -91,7 +91,6 @@ export function TrackLayer({
             headingDeg={r.start.heading * RAD}
             selected={selectedSection === i}
             scale={view.scale}
-            showLabel={showLabels}
           />
         ))}
       </Group>
@@ -100,16 +99,19 @@ export function TrackLayer({
 }
 
 /**
- * Screen-space markers: the start, the jumps' verdicts, the stand, marshal points and boundary
- * corners, the selected section's handles (when editable) and the calibration points.
+ * Screen-space markers: the start, the jumps' verdict marks, the stand, marshal points and boundary
+ * corners, the selected section's handles (when editable), the calibration points and every label
+ * (placed together by the label placer, label-layer.tsx).
  */
 export function MarkerLayer({
   props,
   view,
+  size,
   selectedSection,
 }: {
   props: DrawingCanvasProps;
   view: View;
+  size: { width: number; height: number };
   selectedSection: number | null;
 }) {
   const { doc, sections, selection, editable, overlay } = props;
@@ -117,14 +119,7 @@ export function MarkerLayer({
   return (
     <Layer>
       <StartMarker doc={doc} view={view} />
-      {overlay ? (
-        <VerdictMarkers
-          jumps={overlay.jumps}
-          sectionIndex={sectionIndex}
-          view={view}
-          selectedIndex={selectedSection}
-        />
-      ) : null}
+      {overlay ? <VerdictMarkers jumps={overlay.jumps} sectionIndex={sectionIndex} view={view} /> : null}
       <SiteMarkers
         doc={doc}
         view={view}
@@ -142,12 +137,23 @@ export function MarkerLayer({
           index={selectedSection}
           view={view}
           snap={props.snap}
-          units={props.units}
           onChange={props.onChange}
           onGestureEnd={props.onGestureEnd}
         />
       ) : null}
       <CalibrationMarks points={props.calibrationPoints} view={view} />
+      <LabelLayerContent
+        doc={doc}
+        sections={sections}
+        view={view}
+        width={size.width}
+        height={size.height}
+        overlay={overlay}
+        selectedSection={selectedSection}
+        editable={editable}
+        units={props.units}
+        calibrationPoints={props.calibrationPoints}
+      />
     </Layer>
   );
 }

@@ -1,5 +1,5 @@
 import { useRef } from "react";
-import { Circle, Line, Rect, RegularPolygon, Text } from "react-konva";
+import { Circle, Line, Rect, RegularPolygon } from "react-konva";
 import { advancePose, type ResolvedSection } from "~/analysis";
 import {
   alongTrack,
@@ -14,7 +14,6 @@ import {
 } from "~/lib/editor/drag-maths";
 import { updateSection } from "~/lib/editor/section-ops";
 import type { SnapSettings } from "~/lib/editor/snap";
-import { formatLength, type LengthUnit } from "~/lib/editor/units";
 import { screenToWorld, worldToScreen, type View } from "~/lib/editor/view";
 import type { LayoutDocument } from "~/analysis";
 import { PLAN } from "../colours";
@@ -26,7 +25,6 @@ interface Props {
   index: number;
   view: View;
   snap: SnapSettings;
-  units: LengthUnit;
   onChange(doc: LayoutDocument, gesture: string): void;
   onGestureEnd(): void;
 }
@@ -34,7 +32,7 @@ interface Props {
 const DEG = Math.PI / 180;
 
 /** The selected section's handles: a straight's end, a turn's centre and end, a jump's middle. */
-export function SectionHandles({ doc, resolved, index, view, snap, units, onChange, onGestureEnd }: Props) {
+export function SectionHandles({ doc, resolved, index, view, snap, onChange, onGestureEnd }: Props) {
   const gesture = useRef("");
   const section = doc.sections[index];
   const handles = sectionHandles(resolved, section, jumpMoveBlocker(doc, index) === null);
@@ -56,7 +54,7 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
           return toScreen(advancePose(resolved.start, length, 0));
         }}
       >
-        <Knob label={formatLength(section.length, units)} />
+        <Knob />
       </DragPoint>
     );
   }
@@ -105,7 +103,6 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
             strokeWidth={2}
             hitStrokeWidth={14}
           />
-          <Tip text={`R ${formatLength(section.radius, units)}`} />
         </DragPoint>
         <DragPoint
           name="handle handle-angle"
@@ -127,7 +124,7 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
             );
           }}
         >
-          <Knob label={`${section.angleDeg.toFixed(0)}°`} />
+          <Knob />
         </DragPoint>
       </>
     );
@@ -162,7 +159,6 @@ export function SectionHandles({ doc, resolved, index, view, snap, units, onChan
           strokeWidth={2}
           hitStrokeWidth={14}
         />
-        <Tip text="Move along the track" below />
       </DragPoint>
     );
   }
@@ -173,32 +169,15 @@ function xy(p: Point): [number, number] {
   return [p.x, p.y];
 }
 
-function Knob({ label }: { label: string }) {
+/** A round handle; its readout is a label of the label layer (canvas-labels.ts). */
+function Knob() {
   return (
-    <>
-      <Circle
-        radius={8}
-        fill={PLAN.handleFill}
-        stroke={PLAN.handleStroke}
-        strokeWidth={2.5}
-        hitStrokeWidth={16}
-      />
-      <Tip text={label} />
-    </>
-  );
-}
-
-function Tip({ text, below = false }: { text: string; below?: boolean }) {
-  return (
-    <Text
-      x={12}
-      y={below ? 10 : -20}
-      text={text}
-      fontSize={12}
-      fontStyle="600"
-      fontFamily="Inter, sans-serif"
-      fill={PLAN.handleStroke}
-      listening={false}
+    <Circle
+      radius={8}
+      fill={PLAN.handleFill}
+      stroke={PLAN.handleStroke}
+      strokeWidth={2.5}
+      hitStrokeWidth={16}
     />
   );
 }

@@ -14,28 +14,22 @@ export interface SectionShapeProps {
   y: number;
   headingDeg: number;
   selected: boolean;
-  /** Zoom, px per m (line widths and the label keep their size on screen). */
+  /** Zoom, px per m (line widths keep their size on screen). */
   scale: number;
-  showLabel: boolean;
 }
 
 /**
- * One section of the track in plan, drawn by one konva shape in the section's own frame and placed
+ * One section of the track in plan (its number is a label of the label layer), drawn by one konva shape in the section's own frame and placed
  * at its start pose. Memoised: when an earlier section changes, this shape only gets a new x, y
  * and rotation; its drawing is not rebuilt. One shape per section (rather than one per stripe)
  * keeps a redraw of a 60-section layout to 60 draw calls.
  */
 export const SectionShape = memo(function SectionShape(p: SectionShapeProps) {
   const drawing = useMemo(() => localDrawing(p.section, p.trackWidth), [p.section, p.trackWidth]);
-  const { selected, scale, showLabel, index } = p;
+  const { selected, scale, index } = p;
   const sceneFunc = useCallback(
-    (context: Konva.Context, shape: Konva.Shape) =>
-      drawSection(context._context, shape, drawing, {
-        selected,
-        scale,
-        label: showLabel || selected ? String(index + 1) : null,
-      }),
-    [drawing, selected, scale, showLabel, index],
+    (context: Konva.Context) => drawSection(context._context, drawing, { selected, scale }),
+    [drawing, selected, scale],
   );
   const hitFunc = useCallback(
     (context: Konva.Context, shape: Konva.Shape) => {
@@ -68,9 +62,8 @@ function path(ctx: CanvasRenderingContext2D, pts: number[], closed: boolean) {
 
 function drawSection(
   ctx: CanvasRenderingContext2D,
-  shape: Konva.Shape,
   d: LocalSectionDrawing,
-  o: { selected: boolean; scale: number; label: string | null },
+  o: { selected: boolean; scale: number },
 ) {
   const px = 1 / o.scale; // one screen pixel in section units (m)
   path(ctx, d.band, true);
@@ -119,33 +112,4 @@ function drawSection(
   ctx.strokeStyle = o.selected ? PLAN.selected : PLAN.bandEdge;
   ctx.lineWidth = (o.selected ? 3 : 1) * px;
   ctx.stroke();
-  if (o.label) drawLabel(ctx, shape, d, o.label, o.selected);
-}
-
-/** The section number beside its middle, upright and at a fixed size on screen. */
-function drawLabel(
-  ctx: CanvasRenderingContext2D,
-  shape: Konva.Shape,
-  d: LocalSectionDrawing,
-  text: string,
-  selected: boolean,
-) {
-  const at = ctx.getTransform().transformPoint(new DOMPoint(d.mid.x, d.mid.y));
-  const ratio = shape.getLayer()?.getCanvas().getPixelRatio() ?? 1;
-  ctx.save();
-  ctx.setTransform(ratio, 0, 0, ratio, 0, 0);
-  const x = at.x / ratio + 6;
-  const y = at.y / ratio - 20;
-  ctx.font = "11px Inter, sans-serif";
-  const w = 7 * text.length + 6;
-  ctx.fillStyle = selected ? PLAN.selected : PLAN.paper;
-  ctx.strokeStyle = PLAN.bandEdge;
-  ctx.lineWidth = 0.5;
-  ctx.fillRect(x, y, w, 16);
-  ctx.strokeRect(x, y, w, 16);
-  ctx.fillStyle = selected ? "#ffffff" : PLAN.text;
-  ctx.textAlign = "center";
-  ctx.textBaseline = "middle";
-  ctx.fillText(text, x + w / 2, y + 8.5);
-  ctx.restore();
 }

@@ -1,5 +1,5 @@
 import { useRef } from "react";
-import { Circle, Group, Line, Rect, Text } from "react-konva";
+import { Group, Line, Rect } from "react-konva";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { Selection } from "~/lib/editor/editor-state";
 import { moveBoundaryPoint, moveMarshalPoint, placeDriverStand } from "~/lib/editor/site-ops";
@@ -7,7 +7,12 @@ import { snapLength, type SnapSettings } from "~/lib/editor/snap";
 import { screenToWorld, worldToScreen, type View } from "~/lib/editor/view";
 import type { LayoutDocument } from "~/analysis";
 import { PLAN } from "../colours";
+import { SYMBOL } from "./canvas-labels";
 import { DragPoint } from "./drag-point";
+
+/** A marshal point's diamond, as on the layout page's drawing, px. */
+const M = SYMBOL.marshal;
+const DIAMOND = [0, -M, M, 0, 0, M, -M, 0];
 
 interface Props {
   doc: LayoutDocument;
@@ -21,8 +26,9 @@ interface Props {
 }
 
 /**
- * The driver stand, the numbered marshal points and (while editing) the site boundary's corners,
- * in screen space so their symbols and numbers keep their size at any zoom.
+ * The driver stand (a square), the marshal points (diamonds, as on the layout page's drawing) and
+ * (while editing) the site boundary's corners, in screen space so their symbols keep their size at
+ * any zoom. Their words and M numbers are labels of the label layer.
  */
 export function SiteMarkers({
   doc,
@@ -101,18 +107,6 @@ export function SiteMarkers({
             strokeWidth={isSel("stand") ? 3 : 1.5}
           />
           <Line points={[-5, 3, 0, -4, 5, 3]} stroke={PLAN.paper} strokeWidth={2} listening={false} />
-          <Text
-            x={-40}
-            y={12}
-            width={80}
-            align="center"
-            text="Driver stand"
-            fontSize={11}
-            fontStyle="600"
-            fontFamily="Inter, sans-serif"
-            fill={PLAN.stand}
-            listening={false}
-          />
         </DragPoint>
       ) : null}
       {doc.marshalPoints.map((m, i) => (
@@ -130,23 +124,13 @@ export function SiteMarkers({
           }}
           onDragEnd={onGestureEnd}
         >
-          <Circle
-            radius={11}
+          <Line
+            points={DIAMOND}
+            closed
             fill={PLAN.marshal}
             stroke={isSel("marshal", i) ? PLAN.text : PLAN.paper}
             strokeWidth={isSel("marshal", i) ? 3 : 1.5}
-          />
-          <Text
-            x={-11}
-            y={-6}
-            width={22}
-            align="center"
-            text={String(i + 1)}
-            fontSize={12}
-            fontStyle="700"
-            fontFamily="Inter, sans-serif"
-            fill="#ffffff"
-            listening={false}
+            hitStrokeWidth={12}
           />
         </DragPoint>
       ))}
@@ -154,7 +138,7 @@ export function SiteMarkers({
   );
 }
 
-/** The start line across the track, with a chequered stripe and its label. */
+/** The start line across the track, with a chequered stripe (its word is a label of the label layer). */
 export function StartMarker({ doc, view }: { doc: LayoutDocument; view: View }) {
   const h = (doc.start.headingDeg * Math.PI) / 180;
   const half = (doc.trackWidth / 2) * view.scale;
@@ -167,15 +151,6 @@ export function StartMarker({ doc, view }: { doc: LayoutDocument; view: View }) 
     <Group listening={false}>
       <Line points={pts} stroke={PLAN.text} strokeWidth={5} />
       <Line points={pts} stroke="#ffffff" strokeWidth={5} dash={[4, 4]} />
-      <Text
-        x={c.x + nx + 4}
-        y={c.y + ny - 6}
-        text="Start"
-        fontSize={11}
-        fontStyle="700"
-        fontFamily="Inter, sans-serif"
-        fill={PLAN.text}
-      />
     </Group>
   );
 }
