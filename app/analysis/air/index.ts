@@ -10,10 +10,19 @@ export {
 } from "./attitude-inputs";
 export * from "./air-plan";
 export { nutationPeriod } from "./air-plan-linear";
-export { DEFAULT_SKILL_SIGMAS, type SkillSigmas, type SwitchWindow } from "./air-plan-robustness";
+export type { TradeOffPoint } from "./air-plan-joint";
+export {
+  DEFAULT_SKILL_SIGMAS,
+  DEFAULT_SPEED_SIGMAS,
+  ERROR_SOURCES,
+  type ErrorSource,
+  type SkillSigmas,
+  type SwitchWindow,
+} from "./air-plan-robustness";
 export {
   pitchPulse,
   drivenSpinInertia,
+  PULSE_STRENGTHS,
   type PitchPulse,
   type PulseKind,
   type PulseLimits,

@@ -11,8 +11,39 @@ export const DEFAULT_TURN_LOOKAHEAD_S = 0.5;
 export const DEFAULT_MIN_TURN_ANGLE = (20 * Math.PI) / 180;
 /** Flights shorter than this leave no time for a counter-steer and a return, s (an estimate). */
 export const DEFAULT_MIN_AIRTIME_S = 0.3;
-/** Smallest expected gain worth the effort, s per pass (an estimate). */
-export const DEFAULT_GAIN_FLOOR_S = 0.02;
+/**
+ * Smallest expected gain per pass worth trying a set-up for, s (an estimate: about what a driver
+ * can feel on the lap timer; a club may set its own).
+ */
+export const DEFAULT_MIN_GAIN_PER_PASS_S = 0.05;
+/**
+ * Smallest turn of the nose worth setting up for, rad (10 deg, an estimate: less is within what a
+ * driver corrects on landing anyway; a club may set its own).
+ */
+export const DEFAULT_MIN_NOSE_TURN = (10 * Math.PI) / 180;
+
+/** The values that decide a verdict. SI units and radians. */
+export interface VerdictThresholds {
+  /** Turns gentler than this get no set-up, rad. */
+  minTurnAngle: number;
+  /** Flights shorter than this get no set-up, s. */
+  minAirtime: number;
+  /** Smallest expected gain worth a set-up, s per pass. */
+  minGainPerPass: number;
+  /** Smallest turn of the nose worth a set-up, rad. */
+  minNoseTurn: number;
+  /** Time lost to a failed landing, s. */
+  failCost: number;
+}
+
+/** The defaults, each an estimate (docs/decisions/0108). */
+export const DEFAULT_VERDICT_THRESHOLDS: Readonly<VerdictThresholds> = Object.freeze({
+  minTurnAngle: DEFAULT_MIN_TURN_ANGLE,
+  minAirtime: DEFAULT_MIN_AIRTIME_S,
+  minGainPerPass: DEFAULT_MIN_GAIN_PER_PASS_S,
+  minNoseTurn: DEFAULT_MIN_NOSE_TURN,
+  failCost: DEFAULT_FAIL_COST_S,
+});
 
 /**
  * Whether a jump lands into a turn: the next turn begins within the distance covered in
@@ -62,7 +93,31 @@ export function expectedGain(successRate: number, saved: number, failCost = DEFA
 }
 
 export type JumpVerdictKind = "set-up" | "straight";
-export type StraightReason = "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky";
+
+/**
+ * Why a jump that might be set up for is taken straight, as data (the sentences are in
+ * verdict-text.ts): the first that applies, in this order.
+ * - "no-turn": no turn starts close enough to the landing;
+ * - "turn-too-gentle": the turn is gentler than the smallest worth a set-up;
+ * - "not-enough-airtime": the flight is too short to steer in;
+ * - "no-wheel-spin", "no-useful-yaw", "cannot-land-flat", "levelling-costs-turn": the plan's own
+ *   outcome (no spin to steer with; no steering turns the nose toward the turn; none lands it flat;
+ *   the pulse that levels the car leaves too little turn, though turning alone would give enough);
+ * - "nose-turn-too-small": the plan turns the nose less than the smallest worth a set-up;
+ * - "too-risky": the failed landings cost more than the clean ones save (expected gain <= 0);
+ * - "gain-too-small": the expected gain is positive but under the smallest worth a set-up.
+ */
+export type StraightReason =
+  | "no-turn"
+  | "turn-too-gentle"
+  | "not-enough-airtime"
+  | "no-wheel-spin"
+  | "no-useful-yaw"
+  | "cannot-land-flat"
+  | "levelling-costs-turn"
+  | "nose-turn-too-small"
+  | "too-risky"
+  | "gain-too-small";
 
 export interface JumpVerdictInput {
   landsIntoTurn: boolean;
@@ -72,58 +127,38 @@ export interface JumpVerdictInput {
   airtime: number;
   /** Expected gain at this skill level, s per pass. */
   expectedGain: number;
-  /** False when no set-up plan fits the flight (treated as not enough airtime). */
-  planFeasible?: boolean;
-  minTurnAngle?: number;
-  minAirtime?: number;
-  gainFloor?: number;
+  /** The plan's reason when it offers no plan (null or undefined when it does). */
+  planReason?: StraightReason | null;
+  /** Turn of the nose the plan gives at touchdown, rad (its sign is ignored; default: enough). */
+  noseTurn?: number;
+  /** Turn of the nose turning alone would give (without the pitch change), rad, when known. */
+  noseTurnUnlevelled?: number | null;
+  thresholds?: Partial<VerdictThresholds>;
 }
 
 export interface JumpVerdict {
   verdict: JumpVerdictKind;
   reason: StraightReason | null;
-  /** One plain sentence for drivers. */
-  text: string;
 }
 
 /**
- * The verdict for one jump at one skill level: "set-up" when it lands into a turn and the
- * expected gain is above a small floor, otherwise "straight" with the first reason that applies
- * (no turn, turn too gentle, not enough airtime, too risky).
+ * The verdict for one jump at one skill level: "set-up" when it lands into a sharp enough turn,
+ * the plan turns the nose far enough and the expected gain reaches the smallest worthwhile gain;
+ * otherwise "straight" with the first reason that applies (see StraightReason).
  */
 export function jumpVerdict(input: JumpVerdictInput): JumpVerdict {
-  const minTurn = input.minTurnAngle ?? DEFAULT_MIN_TURN_ANGLE;
-  const minAir = input.minAirtime ?? DEFAULT_MIN_AIRTIME_S;
-  const floor = input.gainFloor ?? DEFAULT_GAIN_FLOOR_S;
-  const gain = `${input.expectedGain >= 0 ? "+" : ""}${input.expectedGain.toFixed(2)} s`;
-  const straight = (reason: StraightReason, text: string): JumpVerdict => ({
-    verdict: "straight",
-    reason,
-    text,
-  });
-  if (!input.landsIntoTurn)
-    return straight("no-turn", "Take it straight: no turn starts close enough to the landing.");
-  if (Math.abs(input.turnAngle) < minTurn) {
-    return straight(
-      "turn-too-gentle",
-      "Take it straight: the turn after the landing is too gentle to gain anything.",
-    );
+  const t = { ...DEFAULT_VERDICT_THRESHOLDS, ...input.thresholds };
+  const straight = (reason: StraightReason): JumpVerdict => ({ verdict: "straight", reason });
+  if (!input.landsIntoTurn) return straight("no-turn");
+  if (Math.abs(input.turnAngle) < t.minTurnAngle) return straight("turn-too-gentle");
+  if (input.airtime < t.minAirtime) return straight("not-enough-airtime");
+  if (input.planReason) return straight(input.planReason);
+  const nose = Math.abs(input.noseTurn ?? Infinity);
+  if (nose < t.minNoseTurn) {
+    const alone = Math.abs(input.noseTurnUnlevelled ?? 0);
+    return straight(alone >= t.minNoseTurn ? "levelling-costs-turn" : "nose-turn-too-small");
   }
-  if (input.airtime < minAir || input.planFeasible === false) {
-    return straight(
-      "not-enough-airtime",
-      "Take it straight: the car is not in the air long enough to turn it.",
-    );
-  }
-  if (!(input.expectedGain > floor)) {
-    return straight(
-      "too-risky",
-      `Take it straight: at this skill level a set-up costs more than it saves (expected ${gain} a lap).`,
-    );
-  }
-  return {
-    verdict: "set-up",
-    reason: null,
-    text: `Set the car up in the air for the turn (expected ${gain} a lap).`,
-  };
+  if (!(input.expectedGain > 0)) return straight("too-risky");
+  if (input.expectedGain < t.minGainPerPass) return straight("gain-too-small");
+  return { verdict: "set-up", reason: null };
 }
