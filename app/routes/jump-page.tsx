@@ -130,7 +130,7 @@ export default function JumpPage({ loaderData: d }: Route.ComponentProps) {
           <JumpVerdictsTable jump={j} />
         </section>
       </div>
-      <JumpPlanSection jump={j} steering={d.steering} />
+      <JumpPlanSection jump={j} steering={d.steering} skill={d.skill} />
       <Assumptions />
       <nav aria-label="Other jumps" className="flex flex-wrap justify-between gap-3 text-sm">
         {d.previous ? (
