@@ -17,7 +17,7 @@ import {
   type AnalysisInputs,
   type CacheEntry,
 } from "~/analysis-cache.server";
-import { loadClubGuidance, type ClubGuidance } from "~/clubs/guidance.server";
+import { loadClubGuidance, verdictThresholds, type ClubGuidance } from "~/clubs/guidance.server";
 import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
@@ -98,11 +98,18 @@ export function analyseDocument(
     skill: opts.skill,
     guidance: guidance.guidanceSet,
     overrides: guidance.overrides,
+    ...(guidance.verdict ? { verdict: guidance.verdict } : {}),
   };
   const { entry, hit } = memoAnalysis(inputs, () =>
     analyseLayout(
       { ...document, guidance: guidance.guidanceSet },
-      { classIds: inputs.classIds, skill: inputs.skill, overrides: guidance.overrides, cache: engineCache },
+      {
+        classIds: inputs.classIds,
+        skill: inputs.skill,
+        overrides: guidance.overrides,
+        thresholds: verdictThresholds(guidance),
+        cache: engineCache,
+      },
     ),
   );
   return { analysis: entry.value, entry, hit };
