@@ -150,7 +150,7 @@ export function refineAmounts(
   o: RefineOptions,
 ): Refined | null {
   const start = simplify(guide);
-  // Aim a little inside the cap: the search steps (4 ms) and the final 1 ms run differ slightly.
+  // Aim a little inside the cap: the search steps (8 ms) and the final 1 ms run differ slightly.
   const target = Math.min(start.yaw, o.yawCap - YAW_MARGIN);
   const run: Run = (plan) => {
     const r = sim(timeline(plan), accel);

@@ -23,7 +23,7 @@ export type * from "./air-plan-types";
 const DEG = Math.PI / 180;
 /** Wheels must be straight this long before touchdown, s. */
 export const STRAIGHT_BEFORE_TOUCHDOWN = 0.02;
-const SEARCH_DT = 0.004;
+const SEARCH_DT = 0.008;
 /** Search rounds that re-size the pitch pulse for the pitch the steering adds. */
 const PULSE_ROUNDS = 3;
 /** Shortest steering phase a driver can hold, s (an estimate). */
