@@ -16,6 +16,9 @@ export default [
   route("api/layouts/:layoutId/analysis", "routes/api-layout-analysis.ts"),
   route("api/analysis", "routes/api-analysis.ts"),
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
+  route("layouts/:layoutId/build/marking.pdf", "routes/build-pack-marking-pdf.ts"),
+  route("layouts/:layoutId/build/marking.csv", "routes/build-pack-marking-csv.ts"),
+  route("layouts/:layoutId/build/earthworks.pdf", "routes/build-pack-earthworks-pdf.ts"),
 
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
   layout("routes/signed-in-frame.tsx", [
@@ -35,6 +38,7 @@ export default [
     route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
     route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
+    route("layouts/:layoutId/build", "routes/build-pack.tsx"),
     route("files/:fileId", "routes/file.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # `npm test`: every test. Installs Debian's chromium and poppler-utils when missing, then runs
-# the typecheck and the lint (a reach past the engine's front door fails here), the unit and
-# integration tests (vitest), builds the app and runs the browser tests against it.
+# the typecheck and the lint (a reach past the engine's front door fails here), the unit, component
+# and integration tests (vitest), builds the app and runs the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -54,7 +54,7 @@ counted() {
 
 stage "typecheck" npm run --silent typecheck
 stage "lint" ./node_modules/.bin/eslint .
-stage "unit and integration tests" counted ./node_modules/.bin/vitest run
+stage "unit, component and integration tests" counted ./node_modules/.bin/vitest run
 if stage "build" ./node_modules/.bin/react-router build; then
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else

@@ -40,13 +40,24 @@
  *   `expectedGain(successRate, timeSaved, failCost = 3)` s,
  *   `jumpVerdict({ landsIntoTurn, turnAngle, airtime, expectedGain, planReason?, noseTurn?,
  *   noseTurnUnlevelled?, thresholds? })` -> `{ verdict: "set-up" | "straight", reason }` (reasons
- *   are data; sentences with their numbers in verdict-text.ts). `DEFAULT_VERDICT_THRESHOLDS`:
+ *   are data; the sentences drivers read, with their numbers, are written by `describeVerdicts`
+ *   (jump-verdicts.ts, verdict-text.ts) from the words below). `DEFAULT_VERDICT_THRESHOLDS`:
  *   smallest turn 20 deg, airtime 0.3 s, worthwhile gain 0.05 s a pass, nose turn 10 deg, failure 3 s.
+ *
+ * The product's words (words.ts): `SKILL_LEVELS` / `SKILL_LABELS` / `skillPhrase`, `JUMP_PRESETS` /
+ * `JUMP_PRESET_LABELS`, `SURFACES` / `SURFACE_LABELS`, `GUIDANCE_SET_IDS` / `GUIDANCE_SET_LABELS`,
+ * `VERDICT_KINDS` / `VERDICT_WORDS` / `verdictKind`, `REASON_TEXT`, `ERROR_SOURCES` / `ERROR_WORDS`,
+ * `WHOOPS_TECHNIQUES` / `WHOOPS_WORDS`, `quotedList`. Defined once; every screen, message and
+ * command imports them from here.
  *
  * Car classes (cars.ts)
  * - `CAR_PRESETS` by id ("buggy-2wd-10", "buggy-4wd-10", "sct-10", "buggy-8"), `CAR_PRESET_IDS`,
  *   `carPreset(id)`, `CarParams` (every value an estimate, with notes on the inertias).
+ *
+ * New jumps (jump-presets.ts)
+ * - `defaultJump(preset, id)` -> the preset's starting shape; `DEFAULT_JUMP_PRESET`.
  */
+export * from "./words";
 export * from "./format";
 export * from "./flight";
 export * from "./air";
@@ -57,12 +68,40 @@ export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
 /*
  * Layout analysis (layout-analysis.ts, jump-analysis.ts, overlay.ts, analysis-cache.ts)
  * - `analyseLayout(doc, { classIds?, skill?, guidance?, overrides?, cache?, cars?, skillSigmas?,
- *   speedSigmas?, thresholds?, lookaheadS?, failCost?, seed? })` -> `LayoutAnalysis` (plain JSON data: lap length, closure,
- *   plan checks, rule report, per class: lap time, speed along the downsampled line, jumps with
- *   flight, window, EFH, landing turn, set-up plan and a verdict per skill level; angles in deg).
+ *   speedSigmas?, thresholds?, lookaheadS?, failCost?, seed?, marshal? })` -> `LayoutAnalysis`
+ *   (plain JSON data: lap length, closure, plan checks, rule report with the jump rules, per class:
+ *   lap time, speed along the downsampled line, jumps with flight, window, EFH, landing turn,
+ *   set-up plan, whoops ways and a verdict per skill level; angles in deg; `risk`: the marshal
+ *   plan when `marshal` settings are given).
  * - `analyseJump(context, options)` -> `JumpAnalysis` for one jump and one car class.
  * - `buildOverlay(analysis, classId, skill?)` -> `AnalysisOverlay` (app/lib/analysis-overlay.ts).
  * - `createAnalysisCache(maxEntries?)` -> an LRU memo (`memo`, `stats`, `clear`); `cacheKey`,
  *   `canonicalJson`, `fnv1a64`.
  */
 export * from "./layout";
+
+/*
+ * Build pack (build/): marking out and earthworks. Bearings there are surveyors' bearings:
+ * radians clockwise from the plan's +Y ("grid north", up the page), not the engine's headings.
+ * - `baseline(a, b)`, `measureFromDatum(line, x, y)` -> `{ distance, bearing, along, offset }`
+ *   (offset positive to the right of A to B), `pointFromBearing`, `pointFromOffsets`,
+ *   `planBearing(dx, dy)`, `trueBearing(planBearing, line, { gridTrueBearing } | { abTrueBearing })`.
+ * - `markingOut(doc, a, b, spacing)` -> centre-line stations with both edges, turn centres and
+ *   radii, jump points with heights, every stake measured from the datums.
+ * - `profileEarth(d, h, width, sideSlope?)`, `earthworks(doc, truckLoad)` -> fill and cut per jump
+ *   and in total, m³, and truck loads.
+ */
+export * from "./build";
+
+/*
+ * Marshal risk (marshal/; docs/engine.md "Marshal risk")
+ * - `marshalPlan(doc, analysis, { classIds?, cars?, settings?, suggest? })` -> `MarshalPlan`: overshoot
+ *   zones beyond jumps (J1..) and run-off zones past corners (T1..) as wedges and polygons in plan m,
+ *   hotspots (H1.., score 1 to 5, reason), the layout's marshal points
+ *   (M1..) with stretch, watch list, jumps, turns and warnings, and `suggested` points when asked.
+ * - `MARSHAL_SETTINGS` (defaults, ranges, sources), `marshalSettings(overrides)`, the words
+ *   (`HOTSPOT_KIND_WORDS`, `scoreWords`, `MARSHAL_NOTE`), and the hand-checkable reaches
+ *   `overshootReach(profile, speed, decel)` and `escapeReach(speed, decel)` (m, m/s, m/s^2);
+ *   `keepOutArea(zones)` merges the zones into one area (polygons of rings, m) for drawing.
+ */
+export * from "./marshal";

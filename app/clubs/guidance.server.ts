@@ -5,12 +5,15 @@
  * nose), stored under "verdict" in the same JSON (no migration: decision 0110).
  */
 import { eq } from "drizzle-orm";
-import type { GuidanceOverrides, GuidanceSetId } from "~/analysis";
-import { getDb } from "~/db/client.server";
-import { clubs } from "~/db/schema";
-import type { VerdictThresholds } from "~/analysis";
 import {
   GUIDANCE_SET_IDS,
+  type GuidanceOverrides,
+  type GuidanceSetId,
+  type VerdictThresholds,
+} from "~/analysis";
+import { getDb } from "~/db/client.server";
+import { clubs } from "~/db/schema";
+import {
   storedOverridesSchema,
   storedVerdictSchema,
   type VerdictSettings,

@@ -1,12 +1,7 @@
 import { Field, SelectField, type FieldErrors } from "~/components/ui/form";
 import type { LayoutStatus } from "~/lib/roles";
-import {
-  SURFACES,
-  SURFACE_LABELS,
-  TRACK_WIDTH_MAX_M,
-  TRACK_WIDTH_MIN_M,
-  type Surface,
-} from "~/lib/schemas/layouts";
+import { SURFACE_LABELS, SURFACES, type Surface } from "~/analysis";
+import { TRACK_WIDTH_MAX_M, TRACK_WIDTH_MIN_M } from "~/lib/schemas/layouts";
 
 const STATUS_STYLES: Record<LayoutStatus, string> = {
   draft: "border-clay-500 bg-clay-100 text-clay-700",

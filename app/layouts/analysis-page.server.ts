@@ -6,7 +6,7 @@
  */
 import type { ClassAnalysis, SkillLevel } from "~/analysis";
 import type { SummaryData } from "~/components/analysis/summary-data";
-import { carPreset } from "~/analysis";
+import { carPreset, SKILL_LEVELS, wordList } from "~/analysis";
 import type { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
@@ -57,7 +57,7 @@ export async function pageAnalysis(layout: LayoutRow, query: URLSearchParams): P
     skill = parseSkill(query.get("skill"), "skill");
   } catch (error) {
     if (!(error instanceof AnalysisInputError)) throw error;
-    problems.push("skill: must be novice, club or expert; showing club.");
+    problems.push(`skill: must be ${wordList(SKILL_LEVELS)}; showing ${skill}.`);
   }
   const base = { document, classId, skill, classes, problems };
   try {

@@ -4,6 +4,11 @@
  * dashes, so it is safe in a Content-Disposition header on every system.
  */
 export function exportFileName(layoutName: string, version: number): string {
+  return `${fileSlug(layoutName)}-v${version}.loftline.json`;
+}
+
+/** A layout's name as a file-name stem: ASCII lower-case letters, digits and dashes ("layout" if none). */
+export function fileSlug(layoutName: string): string {
   const slug = layoutName
     .normalize("NFKD")
     .replace(/[\u0300-\u036f]/g, "")
@@ -12,5 +17,5 @@ export function exportFileName(layoutName: string, version: number): string {
     .replace(/^-+|-+$/g, "")
     .slice(0, 60)
     .replace(/-+$/, "");
-  return `${slug || "layout"}-v${version}.loftline.json`;
+  return slug || "layout";
 }

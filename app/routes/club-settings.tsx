@@ -2,6 +2,7 @@ import { data, Form, useNavigation } from "react-router";
 import type { Route } from "./+types/club-settings";
 import {
   checkRules,
+  GUIDANCE_SET_IDS,
   GUIDANCE_SETS,
   RULES_NOTE,
   type GuidanceOverrides,
@@ -16,7 +17,6 @@ import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form"
 import { parseForm } from "~/lib/forms";
 import {
   clubSettingsSchema,
-  GUIDANCE_SET_IDS,
   RULE_FIELDS,
   settingsFromForm,
   VERDICT_FIELDS,

@@ -2,22 +2,23 @@ import { data, Link } from "react-router";
 import type { Route } from "./+types/jump-page";
 import { requireLayoutAccess } from "~/auth/permissions.server";
 import { AnalysisPickers } from "~/components/analysis/analysis-pickers";
-import {
-  jumpName,
-  PRESET_LABELS,
-  skillPhrase,
-  VERDICT_WORDS,
-  verdictKind,
-} from "~/components/analysis/format";
+import { jumpName } from "~/components/analysis/format";
 import { JumpElevation } from "~/components/analysis/jump-elevation";
 import { JumpFacts } from "~/components/analysis/jump-facts";
 import { JumpPlanSection } from "~/components/analysis/jump-plan-section";
 import { JumpVerdictsTable } from "~/components/analysis/jump-verdicts-table";
-import { VerdictIcon } from "~/components/analysis/verdict-mark";
+import { VerdictMark } from "~/components/analysis/verdict-mark";
 import { Cautions } from "~/components/cautions";
 import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { elevationData, steeringSeries } from "~/layouts/jump-page.server";
-import type { JumpSection } from "~/analysis";
+import {
+  JUMP_PRESET_LABELS,
+  skillPhrase,
+  speedSpreadPhrase,
+  timingErrorsPhrase,
+  verdictKind,
+  type JumpSection,
+} from "~/analysis";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Layout"} · Loftline` },
@@ -66,7 +67,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export default function JumpPage({ loaderData: d }: Route.ComponentProps) {
   const j = d.jump;
-  const kind = verdictKind(j, d.skill);
+  const kind = verdictKind(j.verdicts[d.skill]);
   const q = `?${new URLSearchParams({ class: d.classId, skill: d.skill })}`;
   return (
     <article className="space-y-8">
@@ -86,7 +87,7 @@ export default function JumpPage({ loaderData: d }: Route.ComponentProps) {
               J{d.number} {jumpName(j)}
             </h1>
             <p className="text-sm text-ink-500">
-              {PRESET_LABELS[j.preset]} · {d.classLabel} · verdicts for {skillPhrase(d.skill)} · model
+              {JUMP_PRESET_LABELS[j.preset]} · {d.classLabel} · verdicts for {skillPhrase(d.skill)} · model
               estimates
             </p>
           </div>
@@ -105,7 +106,7 @@ export default function JumpPage({ loaderData: d }: Route.ComponentProps) {
       </header>
       <section aria-labelledby="verdict-heading" className="rounded-lg border border-sand-200 bg-white p-4">
         <h2 id="verdict-heading" className="flex items-center gap-2 text-lg font-semibold">
-          <VerdictIcon kind={kind} size={18} /> {VERDICT_WORDS[kind]}
+          <VerdictMark kind={kind} size={18} className="gap-2" />
         </h2>
         <p className="mt-1 text-ink-700">{j.verdict.text}</p>
       </section>
@@ -175,9 +176,10 @@ function Assumptions() {
           In the air the car is a rigid body with spinning wheels: steering rolls and turns it, brake drops
           the nose, throttle raises it.
         </li>
+        <li>Driver timing errors: {timingErrorsPhrase()} (estimates); a failed landing costs about 3 s.</li>
         <li>
-          Driver timing errors: about 60 ms for a novice, 35 ms for a club racer, 15 ms for an expert
-          (estimates); a failed landing costs about 3 s.
+          Takeoff speed from one pass to the next varies by {speedSpreadPhrase()}: estimates of what is left
+          after the driver's own correction in the air by eye, which the model does not simulate.
         </li>
         <li>A jump lands into a turn when the turn starts within half a second of travel after touchdown.</li>
       </ul>

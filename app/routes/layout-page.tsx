@@ -4,6 +4,7 @@ import { requireLayoutAccess } from "~/auth/permissions.server";
 import { redirectWithNotice } from "~/auth/session.server";
 import { refusal } from "~/clubs/rule-error.server";
 import { parseJumpSort } from "~/components/analysis/jump-sort";
+import { BuildPackLink } from "~/components/build-pack/build-pack-link";
 import { LayoutAnalysisSection } from "~/components/analysis/layout-analysis-section";
 import { LayoutMeta, LayoutMetaFields, StatusBadge } from "~/components/layout-meta";
 import { Button } from "~/components/ui/button";
@@ -130,7 +131,12 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
           </h2>
           <LayoutMeta {...layout} clubName={club.name} createdByName={createdByName} />
         </section>
-        {isDirector ? <DirectorTools layout={layout} errors={errors} values={values} /> : null}
+        {isDirector ? (
+          <div className="space-y-6">
+            <BuildPackLink layoutId={layout.id} />
+            <DirectorTools layout={layout} errors={errors} values={values} />
+          </div>
+        ) : null}
       </div>
     </article>
   );

@@ -8,10 +8,18 @@
  * level is in `verdicts`). Bad input names the field on stderr, exit code 2, nothing on stdout.
  */
 import { analyseLayout } from "~/analysis";
-import { SKILL_LEVELS, type JumpAnalysis, type LayoutAnalysis, type SkillLevel } from "~/analysis";
+import {
+  quotedList,
+  SKILL_LEVELS,
+  type JumpAnalysis,
+  type LayoutAnalysis,
+  type SkillLevel,
+} from "~/analysis";
 import { CAR_PRESET_IDS, carPreset } from "~/analysis";
 import { parseLayoutDocument } from "~/analysis";
 import { InputError, type CliCommand } from "./io";
+
+const SKILL_OPTION = `--skill ${SKILL_LEVELS.join("|")}`;
 
 export interface AnalyseArgs {
   classIds?: string[];
@@ -31,12 +39,12 @@ export function parseAnalyseArgs(args: readonly string[]): AnalyseArgs {
         throw new InputError("--class", `unknown car class "${value}" (known: ${CAR_PRESET_IDS.join(", ")})`);
       (out.classIds ??= []).push(value);
     } else if (flag === "--skill") {
-      if (!value) throw new InputError("--skill", 'needs a level: "novice", "club" or "expert"');
+      if (!value) throw new InputError("--skill", `needs a level: ${quotedList(SKILL_LEVELS)}`);
       if (!SKILL_LEVELS.includes(value as SkillLevel))
-        throw new InputError("--skill", `must be "novice", "club" or "expert" (got "${value}")`);
+        throw new InputError("--skill", `must be ${quotedList(SKILL_LEVELS)} (got "${value}")`);
       out.skill = value as SkillLevel;
     } else {
-      throw new InputError(flag, "unknown option (known: --class ID, --skill novice|club|expert)");
+      throw new InputError(flag, `unknown option (known: --class ID, ${SKILL_OPTION})`);
     }
   }
   return out;
@@ -99,7 +107,7 @@ export function analyseOutput(a: LayoutAnalysis) {
 /** The `analyse` command with the options given after FILE (`process.argv.slice(4)` from the registry). */
 export function analyseCommand(args: readonly string[]): CliCommand {
   return {
-    summary: "analyse FILE [--class ID] [--skill novice|club|expert]   whole analysis of a layout file",
+    summary: `analyse FILE [--class ID] [${SKILL_OPTION}]   whole analysis of a layout file`,
     run(input) {
       const options = parseAnalyseArgs(args);
       const parsed = parseLayoutDocument(input);

@@ -16,9 +16,9 @@ import {
   successRates,
   timingWindows,
   type CleanLanding,
-  type ErrorSource,
   type SkillSigmas,
 } from "./air-plan-robustness";
+import type { ErrorSource } from "../words";
 import { simulateAttitude } from "./attitude";
 import type { AirPlan } from "./air-plan-types";
 

@@ -13,13 +13,10 @@
  * alone say which error matters most.
  */
 import { seededNormal } from "../math/vec";
+import { ERROR_SOURCES, SKILL_LEVELS, skillPhrase, type ErrorSource, type SkillLevel } from "../words";
 
 /** Timing error (standard deviation) of a driver's switch, s, by skill level. */
-export interface SkillSigmas {
-  novice: number;
-  club: number;
-  expert: number;
-}
+export type SkillSigmas = Record<SkillLevel, number>;
 
 /** Defaults: estimates from timing research (engine.md): 60 ms, 35 ms, 15 ms. */
 export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
@@ -30,18 +27,40 @@ export const DEFAULT_SKILL_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
 
 /**
  * Spread (standard deviation) of the takeoff speed from one pass to the next, m/s, by skill
- * level. Estimates (no measurements): a novice's throttle on the approach varies by about half a
- * metre a second, an expert's by about 0.15 m/s.
+ * level: 0.3, 0.15 and 0.05 m/s. Estimates (no measurements), and deliberately small: they stand
+ * for the error left at touchdown after the driver's own correction in the air by eye, which
+ * this open-loop model does not simulate; the raw spread of the throttle on the approach is
+ * larger (docs/decisions/0111).
  */
 export const DEFAULT_SPEED_SIGMAS: Readonly<SkillSigmas> = Object.freeze({
-  novice: 0.5,
-  club: 0.3,
-  expert: 0.15,
+  novice: 0.3,
+  club: 0.15,
+  expert: 0.05,
 });
 
-/** The driver's errors the success rate samples. */
-export const ERROR_SOURCES = ["steering", "pulse", "speed"] as const;
-export type ErrorSource = (typeof ERROR_SOURCES)[number];
+/**
+ * The timing errors in words, for pages that state their assumptions: "about 60 ms for a novice,
+ * 35 ms for a club racer, 15 ms for an expert".
+ * @param sigmas s by skill level (default: the engine's)
+ */
+export function timingErrorsPhrase(sigmas: Readonly<SkillSigmas> = DEFAULT_SKILL_SIGMAS): string {
+  return perSkill(SKILL_LEVELS.map((s) => `${Math.round(sigmas[s] * 1000)} ms`));
+}
+
+/**
+ * The takeoff speed spreads in words: "about 0.30 m/s for a novice, 0.15 m/s for a club racer,
+ * 0.05 m/s for an expert".
+ * @param sigmas m/s by skill level (default: the engine's)
+ */
+export function speedSpreadPhrase(sigmas: Readonly<SkillSigmas> = DEFAULT_SPEED_SIGMAS): string {
+  return perSkill(SKILL_LEVELS.map((s) => `${sigmas[s].toFixed(2)} m/s`));
+}
+
+/** "about a for a novice, b for a club racer, c for an expert" (values in SKILL_LEVELS order). */
+function perSkill(values: string[]): string {
+  const parts = SKILL_LEVELS.map((s, i) => `${values[i]} for ${skillPhrase(s)}`);
+  return `about ${parts.slice(0, -1).join(", ")}, ${parts.at(-1)}`;
+}
 
 export interface SwitchWindow {
   /** Planned switch time, s after takeoff. */
@@ -264,9 +283,7 @@ export function successRates(
     }
     return [all / samples, steer / samples, pulse / samples, fast / samples];
   };
-  const levels = (["novice", "club", "expert"] as const).map((l, i) =>
-    level(sigmas[l], speedSigmas[l], seed + i),
-  );
+  const levels = SKILL_LEVELS.map((l, i) => level(sigmas[l], speedSigmas[l], seed + i));
   const pick = (k: number): SkillSigmas => ({
     novice: levels[0][k],
     club: levels[1][k],

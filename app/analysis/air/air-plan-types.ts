@@ -5,7 +5,8 @@ import type { AttitudeCar } from "./attitude";
 import type { TradeOffPoint } from "./air-plan-joint";
 import type { PitchPulse, PulseLimits } from "./air-plan-pulse";
 import type { PlanValue } from "./air-plan-value";
-import type { ErrorSource, SkillSigmas, SwitchWindow } from "./air-plan-robustness";
+import type { SkillSigmas, SwitchWindow } from "./air-plan-robustness";
+import type { ErrorSource } from "../words";
 
 export type TurnSide = "left" | "right";
 
@@ -47,7 +48,7 @@ export interface AirPlanInput {
   seed?: number;
   /** Timing error per skill level, s (default 60 / 35 / 15 ms). */
   skillSigmas?: SkillSigmas;
-  /** Takeoff speed spread per skill level, m/s (default 0.5 / 0.3 / 0.15). */
+  /** Takeoff speed spread per skill level, m/s (default 0.3 / 0.15 / 0.05). */
   speedSigmas?: SkillSigmas;
 }
 

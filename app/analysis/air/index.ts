@@ -14,8 +14,8 @@ export type { TradeOffPoint } from "./air-plan-joint";
 export {
   DEFAULT_SKILL_SIGMAS,
   DEFAULT_SPEED_SIGMAS,
-  ERROR_SOURCES,
-  type ErrorSource,
+  speedSpreadPhrase,
+  timingErrorsPhrase,
   type SkillSigmas,
   type SwitchWindow,
 } from "./air-plan-robustness";

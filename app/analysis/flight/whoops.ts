@@ -22,10 +22,9 @@ import {
   type FlightInput,
   type FlightResult,
 } from "./flight";
+import type { WhoopsTechnique } from "../words";
 
 type WhoopsSection = Extract<JumpSection, { preset: "whoops" }>;
-
-export type WhoopsTechnique = "skim" | "triples" | "doubles" | "roll";
 
 /** Jumping through the row n bumps at a time (2: doubles, 3: triples). */
 export interface WhoopsHops {

@@ -4,3 +4,4 @@ export { crossFieldIssues } from "./layout-document-checks";
 export * from "./car-schema";
 export * from "./cars";
 export * from "./starter-layout";
+export * from "./jump-presets";

@@ -7,6 +7,7 @@
  */
 import { z } from "zod";
 import { crossFieldIssues } from "./layout-document-checks";
+import { GUIDANCE_SET_IDS, JUMP_PRESETS, quotedList, SURFACES } from "../words";
 
 export { MOUND_BACK_SLOPE_DEG, minimumGap } from "./layout-document-checks";
 
@@ -128,16 +129,6 @@ export const customJumpSchema = z.object({
   landingEndIndex: count(2, 499),
 });
 
-export const JUMP_PRESETS = [
-  "tabletop",
-  "double",
-  "triple",
-  "step-up",
-  "step-down",
-  "whoops",
-  "custom",
-] as const;
-
 export const jumpSectionSchema = z.discriminatedUnion(
   "preset",
   [
@@ -179,9 +170,7 @@ const layoutDocumentShape = z.object({
     .string({ error: "must be text" })
     .max(2000, { error: "must be at most 2000 characters" })
     .optional(),
-  surface: z.enum(["dirt", "clay", "turf", "carpet"], {
-    error: 'must be "dirt", "clay", "turf" or "carpet"',
-  }),
+  surface: z.enum(SURFACES, { error: `must be ${quotedList(SURFACES)}` }),
   /** Track width between the edges, m. */
   trackWidth: measure(1, 10, "m"),
   /** Start pose: position of the start line on the centre line, m, and heading, degrees anticlockwise from +X. */
@@ -222,7 +211,7 @@ const layoutDocumentShape = z.object({
     .min(1, { error: "must name at least one car class" })
     .max(10, { error: "must have at most 10 classes" }),
   /** Track guidance set the rule checks use. */
-  guidance: z.enum(["club", "national"], { error: 'must be "club" or "national"' }).default("club"),
+  guidance: z.enum(GUIDANCE_SET_IDS, { error: `must be ${quotedList(GUIDANCE_SET_IDS)}` }).default("club"),
   /**
    * Background photo of the site (an uploaded file of the club): plan position of the photo's
    * top-left corner m, scale m per pixel, rotation deg anticlockwise, opacity 0..1, hidden or shown.
@@ -258,7 +247,6 @@ export type LayoutSection = z.infer<typeof sectionSchema>;
 export type StraightSection = z.infer<typeof straightSectionSchema>;
 export type TurnSection = z.infer<typeof turnSectionSchema>;
 export type JumpSection = z.infer<typeof jumpSectionSchema>;
-export type JumpPreset = JumpSection["preset"];
 export type CustomJumpSection = z.infer<typeof customJumpSchema>;
 
 /** One problem found in a layout file: the field's path ("sections[3].radius") and what is wrong. */

@@ -17,7 +17,8 @@ import type { CentreLine, ResolvedSection } from "../track/geometry";
 import { STANDARD_GRAVITY } from "../track/lap-jumps";
 import { findLandingTurn, lineIndexAt, pointAt } from "../verdict/jump-turn";
 import { describeVerdicts, type VerdictInputs } from "../verdict/jump-verdicts";
-import type { JumpAnalysis, SkillLevel } from "./layout-analysis-types";
+import type { JumpAnalysis } from "./layout-analysis-types";
+import type { SkillLevel } from "../words";
 import type { JumpLap } from "../track/speed";
 import {
   DEFAULT_TURN_LOOKAHEAD_S,
@@ -50,7 +51,7 @@ export interface JumpAnalysisOptions {
   failCost?: number;
   /** The values that decide the verdicts (defaults: DEFAULT_VERDICT_THRESHOLDS; `failCost` above wins). */
   thresholds?: Partial<VerdictThresholds>;
-  /** Takeoff speed spread per skill level, m/s (default 0.5 / 0.3 / 0.15). */
+  /** Takeoff speed spread per skill level, m/s (default 0.3 / 0.15 / 0.05). */
   speedSigmas?: SkillSigmas;
   /** Gravity, m/s^2. */
   g?: number;

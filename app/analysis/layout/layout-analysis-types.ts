@@ -7,26 +7,12 @@
  * degrees and every angle field ends in `Deg` (docs/decisions/0400). Every number is a model
  * estimate, not a safety certification.
  */
-import type { JumpPreset } from "../format/layout-document";
+import type { ErrorSource, JumpPreset, JumpReason, SkillLevel, WhoopsTechnique } from "../words";
 import type { PlanInfeasibleReason } from "../air/air-plan";
 import type { PitchPulse } from "../air/air-plan-pulse";
-import type { ErrorSource, SwitchWindow } from "../air/air-plan-robustness";
-import type { WhoopsTechnique } from "../flight/whoops";
+import type { SwitchWindow } from "../air/air-plan-robustness";
 import type { RuleReport } from "../track/rules";
-import type { StraightReason } from "../verdict/verdict";
-
-/** Driver skill levels the verdicts are given for. */
-export const SKILL_LEVELS = ["novice", "club", "expert"] as const;
-export type SkillLevel = (typeof SKILL_LEVELS)[number];
-
-/**
- * Why a jump is best taken straight, as data (sentences: verdict/verdict-text.ts): the reasons
- * of `StraightReason` (verdict.ts), and
- * - "cannot-clear": the approach is too short to reach the landing;
- * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it);
- * - "whoops": a whoops row, skimmed, jumped through or rolled (see `JumpAnalysis.whoops`).
- */
-export type JumpReason = StraightReason | "cannot-clear" | "flown-over" | "whoops";
+import type { MarshalPlan } from "../marshal/marshal-types";
 
 /** The verdict for one jump, one car class and one skill level. */
 export interface SkillVerdict {
@@ -34,7 +20,7 @@ export interface SkillVerdict {
   verdict: "set-up" | "straight";
   /** Null for "set-up". */
   reason: JumpReason | null;
-  /** Short reason in plain words, e.g. "no turn at the landing"; for a set-up, what to do. */
+  /** Short reason in plain words, e.g. "no turn at the landing"; for a set-up, what to do ("land with the nose 25° left"). */
   reasonText: string;
   /** One plain sentence for drivers. */
   text: string;
@@ -257,6 +243,12 @@ export interface LayoutAnalysis {
   startStraight: { length: number; sectionIds: string[] };
   rules: RuleReport;
   classes: ClassAnalysis[];
+  /**
+   * The marshal risk over every class (marshal/marshal-plan.ts), when asked for with
+   * `options.marshal`: zones, hotspots and the layout's own marshal points with warnings; no
+   * suggested points (ask `marshalPlan` for those). Null otherwise.
+   */
+  risk: MarshalPlan | null;
   /** Plain-words caveat shown with every analysis. */
   note: string;
 }

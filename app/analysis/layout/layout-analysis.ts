@@ -15,15 +15,14 @@ import type { ResolvedSection } from "../track/geometry";
 import { analyseJump } from "./jump-analysis";
 import type { JumpProfile } from "../track/jump-profile";
 import { pointAt } from "../verdict/jump-turn";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
-import {
-  SKILL_LEVELS,
-  type ClassAnalysis,
-  type LayoutAnalysis,
-  type SkillLevel,
-} from "./layout-analysis-types";
+import { ballisticJumpWindow, STANDARD_GRAVITY, type JumpWindow } from "../track/lap-jumps";
+import type { ClassAnalysis, LayoutAnalysis } from "./layout-analysis-types";
+import { GUIDANCE_SET_IDS, quotedList, SKILL_LEVELS, type GuidanceSetId, type SkillLevel } from "../words";
 import { measureLayout, ruleMeasurements, type LayoutMeasures } from "../track/layout-measure";
-import { checkRules, GUIDANCE_SETS, type GuidanceOverrides, type GuidanceSetId } from "../track/rules";
+import { jumpRuleMeasurements } from "./jump-rules";
+import { marshalRisk } from "../marshal/marshal-plan";
+import { marshalSettings, type MarshalSettings } from "../marshal/settings";
+import { checkRules, GUIDANCE_SETS, guidanceValues, type GuidanceOverrides } from "../track/rules";
 import { lapSpeed } from "../track/speed";
 import {
   DEFAULT_FAIL_COST_S,
@@ -47,7 +46,7 @@ export interface AnalyseOptions {
   cars?: Readonly<Record<string, CarParams>>;
   /** Timing error per skill level, s. */
   skillSigmas?: SkillSigmas;
-  /** Takeoff speed spread per skill level, m/s (default 0.5 / 0.3 / 0.15, estimates). */
+  /** Takeoff speed spread per skill level, m/s (default 0.3 / 0.15 / 0.05, estimates). */
   speedSigmas?: SkillSigmas;
   /**
    * The values that decide the verdicts, SI units and radians (defaults:
@@ -60,6 +59,11 @@ export interface AnalyseOptions {
   failCost?: number;
   /** Monte Carlo seed of the plans' success rates (default 1). */
   seed?: number;
+  /**
+   * Adds the marshal risk as `risk` with these marshal settings (`{}` for the defaults); left out
+   * (null) by default: it doubles the time of an edit's re-analysis (docs/decisions/0704).
+   */
+  marshal?: Partial<MarshalSettings> | false;
 }
 
 /** Shown with every analysis. */
@@ -118,11 +122,11 @@ function planSection(
   doc: LayoutDocument,
   m: LayoutMeasures,
   skill: SkillLevel,
+  keep: number[],
   rules: LayoutAnalysis["rules"],
-) {
+): Omit<LayoutAnalysis, "classes" | "risk"> {
   const { line } = m.geometry;
-  const keep = downsample(line.count, line.s);
-  const base: Omit<LayoutAnalysis, "classes"> = {
+  const base: Omit<LayoutAnalysis, "classes" | "risk"> = {
     name: doc.name,
     lapLength: m.geometry.lapLength,
     closure: { gap: m.geometry.closure.gap, headingDeg: m.geometry.closure.headingDeg },
@@ -145,7 +149,7 @@ function planSection(
     rules,
     note: ANALYSIS_NOTE,
   };
-  return { base, keep };
+  return base;
 }
 
 /**
@@ -169,10 +173,28 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   };
   const guidance = options.guidance ?? doc.guidance;
   if (!Object.prototype.hasOwnProperty.call(GUIDANCE_SETS, guidance))
-    throw new RangeError('guidance: must be "club" or "national"');
-  const rulesFor = (m: LayoutMeasures) =>
-    checkRules(ruleMeasurements(doc, m), guidance, options.overrides ?? {});
-  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, settings, cache);
+    throw new RangeError(`guidance: must be ${quotedList(GUIDANCE_SET_IDS)}`);
+  const overrides = options.overrides ?? {};
+  const limits = guidanceValues(guidance, overrides);
+  const rulesFor = (m: LayoutMeasures, classes: readonly ClassAnalysis[]) =>
+    checkRules(
+      { ...ruleMeasurements(doc, m), ...jumpRuleMeasurements(classes, limits) },
+      guidance,
+      overrides,
+    );
+  const marshal =
+    options.marshal === undefined || options.marshal === false ? false : marshalSettings(options.marshal);
+  const riskFor: RiskFor = (analysis, jumpWindow) =>
+    marshal === false
+      ? null
+      : marshalRisk(
+          doc,
+          analysis,
+          classes.map((c, i) => ({ ...c, analysis: analysis.classes[i] })),
+          marshal,
+          { suggest: false, jumpWindow },
+        );
+  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, riskFor, settings, cache);
   if (!cache) return compute();
   // The document's plain JSON text: a document written with its keys in another order only misses.
   const key = cacheKey("layout", {
@@ -180,29 +202,37 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
     classes: classes.map((c) => [c.id, hashOnce(c.car)]),
     skill,
     guidance,
-    overrides: options.overrides ?? {},
+    overrides,
     settings,
+    marshal,
   });
   return cache.memo(key, compute);
 }
+
+/** The marshal risk of the analysis so far, with the lap model's (memoised) speed windows. */
+type RiskFor = (
+  analysis: Omit<LayoutAnalysis, "risk">,
+  jumpWindow: (p: JumpProfile) => JumpWindow,
+) => LayoutAnalysis["risk"];
 
 function computeAnalysis(
   doc: LayoutDocument,
   classes: { id: string; car: CarParams }[],
   skill: SkillLevel,
-  rulesFor: (m: LayoutMeasures) => LayoutAnalysis["rules"],
+  rulesFor: (m: LayoutMeasures, classes: readonly ClassAnalysis[]) => LayoutAnalysis["rules"],
+  riskFor: RiskFor,
   settings: AnalysisSettings,
   cache: AnalysisCache | undefined,
 ): LayoutAnalysis {
   const m = measureLayout(doc);
-  const rules = rulesFor(m);
-  const { base, keep } = planSection(doc, m, skill, rules);
+  const keep = downsample(m.geometry.line.count, m.geometry.line.s);
   const { sections, line } = m.geometry;
   const g = STANDARD_GRAVITY;
-  const jumpWindow = cache
-    ? (_s: ResolvedSection, p: JumpProfile) =>
-        cache.memo(cacheKeyOf("lap-window", hashOnce(p), g), () => ballisticJumpWindow(p, g))
-    : undefined;
+  const windowOf = (p: JumpProfile) =>
+    cache
+      ? cache.memo(cacheKeyOf("lap-window", hashOnce(p), g), () => ballisticJumpWindow(p, g))
+      : ballisticJumpWindow(p, g);
+  const jumpWindow = cache ? (_s: ResolvedSection, p: JumpProfile) => windowOf(p) : undefined;
   const result: ClassAnalysis[] = classes.map(({ id, car }) => {
     const lap = lapSpeed(m.geometry, car, { g, jumpWindow });
     const jumps = lap.jumps.map((j) =>
@@ -222,5 +252,6 @@ function computeAnalysis(
       cannotClear: jumps.filter((j) => j.cannotClear).map((j) => j.sectionId),
     };
   });
-  return { ...base, classes: result };
+  const analysis = { ...planSection(doc, m, skill, keep, rulesFor(m, result)), classes: result };
+  return { ...analysis, risk: riskFor(analysis, windowOf) };
 }

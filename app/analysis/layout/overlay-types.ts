@@ -3,6 +3,8 @@
  * the analysis API returns beside the full result (`overlay` field of POST /api/analysis and
  * GET /api/layouts/:layoutId/analysis). Plan coordinates in metres, speeds in m/s.
  */
+import type { VerdictKind } from "../words";
+
 export interface AnalysisOverlay {
   /** Car class the speeds are for. */
   classId: string;
@@ -28,8 +30,8 @@ export interface OverlayJump {
   lip: [number, number];
   landing: [number, number] | null;
   /** Verdict for the chosen skill level. "cannot-clear": the approach is too short to clear it. */
-  verdict: "set-up" | "straight" | "cannot-clear";
-  /** Short text beside the marker, e.g. "Set up: turn 25° left in the air" or "Straight: no turn at the landing". */
+  verdict: VerdictKind;
+  /** Short text beside the marker: the verdict's word and its reason, e.g. "Take it straight: no turn at the landing". */
   label: string;
   takeoffSpeed: number;
   airtime: number;

@@ -4,17 +4,17 @@
  * with short verdict labels, hidden stretches as polylines, lane conflicts and failed rules.
  */
 import type { AnalysisOverlay, OverlayJump } from "./overlay-types";
-import type { JumpAnalysis, LayoutAnalysis, SkillLevel } from "./layout-analysis-types";
-import { SKILL_LEVELS } from "./layout-analysis-types";
+import type { JumpAnalysis, LayoutAnalysis } from "./layout-analysis-types";
+import { SKILL_LEVELS, VERDICT_WORDS, verdictKind, type SkillLevel } from "../words";
 import type { RuleCheck } from "../track/rules";
 
-/** Short label beside a jump's marker, e.g. "Set up: turn 25° left in the air". */
+/**
+ * Short label beside a jump's marker: the verdict's word and its short reason, e.g. "Set up in
+ * the air: land with the nose 25° left" or "Take it straight: no turn at the landing".
+ */
 export function jumpLabel(j: JumpAnalysis, skill: SkillLevel): string {
   const v = j.verdicts[skill];
-  if (v.reason === "cannot-clear") return "Cannot clear: approach too short";
-  if (v.verdict === "set-up" && j.plan && j.turn)
-    return `Set up: turn ${Math.round(Math.abs(j.plan.yawDeg))}\u00b0 ${j.turn.side} in the air`;
-  return `Straight: ${v.reasonText}`;
+  return `${VERDICT_WORDS[verdictKind(v)]}: ${v.reasonText}`;
 }
 
 function overlayJump(j: JumpAnalysis, skill: SkillLevel): OverlayJump {
@@ -23,7 +23,7 @@ function overlayJump(j: JumpAnalysis, skill: SkillLevel): OverlayJump {
     sectionId: j.sectionId,
     lip: [j.lip.x, j.lip.y],
     landing: j.landing ? [j.landing.x, j.landing.y] : null,
-    verdict: v.reason === "cannot-clear" ? "cannot-clear" : v.verdict,
+    verdict: verdictKind(v),
     label: jumpLabel(j, skill),
     takeoffSpeed: j.takeoffSpeed,
     airtime: j.airtime,

@@ -5,7 +5,7 @@
  * These checks are estimates from a drawing. The sanctioning body's current rulebook decides.
  */
 
-export type GuidanceSetId = "club" | "national";
+import { GUIDANCE_SET_LABELS, type GuidanceSetId } from "../words";
 
 /** The values a guidance set checks against. */
 export interface GuidanceValues {
@@ -21,6 +21,12 @@ export interface GuidanceValues {
   maxHiddenLength: number;
   /** Largest stretch between neighbouring marshal points, as a multiple of an even share of the lap. */
   maxMarshalGapRatio: number;
+  /** Shortest run-out from a landing's touchdown to the start of the next turn, m. */
+  minLandingRunOut: number;
+  /** Hardest landing: largest equivalent fall height at the planned takeoff speed, m. */
+  maxLandingFallHeight: number;
+  /** Narrowest speed window (highest minus lowest takeoff speed that lands on the ramp), m/s. */
+  minSpeedWindow: number;
 }
 
 export type GuidanceOverrides = Partial<GuidanceValues>;
@@ -35,6 +41,18 @@ export interface RuleMeasurements {
   hiddenLength: number | null;
   /** Null when no marshal points are placed. */
   marshalGapRatio: number | null;
+  /**
+   * The jump rules, measured on the jumps of every car class (layout/jump-rules.ts): the shortest
+   * run-out (m), the hardest landing (m) and the narrowest window (m/s). Null or left out: no jump
+   * to measure (not checked).
+   */
+  landingRunOut?: number | null;
+  landingFallHeight?: number | null;
+  speedWindow?: number | null;
+  /** Where each measured value was found, in words (e.g. "J7 Hairpin table, 1/10 short-course truck"). */
+  where?: Partial<Record<RuleId, string>>;
+  /** Every place that fails a rule, in words, by rule (the worst one is in `where`). */
+  failing?: Partial<Record<RuleId, string[]>>;
 }
 
 export type RuleStatus = "pass" | "fail" | "not checked";
@@ -45,13 +63,15 @@ export interface RuleCheck {
   /** The rule's value and how the measurement must compare with it. */
   value: number;
   comparison: "at least" | "at most";
-  unit: "m" | "x even share";
+  unit: "m" | "m/s" | "x even share";
   measured: number | null;
   status: RuleStatus;
   /** Plain-words explanation of the result. */
   detail: string;
   /** Where the value comes from. */
   source: string;
+  /** Where the measured value was found, in words; null when the rule is about the whole layout. */
+  where: string | null;
 }
 
 export interface RuleReport {
@@ -70,6 +90,26 @@ export const RULEBOOK_SOURCE =
 const MARSHAL_SOURCE =
   'Loftline default, an estimate (not from a rulebook): "spread evenly" read as no stretch longer than 1.5 times an even share of the lap';
 
+/**
+ * Sources of the jump rules' default values: none comes from a rulebook (engine.md names no jump
+ * values), so each says what it is (docs/decisions/0703).
+ */
+const JUMP_RULE_SOURCES: Partial<Record<RuleId, string>> = {
+  minLandingRunOut:
+    "Loftline default, an estimate (common practice: a car needs a few metres after touching down to settle on its wheels before it turns); not from a rulebook",
+  maxLandingFallHeight:
+    "Loftline default, an estimate from memory of the drop onto flat ground a 1/10 car's suspension takes without bottoming hard; not from a rulebook. The measure is the equivalent fall height (Levy, Hubbard, McNeil & Swedberg 2015)",
+  minSpeedWindow:
+    "Loftline default, an estimate from memory of how evenly club drivers hit a jump's takeoff speed; not from a rulebook",
+};
+
+/** The three jump rules' default values, the same in both guidance sets. */
+export const JUMP_RULE_DEFAULTS = {
+  minLandingRunOut: 3,
+  maxLandingFallHeight: 0.5,
+  minSpeedWindow: 0.2,
+} as const;
+
 export const RULES_NOTE =
   "These checks are estimates from the drawing, not a safety certification. The sanctioning body's current rulebook decides, together with local regulations and the site's own risk assessment.";
 
@@ -79,7 +119,7 @@ export const GUIDANCE_SETS: Record<
 > = {
   club: {
     id: "club",
-    label: "Club track guidance",
+    label: GUIDANCE_SET_LABELS.club,
     values: {
       minTrackWidth: 2.4,
       minLapLength: 120,
@@ -87,11 +127,12 @@ export const GUIDANCE_SETS: Record<
       minStartStraight: 20,
       maxHiddenLength: 0,
       maxMarshalGapRatio: 1.5,
+      ...JUMP_RULE_DEFAULTS,
     },
   },
   national: {
     id: "national",
-    label: "National-level track guidance",
+    label: GUIDANCE_SET_LABELS.national,
     values: {
       minTrackWidth: 3,
       minLapLength: 120,
@@ -99,6 +140,7 @@ export const GUIDANCE_SETS: Record<
       minStartStraight: 20,
       maxHiddenLength: 0,
       maxMarshalGapRatio: 1.5,
+      ...JUMP_RULE_DEFAULTS,
     },
   },
 };
@@ -159,6 +201,30 @@ const RULES: {
     measure: (m) => m.marshalGapRatio,
     missing: "no marshal points placed",
   },
+  {
+    id: "minLandingRunOut",
+    label: "Run-out after a landing before the next turn",
+    comparison: "at least",
+    unit: "m",
+    measure: (m) => m.landingRunOut ?? null,
+    missing: "no jump lands before a turn",
+  },
+  {
+    id: "maxLandingFallHeight",
+    label: "Hardest landing (equivalent fall height)",
+    comparison: "at most",
+    unit: "m",
+    measure: (m) => m.landingFallHeight ?? null,
+    missing: "no jump landing to measure",
+  },
+  {
+    id: "minSpeedWindow",
+    label: "Narrowest speed window",
+    comparison: "at least",
+    unit: "m/s",
+    measure: (m) => m.speedWindow ?? null,
+    missing: "no jump landing to measure",
+  },
 ];
 
 /**
@@ -179,6 +245,14 @@ export function guidanceValues(guidance: GuidanceSetId, overrides: GuidanceOverr
 
 const fmt = (x: number) => (Math.abs(x) >= 10 ? x.toFixed(0) : x.toFixed(2).replace(/\.?0+$/, ""));
 
+/** Where a rule's value comes from: the club's own setting, or the set's value and its source. */
+function ruleSource(id: RuleId, unit: string, guidance: GuidanceSetId, overrides: GuidanceOverrides): string {
+  if (overrides[id] !== undefined)
+    return `Club setting (the ${guidance} set says ${fmt(GUIDANCE_SETS[guidance].values[id])} ${unit})`;
+  if (id === "maxMarshalGapRatio") return MARSHAL_SOURCE;
+  return JUMP_RULE_SOURCES[id] ?? RULEBOOK_SOURCE;
+}
+
 /** Checks measured values against a guidance set (with a club's overrides). */
 export function checkRules(
   m: RuleMeasurements,
@@ -188,53 +262,38 @@ export function checkRules(
   const values = guidanceValues(guidance, overrides);
   const checks = RULES.map((rule): RuleCheck => {
     const value = values[rule.id];
-    const overridden = overrides[rule.id] !== undefined;
-    const base = GUIDANCE_SETS[guidance].values[rule.id];
-    const source = overridden
-      ? `Club setting (the ${guidance} set says ${fmt(base)} ${rule.unit})`
-      : rule.id === "maxMarshalGapRatio"
-        ? MARSHAL_SOURCE
-        : RULEBOOK_SOURCE;
-    let measured = rule.measure(m);
-    // No marshal points at all cannot be "spread evenly".
-    if (measured === null && rule.id === "maxMarshalGapRatio")
-      return {
-        id: rule.id,
-        label: rule.label,
-        value,
-        comparison: rule.comparison,
-        unit: rule.unit,
-        measured: null,
-        status: "fail",
-        detail: rule.missing,
-        source,
-      };
-    if (measured === null)
-      return {
-        id: rule.id,
-        label: rule.label,
-        value,
-        comparison: rule.comparison,
-        unit: rule.unit,
-        measured: null,
-        status: "not checked",
-        detail: rule.missing,
-        source,
-      };
-    measured = Math.round(measured * 1000) / 1000;
-    const pass = rule.comparison === "at least" ? measured >= value : measured <= value;
-    const detail = `${fmt(measured)} ${rule.unit} measured; ${rule.comparison} ${fmt(value)} ${rule.unit} required`;
-    return {
+    const base = {
       id: rule.id,
       label: rule.label,
       value,
       comparison: rule.comparison,
       unit: rule.unit,
-      measured,
-      status: pass ? "pass" : "fail",
-      detail,
-      source,
+      source: ruleSource(rule.id, rule.unit, guidance, overrides),
     };
+    let measured = rule.measure(m);
+    // No marshal points at all cannot be "spread evenly".
+    if (measured === null)
+      return {
+        ...base,
+        measured: null,
+        status: rule.id === "maxMarshalGapRatio" ? "fail" : "not checked",
+        detail: rule.missing,
+        where: null,
+      };
+    measured = Math.round(measured * 1000) / 1000;
+    const pass = rule.comparison === "at least" ? measured >= value : measured <= value;
+    const where = m.where?.[rule.id] ?? null;
+    // The worst place is named once: "J7 Hairpin table" is the same place as "J7 Hairpin table (class)".
+    const others = pass
+      ? []
+      : (m.failing?.[rule.id] ?? []).filter(
+          (w) => where === null || (w !== where && !where.startsWith(`${w} (`)),
+        );
+    const detail =
+      `${fmt(measured)} ${rule.unit} measured${where ? ` at ${where}` : ""}; ` +
+      `${rule.comparison} ${fmt(value)} ${rule.unit} required` +
+      (others.length ? `; also ${others.join(", ")}` : "");
+    return { ...base, measured, status: pass ? "pass" : "fail", detail, where };
   });
   return {
     guidance,

@@ -1,5 +1,5 @@
-// Track length saved, the verdict per skill level and its words.
+// Track length saved, the verdict per skill level and its sentences (the words: ../words.ts).
 export * from "./verdict";
 export * from "./jump-verdicts";
-export { ERROR_WORDS, WHOOPS_WORDS, steeringWords } from "./verdict-text";
+export { steeringWords } from "./verdict-text";
 export { findLandingTurn, type TurnAfter } from "./jump-turn";

@@ -1,10 +1,11 @@
 /**
  * The verdict per skill level for an analysed jump (engine.md section 6): "set up in the air" or
  * "take it straight" with the reason that decided it, from the plan's own outcome, and the
- * numbers behind it. The decisions are data (verdict.ts); the sentences are in verdict-text.ts.
+ * numbers behind it. The decisions are data (verdict.ts); the reasons' words are in ../words.ts
+ * and the sentences built on them in verdict-text.ts.
  */
-import type { JumpAnalysis, JumpReason, SkillLevel, SkillVerdict } from "../layout/layout-analysis-types";
-import { SKILL_LEVELS } from "../layout/layout-analysis-types";
+import type { JumpAnalysis, SkillVerdict } from "../layout/layout-analysis-types";
+import { SKILL_LEVELS, type JumpReason, type SkillLevel } from "../words";
 import {
   DEFAULT_VERDICT_THRESHOLDS,
   expectedGain,
@@ -14,9 +15,7 @@ import {
   type StraightReason,
   type VerdictThresholds,
 } from "./verdict";
-import { REASON_TEXT, SET_UP_TEXT, setUpText, straightText, WHOOPS_WORDS } from "./verdict-text";
-
-export { REASON_TEXT, SET_UP_TEXT } from "./verdict-text";
+import { setUpReason, setUpText, straightReason, straightText } from "./verdict-text";
 
 export interface VerdictInputs {
   /** Skill level copied into `result.verdict`. */
@@ -66,12 +65,7 @@ export function describeVerdicts({
       ...numbers,
       verdict: "straight",
       reason,
-      reasonText:
-        reason === "flown-over"
-          ? `flown over from ${r.flownOverBy}`
-          : reason === "whoops"
-            ? `whoops: ${WHOOPS_WORDS[r.whoops!.technique]}`
-            : REASON_TEXT[reason],
+      reasonText: straightReason(reason, r),
       text: straightText(reason, words),
     });
     if (r.flownOverBy !== null) verdicts[level] = straight("flown-over");
@@ -91,7 +85,13 @@ export function describeVerdicts({
       verdicts[level] =
         v.verdict === "straight"
           ? straight(v.reason!)
-          : { ...numbers, verdict: "set-up", reason: null, reasonText: SET_UP_TEXT, text: setUpText(words) };
+          : {
+              ...numbers,
+              verdict: "set-up",
+              reason: null,
+              reasonText: setUpReason(r),
+              text: setUpText(words),
+            };
     }
   }
   r.verdicts = verdicts;

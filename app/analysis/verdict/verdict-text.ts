@@ -1,42 +1,11 @@
 /**
- * The verdicts' words, in one place: a short reason per reason code and the sentence for drivers
- * with the numbers that decided it. The decisions themselves are data (verdict.ts,
- * jump-verdicts.ts); only this file turns them into sentences.
+ * The verdicts' sentences, in one place: the short reason shown after the verdict's word and the
+ * sentence for drivers with the numbers that decided it. Both are built on the product's words
+ * (../words.ts: VERDICT_WORDS, REASON_TEXT, WHOOPS_WORDS); the decisions themselves are data
+ * (verdict.ts, jump-verdicts.ts).
  */
-import type { ErrorSource } from "../air/air-plan-robustness";
-import type { WhoopsTechnique } from "../flight/whoops";
-import type { JumpAnalysis, JumpReason, SkillVerdict } from "../layout/layout-analysis-types";
-
-/** Short reasons in plain words (flown-over names the other jump; whoops names the way through). */
-export const REASON_TEXT: Record<Exclude<JumpReason, "flown-over" | "whoops">, string> = {
-  "no-turn": "no turn at the landing",
-  "turn-too-gentle": "turn too gentle",
-  "not-enough-airtime": "not enough airtime",
-  "no-wheel-spin": "no wheel spin to steer with",
-  "no-useful-yaw": "no steering turns the nose",
-  "cannot-land-flat": "no steering lands it flat",
-  "levelling-costs-turn": "levelling the car costs the turn",
-  "nose-turn-too-small": "the nose turns too little",
-  "too-risky": "the gain is smaller than the risk",
-  "gain-too-small": "the gain is too small",
-  "cannot-clear": "cannot clear: the approach is too short",
-};
-export const SET_UP_TEXT = "set up in the air";
-
-/** The driver's errors, as the jump page names them. */
-export const ERROR_WORDS: Record<ErrorSource, string> = {
-  steering: "the timing of the steering",
-  pulse: "the timing of the brake or throttle",
-  speed: "the takeoff speed (it sets the airtime)",
-};
-
-/** Ways through a whoops row. */
-export const WHOOPS_WORDS: Record<WhoopsTechnique, string> = {
-  skim: "skim over the tops",
-  triples: "jump through in triples",
-  doubles: "jump through in doubles",
-  roll: "roll through bump by bump",
-};
+import type { JumpAnalysis, SkillVerdict } from "../layout/layout-analysis-types";
+import { JUMP_PRESET_LABELS, REASON_TEXT, VERDICT_WORDS, WHOOPS_WORDS, type JumpReason } from "../words";
 
 const f1 = (x: number) => x.toFixed(1);
 const f2 = (x: number) => x.toFixed(2);
@@ -53,6 +22,25 @@ export function steeringWords(steering: [number, number][]): string {
     if (sides[sides.length - 1] !== side) sides.push(side);
   }
   return sides.length === 0 ? "keep the wheels straight" : `steer ${sides.join(", then ")}`;
+}
+
+/** "Take it straight: no turn at the landing": the verdict's word and the reason's words. */
+const says = (reason: JumpReason) =>
+  `${VERDICT_WORDS[reason === "cannot-clear" ? "cannot-clear" : "straight"]}: ${REASON_TEXT[reason]}`;
+
+/** The short reason shown after the verdict's word ("flown over from J3", "whoops row: skim over the tops"). */
+export function straightReason(reason: JumpReason, r: JumpAnalysis): string {
+  if (reason === "flown-over") return `${REASON_TEXT[reason]} from ${r.flownOverBy}`;
+  if (reason === "whoops") return `${REASON_TEXT[reason]}: ${WHOOPS_WORDS[r.whoops!.technique]}`;
+  return REASON_TEXT[reason];
+}
+
+/** Where a set-up leaves the nose at touchdown, e.g. "25° left". */
+const noseAt = (r: JumpAnalysis) => `${Math.round(Math.abs(r.plan!.yawDeg))}\u00b0 ${r.turn!.side}`;
+
+/** What a set-up asks, shown after the verdict's word: "land with the nose 25° left". */
+export function setUpReason(r: JumpAnalysis): string {
+  return `land with the nose ${noseAt(r)}`;
 }
 
 /** Why levelling costs the turn, in the words of the pulse that does it. */
@@ -75,7 +63,7 @@ export function whoopsText(r: JumpAnalysis): string {
     w.technique === "roll"
       ? ` (the approach allows ${f1(r.approachMaxSpeed)} m/s)`
       : ` at ${f1(w.speed)} m/s${w.technique === "skim" ? "" : `, ${w.technique === "doubles" ? w.doubles.jumps : w.triples!.jumps} jumps a pass`}`;
-  return `Whoops: ${way}${at}; ${parts.join(", ")}.`;
+  return `${JUMP_PRESET_LABELS.whoops}: ${way}${at}; ${parts.join(", ")}.`;
 }
 
 /** Everything a sentence may need. */
@@ -99,23 +87,23 @@ export function straightText(reason: JumpReason, k: TextInputs): string {
     case "whoops":
       return whoopsText(r);
     case "cannot-clear":
-      return `Cannot clear: the approach is too short (at most ${f1(r.approachMaxSpeed)} m/s; the landing needs ${f1(r.window?.min ?? NaN)} m/s).`;
+      return `${says(reason)} (at most ${f1(r.approachMaxSpeed)} m/s; the landing needs ${f1(r.window?.min ?? NaN)} m/s).`;
     case "no-turn":
       return r.nextTurnDistance === null
-        ? "Take it straight: no turn at the landing."
-        : `Take it straight: no turn at the landing (the next turn starts ${f1(r.nextTurnDistance)} m after touchdown).`;
+        ? `${says(reason)}.`
+        : `${says(reason)} (the next turn starts ${f1(r.nextTurnDistance)} m after touchdown).`;
     case "turn-too-gentle":
-      return `Take it straight: turn too gentle (${f1(r.turn?.angleDeg ?? 0)}\u00b0 after the landing; a set-up is worth it from ${Math.round(k.minTurnDeg)}\u00b0).`;
+      return `${says(reason)} (${f1(r.turn?.angleDeg ?? 0)}\u00b0 after the landing; a set-up is worth it from ${Math.round(k.minTurnDeg)}\u00b0).`;
     case "not-enough-airtime":
       return r.airtime < k.minAirtime
-        ? `Take it straight: not enough airtime (${f2(r.airtime)} s in the air; steering needs ${f2(k.minAirtime)} s or more).`
-        : `Take it straight: not enough airtime (${f2(r.airtime)} s in the air leaves no time to steer before the wheels must be straight for the landing).`;
+        ? `${says(reason)} (${f2(r.airtime)} s in the air; steering needs ${f2(k.minAirtime)} s or more).`
+        : `${says(reason)} (${f2(r.airtime)} s in the air leaves no time to steer before the wheels must be straight for the landing).`;
     case "no-wheel-spin":
-      return "Take it straight: the front wheels are not spinning, so steering cannot turn the car.";
+      return `${says(reason)} (the front wheels are not spinning, so steering cannot turn the car).`;
     case "no-useful-yaw":
-      return `Take it straight: no steering turns the nose toward the turn in ${f2(r.airtime)} s in the air.`;
+      return `${says(reason)} toward the turn in ${f2(r.airtime)} s in the air.`;
     case "cannot-land-flat":
-      return `Take it straight: no steering lands it flat (within ${Math.round(plan?.rollToleranceDeg ?? 5)}\u00b0 of roll) with the nose turned.`;
+      return `${says(reason)} (within ${Math.round(plan?.rollToleranceDeg ?? 5)}\u00b0 of roll) with the nose turned.`;
     case "levelling-costs-turn": {
       const levelled = plan?.feasible
         ? `levelled, the nose turns ${degs(v.noseTurnDeg)}`
@@ -123,14 +111,14 @@ export function straightText(reason: JumpReason, k: TextInputs): string {
       const tail = alone
         ? `; turning alone gives ${degs(alone.yawDeg)} but lands ${degs(alone.pitchDeg - (plan!.takeoffPitchDeg + plan!.pitchChangeDeg))} nose-${alone.pitchDeg - (plan!.takeoffPitchDeg + plan!.pitchChangeDeg) >= 0 ? "high" : "low"}`
         : "";
-      return `Take it straight: ${levellingCause(r, k.fourWd)} (${levelled}${tail}).`;
+      return `${VERDICT_WORDS.straight}: ${levellingCause(r, k.fourWd)} (${levelled}${tail}).`;
     }
     case "nose-turn-too-small":
-      return `Take it straight: the nose turns only ${degs(v.noseTurnDeg)} (a set-up is worth it from ${degs(v.minNoseTurnDeg)}; it would save ${f2(v.timeSaved)} s).`;
+      return `${says(reason)}: only ${degs(v.noseTurnDeg)} (a set-up is worth it from ${degs(v.minNoseTurnDeg)}; it would save ${f2(v.timeSaved)} s).`;
     case "too-risky":
-      return `Take it straight: the gain is smaller than the risk: ${pct(v.successRate)} clean, ${f2(v.timeSaved)} s saved, ${f1(v.failCost)} s lost on a failed landing (expected ${signed(v.expectedGain)} a pass).`;
+      return `${says(reason)}: ${pct(v.successRate)} clean, ${f2(v.timeSaved)} s saved, ${f1(v.failCost)} s lost on a failed landing (expected ${signed(v.expectedGain)} a pass).`;
     case "gain-too-small":
-      return `Take it straight: it gains only ${signed(v.expectedGain)} a pass (${pct(v.successRate)} clean, ${f2(v.timeSaved)} s saved; worth it from ${f2(v.minGainPerPass)} s).`;
+      return `${says(reason)}: ${signed(v.expectedGain)} a pass (${pct(v.successRate)} clean, ${f2(v.timeSaved)} s saved; worth it from ${f2(v.minGainPerPass)} s).`;
   }
 }
 
@@ -139,8 +127,8 @@ export function setUpText(k: TextInputs): string {
   const { r, v } = k;
   const plan = r.plan!;
   return (
-    `Set up in the air: ${steeringWords(plan.steering)}, to land with the nose turned ` +
-    `${Math.round(Math.abs(plan.yawDeg))}\u00b0 ${r.turn!.side} (expected ${signed(v.expectedGain)} a pass, ` +
+    `${VERDICT_WORDS["set-up"]}: ${steeringWords(plan.steering)}, to land with the nose turned ` +
+    `${noseAt(r)} (expected ${signed(v.expectedGain)} a pass, ` +
     `${pct(v.successRate)} clean landings).`
   );
 }

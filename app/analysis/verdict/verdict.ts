@@ -2,6 +2,7 @@
  * Track length saved by a mid-air set-up, the time it saves, the expected gain at a skill level,
  * and the verdict for a jump (engine.md section 6). SI units and radians.
  */
+import type { JumpReason } from "../words";
 
 /** Default time lost to a failed landing: a roll-over that needs a marshal, s (an estimate). */
 export const DEFAULT_FAIL_COST_S = 3;
@@ -95,29 +96,14 @@ export function expectedGain(successRate: number, saved: number, failCost = DEFA
 export type JumpVerdictKind = "set-up" | "straight";
 
 /**
- * Why a jump that might be set up for is taken straight, as data (the sentences are in
- * verdict-text.ts): the first that applies, in this order.
- * - "no-turn": no turn starts close enough to the landing;
- * - "turn-too-gentle": the turn is gentler than the smallest worth a set-up;
- * - "not-enough-airtime": the flight is too short to steer in;
- * - "no-wheel-spin", "no-useful-yaw", "cannot-land-flat", "levelling-costs-turn": the plan's own
- *   outcome (no spin to steer with; no steering turns the nose toward the turn; none lands it flat;
- *   the pulse that levels the car leaves too little turn, though turning alone would give enough);
- * - "nose-turn-too-small": the plan turns the nose less than the smallest worth a set-up;
- * - "too-risky": the failed landings cost more than the clean ones save (expected gain <= 0);
- * - "gain-too-small": the expected gain is positive but under the smallest worth a set-up.
+ * Why a jump that might be set up for is taken straight (the reasons and their words:
+ * ../words.ts; the sentences: verdict-text.ts): the first that applies, in this order: no turn,
+ * turn too gentle, not enough airtime, the plan's own outcome (no wheel spin, no useful yaw,
+ * cannot land flat, levelling costs the turn), nose turn too small, too risky (expected gain
+ * <= 0), gain too small (under the smallest worthwhile gain). The analysis adds "cannot-clear",
+ * "flown-over" and "whoops".
  */
-export type StraightReason =
-  | "no-turn"
-  | "turn-too-gentle"
-  | "not-enough-airtime"
-  | "no-wheel-spin"
-  | "no-useful-yaw"
-  | "cannot-land-flat"
-  | "levelling-costs-turn"
-  | "nose-turn-too-small"
-  | "too-risky"
-  | "gain-too-small";
+export type StraightReason = Exclude<JumpReason, "cannot-clear" | "flown-over" | "whoops">;
 
 export interface JumpVerdictInput {
   landsIntoTurn: boolean;

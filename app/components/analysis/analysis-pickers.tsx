@@ -1,6 +1,5 @@
 import { Form } from "react-router";
-import { SKILL_LEVELS, type SkillLevel } from "~/analysis";
-import { SKILL_LABELS } from "./format";
+import { SKILL_LABELS, SKILL_LEVELS, type SkillLevel } from "~/analysis";
 
 /**
  * Car class and skill level pickers as a plain GET form (works without JavaScript: the Show button

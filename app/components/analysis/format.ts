@@ -1,31 +1,8 @@
 /**
- * Number and word formats of the analysis pages: SI units with a km/h reading for speeds, and the
- * trade's words for jump kinds and verdicts. Pure; used on both sides.
+ * Number formats of the analysis pages: SI units with a km/h reading for speeds. Pure; used on
+ * both sides. The product's words (skills, presets, verdicts) come from `~/analysis`.
  */
-import type { JumpAnalysis, SkillLevel } from "~/analysis";
-import type { JumpPreset } from "~/analysis";
-
-export const SKILL_LABELS: Record<SkillLevel, string> = {
-  novice: "Novice",
-  club: "Club racer",
-  expert: "Expert",
-};
-
-/** "a novice", "a club racer", "an expert". */
-export function skillPhrase(skill: SkillLevel): string {
-  const word = SKILL_LABELS[skill].toLowerCase();
-  return `${/^[aeiou]/.test(word) ? "an" : "a"} ${word}`;
-}
-
-export const PRESET_LABELS: Record<JumpPreset, string> = {
-  tabletop: "Tabletop",
-  double: "Double",
-  triple: "Triple",
-  "step-up": "Step-up",
-  "step-down": "Step-down",
-  whoops: "Whoops",
-  custom: "Own profile",
-};
+import { JUMP_PRESET_LABELS, type JumpAnalysis } from "~/analysis";
 
 /** Metres with a sensible precision: "301 m", "4.4 m", "0.11 m". */
 export function metres(x: number): string {
@@ -63,19 +40,5 @@ export function signedSeconds(x: number): string {
 
 /** The jump's display name: its own name, else its kind and number. */
 export function jumpName(j: Pick<JumpAnalysis, "name" | "preset" | "sectionId">): string {
-  return j.name ?? `${PRESET_LABELS[j.preset]} (${j.sectionId})`;
+  return j.name ?? `${JUMP_PRESET_LABELS[j.preset]} (${j.sectionId})`;
 }
-
-export type VerdictKind = "set-up" | "straight" | "cannot-clear";
-
-/** The verdict kind at a skill level (cannot-clear stands apart: nobody should try it). */
-export function verdictKind(j: JumpAnalysis, skill: SkillLevel): VerdictKind {
-  const v = j.verdicts[skill];
-  return v.reason === "cannot-clear" ? "cannot-clear" : v.verdict;
-}
-
-export const VERDICT_WORDS: Record<VerdictKind, string> = {
-  "set-up": "Set up in the air",
-  straight: "Take it straight",
-  "cannot-clear": "Cannot clear",
-};

@@ -1,5 +1,12 @@
-import { ERROR_WORDS, type JumpAnalysis, type JumpPlan, type SkillLevel } from "~/analysis";
-import { degrees, percent, skillPhrase } from "./format";
+import {
+  ERROR_WORDS,
+  skillPhrase,
+  VERDICT_WORDS,
+  type JumpAnalysis,
+  type JumpPlan,
+  type SkillLevel,
+} from "~/analysis";
+import { degrees, percent } from "./format";
 import { pitchAdvice } from "./pitch-advice";
 import { planOwner } from "./plan-owner";
 import { SteeringChart, type SteeringSeries } from "./steering-chart";
@@ -22,7 +29,7 @@ function OwnerLine({ jump: j, skill }: { jump: JumpAnalysis; skill: SkillLevel }
   const who = skillPhrase(skill);
   const text =
     o.kind === "own"
-      ? `The plan for ${who}: set up in the air as below.`
+      ? `The plan for ${who}: ${VERDICT_WORDS["set-up"].toLowerCase()} as below.`
       : o.kind === "other"
         ? `${cap(who)} should take it straight (${j.verdicts[skill].reasonText}). The plan below is the plan for ${skillPhrase(o.owner)}, shown only as such: not for ${who} to fly.`
         : `No skill level is told to fly this plan (${who}: ${j.verdicts[skill].reasonText}). It is the model's best plan, shown for reference only.`;

@@ -2,8 +2,8 @@
  * Sorting the jumps table by GET parameters (`sort`, `dir`), so it works without JavaScript.
  * Pure: the loader and the tests use it.
  */
-import type { JumpAnalysis, SkillLevel } from "~/analysis";
-import { jumpName, verdictKind } from "./format";
+import { VERDICT_KINDS, verdictKind, type JumpAnalysis, type SkillLevel } from "~/analysis";
+import { jumpName } from "./format";
 
 export const JUMP_SORT_KEYS = [
   "order",
@@ -44,8 +44,6 @@ export function parseJumpSort(params: URLSearchParams): JumpSort {
   return { key: key as JumpSortKey, dir, problem: null };
 }
 
-const VERDICT_RANK = { "set-up": 0, straight: 1, "cannot-clear": 2 } as const;
-
 function value(j: JumpAnalysis, key: JumpSortKey, skill: SkillLevel): number | string {
   switch (key) {
     case "order":
@@ -61,7 +59,8 @@ function value(j: JumpAnalysis, key: JumpSortKey, skill: SkillLevel): number | s
     case "turn":
       return j.nextTurnDistance ?? Number.POSITIVE_INFINITY;
     case "verdict":
-      return VERDICT_RANK[verdictKind(j, skill)];
+      // In the order of VERDICT_KINDS: set up, take it straight, cannot clear.
+      return VERDICT_KINDS.indexOf(verdictKind(j.verdicts[skill]));
     case "gain":
       return j.verdicts[skill].expectedGain;
   }

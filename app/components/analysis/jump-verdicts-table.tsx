@@ -1,6 +1,6 @@
-import { ERROR_WORDS, SKILL_LEVELS, type JumpAnalysis } from "~/analysis";
-import { degrees, metres, percent, SKILL_LABELS, signedSeconds, VERDICT_WORDS, verdictKind } from "./format";
-import { VerdictIcon } from "./verdict-mark";
+import { ERROR_WORDS, SKILL_LABELS, SKILL_LEVELS, verdictKind, type JumpAnalysis } from "~/analysis";
+import { degrees, metres, percent, signedSeconds } from "./format";
+import { VerdictMark } from "./verdict-mark";
 
 /**
  * The verdict for each skill level with its numbers, the sentence for drivers, and the values that
@@ -45,17 +45,14 @@ export function JumpVerdictsTable({ jump }: { jump: JumpAnalysis }) {
           <tbody>
             {SKILL_LEVELS.map((level) => {
               const v = jump.verdicts[level];
-              const kind = verdictKind(jump, level);
+              const kind = verdictKind(v);
               return (
                 <tr key={level} className="border-t border-sand-200 align-top">
                   <th scope="row" className="px-3 py-2 text-left font-medium">
                     {SKILL_LABELS[level]}
                   </th>
                   <td className="px-3 py-2">
-                    <span className="flex items-center gap-1.5 font-medium">
-                      <VerdictIcon kind={kind} />
-                      {VERDICT_WORDS[kind]}
-                    </span>
+                    <VerdictMark kind={kind} className="font-medium" />
                     <span className="block text-xs text-ink-700">{v.text}</span>
                   </td>
                   <td className="px-3 py-2 tabular-nums">{plan ? degrees(v.noseTurnDeg, 1) : "\u2013"}</td>

@@ -1,18 +1,8 @@
 import { Link } from "react-router";
-import type { JumpAnalysis, SkillLevel } from "~/analysis";
-import {
-  jumpName,
-  metres,
-  percent,
-  PRESET_LABELS,
-  seconds,
-  signedSeconds,
-  speedShort,
-  VERDICT_WORDS,
-  verdictKind,
-} from "./format";
+import { JUMP_PRESET_LABELS, REASON_TEXT, verdictKind, type JumpAnalysis, type SkillLevel } from "~/analysis";
+import { jumpName, metres, percent, seconds, signedSeconds, speedShort } from "./format";
 import type { JumpSort, JumpSortKey } from "./jump-sort";
-import { VerdictIcon } from "./verdict-mark";
+import { VerdictMark } from "./verdict-mark";
 
 type Props = {
   jumps: JumpAnalysis[];
@@ -103,7 +93,7 @@ function JumpRow({
   href: string;
 }) {
   const v = j.verdicts[skill];
-  const kind = verdictKind(j, skill);
+  const kind = verdictKind(v);
   const flown = j.flownOverBy !== null;
   return (
     <tr className="border-t border-sand-200 align-top">
@@ -112,11 +102,13 @@ function JumpRow({
         <Link to={href} className="font-medium whitespace-nowrap text-pine-700 hover:underline">
           {jumpName(j)}
         </Link>
-        {jumpName(j) !== PRESET_LABELS[j.preset] ? (
-          <span className="block text-xs text-ink-500">{PRESET_LABELS[j.preset]}</span>
+        {jumpName(j) !== JUMP_PRESET_LABELS[j.preset] ? (
+          <span className="block text-xs text-ink-500">{JUMP_PRESET_LABELS[j.preset]}</span>
         ) : null}
       </th>
-      <td className="px-3 py-2 tabular-nums">{flown ? "flown over" : speedShort(j.takeoffSpeed)}</td>
+      <td className="px-3 py-2 tabular-nums">
+        {flown ? REASON_TEXT["flown-over"] : speedShort(j.takeoffSpeed)}
+      </td>
       <td className="px-3 py-2 tabular-nums whitespace-nowrap">
         {j.window
           ? `${speedShort(j.window.min)}\u2013${speedShort(j.window.max)}${j.window.maxIsSearchLimit ? "+" : ""}`
@@ -137,15 +129,8 @@ function JumpRow({
         )}
       </td>
       <td className="px-3 py-2">
-        <span className="flex items-center gap-1.5 font-medium whitespace-nowrap">
-          <VerdictIcon kind={kind} />
-          {VERDICT_WORDS[kind]}
-        </span>
-        <span className="block text-xs text-ink-500">
-          {v.verdict === "set-up" && j.plan && j.turn
-            ? `land with the nose ${Math.round(Math.abs(j.plan.yawDeg))}° ${j.turn.side}`
-            : v.reasonText}
-        </span>
+        <VerdictMark kind={kind} className="font-medium whitespace-nowrap" />
+        <span className="block text-xs text-ink-500">{v.reasonText}</span>
       </td>
       <td className="px-3 py-2 tabular-nums whitespace-nowrap">
         {j.plan?.feasible ? (

@@ -1,11 +1,11 @@
 import { Link } from "react-router";
-import type { ClassAnalysis, SkillLevel } from "~/analysis";
+import { skillPhrase, type ClassAnalysis, type SkillLevel } from "~/analysis";
 import { Cautions } from "~/components/cautions";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisPickers } from "./analysis-pickers";
 import { AnalysisSummary } from "./analysis-summary";
-import { jumpName, skillPhrase } from "./format";
+import { jumpName } from "./format";
 import { sortJumps, type JumpSort, type JumpSortKey } from "./jump-sort";
 import { JumpsTable } from "./jumps-table";
 import { TrackDrawing } from "~/components/drawing/track-drawing";

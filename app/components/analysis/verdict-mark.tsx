@@ -1,35 +1,46 @@
 /**
- * The verdict's mark: a shape for each verdict (triangle: set up in the air; circle: take it
- * straight; cross: cannot clear), so the plan and the tables never rely on colour alone.
+ * The verdict's mark on the pages: its shape (app/lib/verdict-marks.ts) in the verdict's colour,
+ * and its word beside it, so no reader depends on telling colours apart. The one component every
+ * page, table and panel uses; the plan drawings draw the same shapes from VERDICT_MARKS.
  */
+import type { VerdictKind } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
-import type { VerdictKind } from "./format";
+import { VERDICT_MARK_OUTLINE, VERDICT_MARKS } from "~/lib/verdict-marks";
 
-/** The shape's path centred on (0, 0) with a radius of about 1. */
-export function verdictPath(kind: VerdictKind): string {
-  switch (kind) {
-    case "set-up":
-      return "M 0 -1.15 L 1.05 0.75 L -1.05 0.75 Z";
-    case "straight":
-      return "M 1 0 A 1 1 0 1 1 -1 0 A 1 1 0 1 1 1 0 Z";
-    case "cannot-clear":
-      return "M -0.9 -0.6 L -0.6 -0.9 L 0 -0.3 L 0.6 -0.9 L 0.9 -0.6 L 0.3 0 L 0.9 0.6 L 0.6 0.9 L 0 0.3 L -0.6 0.9 L -0.9 0.6 L -0.3 0 Z";
-  }
-}
-
-export const VERDICT_COLOUR: Record<VerdictKind, string> = PLAN.verdict;
-
-/** The mark as a small inline icon beside text (hidden from screen readers: the text says it). */
-export function VerdictIcon({ kind, size = 14 }: { kind: VerdictKind; size?: number }) {
-  return (
+export function VerdictMark({
+  kind,
+  size = 14,
+  showWord = true,
+  className = "",
+}: {
+  kind: VerdictKind;
+  /** Size of the shape, px. */
+  size?: number;
+  /**
+   * False only where the caller writes the verdict's word (VERDICT_WORDS) right beside the
+   * mark: the shape alone is hidden from screen readers, since the word says it.
+   */
+  showWord?: boolean;
+  className?: string;
+}) {
+  const mark = VERDICT_MARKS[kind];
+  const shape = (
     <svg
       viewBox="-1.3 -1.3 2.6 2.6"
       width={size}
       height={size}
       aria-hidden="true"
-      className="inline-block shrink-0 align-[-2px]"
+      data-shape={mark.shape}
+      className={`inline-block shrink-0 align-[-2px] ${showWord ? "" : className}`}
     >
-      <path d={verdictPath(kind)} fill={VERDICT_COLOUR[kind]} stroke="white" strokeWidth={0.15} />
+      <path d={mark.path} fill={PLAN.verdict[kind]} stroke="white" strokeWidth={VERDICT_MARK_OUTLINE} />
     </svg>
+  );
+  if (!showWord) return shape;
+  return (
+    <span className={`inline-flex items-center gap-1.5 ${className}`} data-verdict={kind}>
+      {shape}
+      <span>{mark.word}</span>
+    </span>
   );
 }

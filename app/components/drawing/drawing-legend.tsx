@@ -1,7 +1,7 @@
 import { binStyle, speedBin } from "~/lib/editor/speed-scale";
 import { PLAN } from "~/components/editor/colours";
-import { VERDICT_WORDS, type VerdictKind } from "~/components/analysis/format";
-import { VerdictIcon } from "~/components/analysis/verdict-mark";
+import { VERDICT_KINDS } from "~/analysis";
+import { VerdictMark } from "~/components/analysis/verdict-mark";
 
 /** Bands shown on the legend (the drawing uses finer steps of the same scale). */
 const LEGEND_BANDS = 5;
@@ -29,7 +29,6 @@ export function DrawingLegend({
     const hi = lo + step;
     return { lo, hi, style: binStyle(speedBin((lo + hi) / 2, min, max, bins), bins) };
   });
-  const kinds: VerdictKind[] = ["set-up", "straight", "cannot-clear"];
   return (
     <div className="grid gap-4 text-sm sm:grid-cols-2">
       <div>
@@ -63,9 +62,9 @@ export function DrawingLegend({
       <div>
         <p className="font-medium">Signs</p>
         <ul className="mt-1 space-y-1">
-          {kinds.map((k) => (
+          {VERDICT_KINDS.map((k) => (
             <li key={k} className="flex items-center gap-2">
-              <VerdictIcon kind={k} /> {VERDICT_WORDS[k]} (mark at the lip, with the jump's number)
+              <VerdictMark kind={k} /> (mark at the lip, with the jump's number)
             </li>
           ))}
           <li className="flex items-center gap-2">

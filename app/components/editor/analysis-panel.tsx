@@ -1,32 +1,8 @@
-import { CAR_PRESETS } from "~/analysis";
-import type { AnalysisOverlay, OverlayJump } from "~/analysis";
+import { CAR_PRESETS, SKILL_LABELS, SKILL_LEVELS, VERDICT_WORDS } from "~/analysis";
+import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutSection } from "~/analysis";
-import { SKILLS, type AnalysisStatus, type Skill } from "./use-analysis";
-
-const VERDICT_TEXT: Record<OverlayJump["verdict"], string> = {
-  "set-up": "Set up in the air",
-  straight: "Take it straight",
-  "cannot-clear": "Cannot clear",
-};
-
-const SKILL_LABELS: Record<Skill, string> = { novice: "Novice", club: "Club racer", expert: "Expert" };
-
-/** The verdict's symbol, the same shape as its marker on the plan. */
-export function VerdictIcon({ verdict }: { verdict: OverlayJump["verdict"] }) {
-  const colour = verdict === "set-up" ? "#1f5c4c" : verdict === "straight" ? "#2d3846" : "#a3261b";
-  return (
-    <svg width="16" height="16" viewBox="-8 -8 16 16" aria-hidden="true" className="mt-0.5 shrink-0">
-      {verdict === "set-up" ? <polygon points="0,-7 6.5,5 -6.5,5" fill={colour} /> : null}
-      {verdict === "straight" ? <circle r="6" fill={colour} /> : null}
-      {verdict === "cannot-clear" ? (
-        <>
-          <rect x="-6" y="-6" width="12" height="12" fill={colour} />
-          <path d="M-3,-3 L3,3 M-3,3 L3,-3" stroke="white" strokeWidth="1.6" />
-        </>
-      ) : null}
-    </svg>
-  );
-}
+import { VerdictMark } from "~/components/analysis/verdict-mark";
+import type { AnalysisStatus, Skill } from "./use-analysis";
 
 interface Props {
   overlay: AnalysisOverlay | null;
@@ -70,7 +46,7 @@ export function AnalysisPanel(p: Props) {
             value={p.skill}
             onChange={(e) => p.onSkill(e.target.value as Skill)}
           >
-            {SKILLS.map((s) => (
+            {SKILL_LEVELS.map((s) => (
               <option key={s} value={s}>
                 {SKILL_LABELS[s]}
               </option>
@@ -118,10 +94,10 @@ export function AnalysisPanel(p: Props) {
                       className="flex w-full gap-2 rounded px-1.5 py-1 text-left hover:bg-sand-100 aria-[current=true]:bg-clay-100"
                       onClick={() => i !== undefined && p.onSelect(i)}
                     >
-                      <VerdictIcon verdict={j.verdict} />
+                      <VerdictMark kind={j.verdict} size={16} showWord={false} className="mt-0.5" />
                       <span>
                         <span className="font-medium">
-                          J{k + 1} {VERDICT_TEXT[j.verdict]}
+                          J{k + 1} {VERDICT_WORDS[j.verdict]}
                         </span>
                         <span className="block text-xs text-ink-700">
                           {name ?? "Jump"}

@@ -1,8 +1,7 @@
-import { JUMP_PRESET_LABELS } from "~/lib/editor/jump-presets";
 import type { NewSectionKind } from "~/lib/editor/section-ops";
 import type { SnapSettings } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
-import { JUMP_PRESETS, type JumpPreset } from "~/analysis";
+import { JUMP_PRESET_LABELS, JUMP_PRESETS, type JumpPreset } from "~/analysis";
 
 export const toolClass =
   "inline-flex items-center rounded-md border border-ink-300 bg-white px-2.5 py-1.5 text-sm font-medium text-ink-900 hover:bg-sand-100 disabled:cursor-not-allowed disabled:opacity-45";

@@ -1,4 +1,5 @@
 import { useId, useState } from "react";
+import { parseNumberText } from "~/lib/number-text";
 
 const inputClass =
   "block w-full rounded-md border border-ink-300 bg-white px-2 py-1.5 text-sm tabular-nums shadow-sm focus:border-pine-600 aria-[invalid=true]:border-danger-700";
@@ -10,6 +11,7 @@ export interface NumberFieldProps {
   value: number;
   /** Decimals shown when the value changes from elsewhere (a drag, undo). */
   decimals?: number;
+  /** What the up and down arrow keys add or take away (default 1). */
   step?: number;
   hint?: string;
   /** Gets the typed number; returns an error message for the field, or null when accepted. */
@@ -20,7 +22,8 @@ export interface NumberFieldProps {
 
 /**
  * A number input that applies each valid value at once and shows why a value is refused beside
- * it (keeping what was typed, so nothing is lost while correcting it).
+ * it (keeping what was typed, so nothing is lost while correcting it). A text field read by
+ * parseNumberText, so "3,5" and "3.5 m" are understood as in the forms; the arrow keys step.
  */
 export function NumberField({
   label,
@@ -41,11 +44,21 @@ export function NumberField({
   // Follow changes made elsewhere (a drag, undo); never overwrite what is being typed.
   if (!focused && value !== shown) {
     setShown(value);
-    if (Number(text) !== value) {
+    if (parseNumberText(text, unit) !== value) {
       setText(format(value, decimals));
       setError(null);
     }
   }
+  const take = (typed: string) => {
+    setText(typed);
+    const n = parseNumberText(typed, unit);
+    if (n === null) {
+      setError(`${label} must be a number (${unit}).`);
+      return;
+    }
+    const refused = onValue(n);
+    setError(refused ? `${label} ${refused}.` : null);
+  };
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-xs font-medium text-ink-700">
@@ -54,9 +67,10 @@ export function NumberField({
       <div className="flex items-center gap-1.5">
         <input
           id={id}
-          type="number"
+          type="text"
           inputMode="decimal"
-          step={step ?? "any"}
+          autoComplete="off"
+          spellCheck={false}
           className={inputClass}
           value={text}
           disabled={disabled}
@@ -67,16 +81,14 @@ export function NumberField({
             setFocused(false);
             onDone?.();
           }}
-          onChange={(e) => {
-            setText(e.target.value);
-            const raw = e.target.value.trim();
-            const n = Number(raw);
-            if (raw === "" || !Number.isFinite(n)) {
-              setError(`${label} must be a number (${unit}).`);
-              return;
-            }
-            const refused = onValue(n);
-            setError(refused ? `${label} ${refused}.` : null);
+          onChange={(e) => take(e.target.value)}
+          onKeyDown={(e) => {
+            if (e.key !== "ArrowUp" && e.key !== "ArrowDown") return;
+            const n = parseNumberText(text, unit);
+            if (n === null) return;
+            e.preventDefault();
+            const next = n + (e.key === "ArrowUp" ? 1 : -1) * (step ?? 1);
+            take(format(next, Math.max(decimals, stepDecimals(step ?? 1))));
           }}
         />
         <span className="text-xs text-ink-500" aria-hidden="true">
@@ -98,4 +110,10 @@ export function NumberField({
 
 function format(value: number, decimals: number): string {
   return String(Number(value.toFixed(decimals)));
+}
+
+/** Decimals a step needs so that stepping does not round it away (0.05 -> 2). */
+function stepDecimals(step: number): number {
+  const s = String(step);
+  return s.includes(".") ? s.length - s.indexOf(".") - 1 : 0;
 }

@@ -2,10 +2,15 @@ import type { ResolvedSection } from "~/analysis";
 import type { OverlayJump } from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { checkSectionPatch } from "~/lib/editor/field-check";
-import { JUMP_PRESET_LABELS } from "~/lib/editor/jump-presets";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
-import { JUMP_PRESETS, type JumpPreset, type LayoutDocument, type LayoutSection } from "~/analysis";
+import {
+  JUMP_PRESET_LABELS,
+  JUMP_PRESETS,
+  type JumpPreset,
+  type LayoutDocument,
+  type LayoutSection,
+} from "~/analysis";
 import { JumpSideView } from "./jump-side-view";
 import { NumberField } from "./number-field";
 

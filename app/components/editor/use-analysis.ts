@@ -5,7 +5,7 @@
  * a failed request must never replace the editor with an error page.
  */
 import { useEffect, useRef, useState } from "react";
-import type { AnalysisOverlay } from "~/analysis";
+import type { AnalysisOverlay, SkillLevel } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 
 export type AnalysisState = "idle" | "working" | "ready" | "unavailable" | "failed";
@@ -16,8 +16,7 @@ export interface AnalysisStatus {
   message: string | null;
 }
 
-export const SKILLS = ["novice", "club", "expert"] as const;
-export type Skill = (typeof SKILLS)[number];
+export type Skill = SkillLevel;
 
 /** Delay after the last change before asking, ms. */
 export const ANALYSIS_DELAY_MS = 400;

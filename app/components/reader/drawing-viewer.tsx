@@ -2,7 +2,7 @@
  * The read-only plan for marshals and drivers (and directors who only want to look): the same
  * canvas without handles or editing panels, with the live analysis, its legend and the jump list.
  */
-import { lazy, Suspense, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import { Link } from "react-router";
 import { closureError, resolveSections, startPose } from "~/analysis";
 import type { Selection } from "~/lib/editor/editor-state";
@@ -10,14 +10,13 @@ import { DEFAULT_SNAP } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisPanel } from "~/components/editor/analysis-panel";
-import { CanvasPlaceholder, ClientOnly } from "~/components/editor/client-only";
 import { ClosureBar } from "~/components/editor/closure-bar";
 import { DrawingTitle, photoUrl } from "~/components/drawing/drawing-title";
 import { Panel } from "~/components/editor/panel";
 import { describeSection } from "~/components/editor/sections-list";
+import { LazyDrawingCanvas } from "~/components/editor/lazy-drawing-canvas";
 import { useAnalysis, type Skill } from "~/components/editor/use-analysis";
 
-const DrawingCanvas = lazy(() => import("~/components/editor/drawing-canvas"));
 const noop = () => {};
 
 export interface DrawingViewerProps {
@@ -77,30 +76,24 @@ export function DrawingViewer({ club, layout, document: doc, canEdit }: DrawingV
           role="img"
           aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}
         >
-          <ClientOnly fallback={<CanvasPlaceholder />}>
-            {() => (
-              <Suspense fallback={<CanvasPlaceholder />}>
-                <DrawingCanvas
-                  doc={doc}
-                  sections={sections}
-                  selection={selection}
-                  editable={false}
-                  mode="select"
-                  snap={DEFAULT_SNAP}
-                  units={units}
-                  overlay={analysis.overlay}
-                  overlayStale={false}
-                  photoUrl={photoUrl(doc.background)}
-                  fitRequest={fitRequest}
-                  calibrationPoints={[]}
-                  onSelect={setSelection}
-                  onChange={noop}
-                  onGestureEnd={noop}
-                  onPlanClick={noop}
-                />
-              </Suspense>
-            )}
-          </ClientOnly>
+          <LazyDrawingCanvas
+            doc={doc}
+            sections={sections}
+            selection={selection}
+            editable={false}
+            mode="select"
+            snap={DEFAULT_SNAP}
+            units={units}
+            overlay={analysis.overlay}
+            overlayStale={false}
+            photoUrl={photoUrl(doc.background)}
+            fitRequest={fitRequest}
+            calibrationPoints={[]}
+            onSelect={setSelection}
+            onChange={noop}
+            onGestureEnd={noop}
+            onPlanClick={noop}
+          />
         </div>
         <aside className="space-y-2 lg:w-[22rem]" aria-label="About this plan">
           <Panel title="Jumps and verdicts" open>

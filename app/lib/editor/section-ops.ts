@@ -3,8 +3,8 @@
  * delete, reorder, duplicate and change. Each returns a new document and leaves the old one as it
  * was, so the undo history can keep both by reference.
  */
+import { DEFAULT_JUMP_PRESET, defaultJump } from "~/analysis";
 import type { JumpPreset, LayoutDocument, LayoutSection, TurnSection } from "~/analysis";
-import { defaultJump } from "./jump-presets";
 
 export type NewSectionKind = "straight" | "turn-left" | "turn-right" | "jump";
 
@@ -26,7 +26,7 @@ export function freeSectionId(doc: Pick<LayoutDocument, "sections">, kind: Layou
 export function newSection(
   doc: Pick<LayoutDocument, "sections">,
   kind: NewSectionKind,
-  preset: JumpPreset = "tabletop",
+  preset: JumpPreset = DEFAULT_JUMP_PRESET,
 ): LayoutSection {
   if (kind === "straight") return { id: freeSectionId(doc, "straight"), kind: "straight", length: 10 };
   if (kind === "jump") return defaultJump(preset, freeSectionId(doc, "jump"));
@@ -108,7 +108,7 @@ export function changeSectionKind<D extends Pick<LayoutDocument, "sections">>(
   doc: D,
   index: number,
   kind: NewSectionKind,
-  preset: JumpPreset = "tabletop",
+  preset: JumpPreset = DEFAULT_JUMP_PRESET,
 ): D {
   const old = doc.sections[index];
   if (!old) return doc;

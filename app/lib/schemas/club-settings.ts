@@ -1,18 +1,21 @@
 /**
- * The club settings form: which track guidance set the rule checks use, and the club's own value
- * for any rule (an empty field keeps the set's value). Both sides import it; the server also reads
- * stored overrides back through `storedOverridesSchema`.
+ * The club settings form: which track guidance set the rule checks use, the club's own value for
+ * any rule and for the set-up verdicts' thresholds (an empty field keeps the default). Both sides
+ * import it; the server also reads stored values back through `storedOverridesSchema` and
+ * `storedVerdictSchema`.
  */
 import { z } from "zod";
+import { parseNumberText } from "~/lib/number-text";
 import {
   DEFAULT_MIN_GAIN_PER_PASS_S,
   DEFAULT_MIN_NOSE_TURN,
+  GUIDANCE_SET_IDS,
+  GUIDANCE_SET_LABELS,
+  wordList,
   type GuidanceOverrides,
   type GuidanceSetId,
   type RuleId,
 } from "~/analysis";
-
-export const GUIDANCE_SET_IDS = ["club", "national"] as const satisfies readonly GuidanceSetId[];
 
 /** What each rule's field asks for, and the range a club may set (units as in the rule checks). */
 export const RULE_FIELDS: readonly {
@@ -71,6 +74,30 @@ export const RULE_FIELDS: readonly {
     max: 10,
     hint: "As a multiple of the lap divided by the number of marshal points; 1 is perfectly even.",
   },
+  {
+    id: "minLandingRunOut",
+    label: "Shortest run-out after a landing",
+    unit: "m",
+    min: 0,
+    max: 50,
+    hint: "From where a car touches down to the start of the next turn.",
+  },
+  {
+    id: "maxLandingFallHeight",
+    label: "Hardest landing allowed",
+    unit: "m",
+    min: 0.05,
+    max: 5,
+    hint: "Equivalent fall height: the drop onto flat ground that lands as hard.",
+  },
+  {
+    id: "minSpeedWindow",
+    label: "Narrowest speed window",
+    unit: "m/s",
+    min: 0,
+    max: 5,
+    hint: "How much the takeoff speed may vary and still land on the landing ramp.",
+  },
 ];
 
 /** The club's own values for the set-up verdicts, in the form's units (s, deg). */
@@ -117,8 +144,8 @@ function overrideField(f: { label: string; unit: string; min: number; max: numbe
     .trim()
     .transform((s, ctx) => {
       if (s === "") return undefined;
-      const n = Number(s.replace(",", "."));
-      if (!Number.isFinite(n)) {
+      const n = parseNumberText(s, f.unit === "m" ? "m" : undefined);
+      if (n === null) {
         ctx.addIssue({
           code: "custom",
           message: `${f.label} must be a number${unit ? " of metres" : ""}, like ${f.min + 1}.`,
@@ -146,7 +173,9 @@ const verdictShape = Object.fromEntries(VERDICT_FIELDS.map((f) => [f.id, overrid
 
 /** The settings form: guidance set plus one optional text field per rule and per verdict value. */
 export const clubSettingsSchema = z.object({
-  guidanceSet: z.enum(GUIDANCE_SET_IDS, { error: "Choose the club or the national-level guidance." }),
+  guidanceSet: z.enum(GUIDANCE_SET_IDS, {
+    error: `Choose a guidance set: ${wordList(GUIDANCE_SET_IDS.map((id) => GUIDANCE_SET_LABELS[id]))}.`,
+  }),
   ...overrideShape,
   ...verdictShape,
 });

@@ -1,14 +1,9 @@
 /** Form schemas for a layout's metadata (name, surface, track width) and its status changes. */
 import { z } from "zod";
+import { SURFACE_LABELS, SURFACES, wordList, type Surface } from "~/analysis";
+import { parseNumberText } from "~/lib/number-text";
 
-export const SURFACES = ["dirt", "clay", "turf", "carpet"] as const;
-export type Surface = (typeof SURFACES)[number];
-export const SURFACE_LABELS: Record<Surface, string> = {
-  dirt: "Dirt",
-  clay: "Clay",
-  turf: "Turf",
-  carpet: "Carpet",
-};
+export type { Surface };
 
 /** Track width limits, m: narrower than 1.5 m two cars cannot pass; wider than 10 m is a car park. */
 export const TRACK_WIDTH_MIN_M = 1.5;
@@ -20,14 +15,16 @@ export const layoutNameField = z
   .min(1, { error: "Enter a name for the layout." })
   .max(100, { error: "Keep the layout's name to 100 characters or fewer." });
 
-export const surfaceField = z.enum(SURFACES, { error: "Choose a surface: dirt, clay, turf or carpet." });
+export const surfaceField = z.enum(SURFACES, {
+  error: `Choose a surface: ${wordList(SURFACES.map((s) => SURFACE_LABELS[s].toLowerCase()))}.`,
+});
 
-/** Track width in metres from a text field; accepts a decimal comma ("3,5"). */
+/** Track width in metres from a text field; accepts a decimal comma ("3,5") and the unit ("3.5 m"). */
 export const trackWidthField = z
   .string({ error: "Enter the track width in metres." })
   .trim()
   .min(1, { error: "Enter the track width in metres." })
-  .transform((s) => Number(s.replace(",", ".")))
+  .transform((s) => parseNumberText(s, "m") ?? Number.NaN)
   .pipe(
     z
       .number({ error: "Enter the track width as a number of metres, like 3.5." })

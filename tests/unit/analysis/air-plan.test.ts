@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { planAirSetup } from "~/analysis/air/air-plan";
 import { nutationPeriod } from "~/analysis/air/air-plan-linear";
+import { DEFAULT_SKILL_SIGMAS, DEFAULT_SPEED_SIGMAS } from "~/analysis/air/air-plan-robustness";
 import { simulateAttitude } from "~/analysis/air/attitude";
 import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis/format/cars";
 import { seededNormal } from "~/analysis/math/vec";
@@ -121,8 +122,9 @@ describe("mid-air set-up plan", () => {
     };
     const plan = planAirSetup(input);
     expect(plan.pulseSwitches).toHaveLength(2);
-    const sigmas = { novice: 0.06, club: 0.035, expert: 0.015 } as const;
-    const spread = { novice: 0.5, club: 0.3, expert: 0.15 } as const;
+    // The plan samples the engine's default spreads; the reference uses the same.
+    const sigmas = DEFAULT_SKILL_SIGMAS;
+    const spread = DEFAULT_SPEED_SIGMAS;
     const [on, off] = plan.rearWheelAccel;
     for (const level of ["novice", "club", "expert"] as const) {
       const z = seededNormal(4242);

@@ -29,7 +29,7 @@ describe("jump verdicts (issue 4 correctness)", () => {
     const expert = j.verdicts.expert;
     expect(expert.verdict).toBe("set-up");
     expect(expert.reason).toBeNull();
-    expect(expert.reasonText).toBe("set up in the air");
+    expect(expert.reasonText).toBe(`land with the nose ${Math.round(Math.abs(j.plan!.yawDeg))}° left`);
     expect(expert.text).toMatch(/^Set up in the air: steer .* to land with the nose turned \d+° left/);
     expect(expert.expectedGain).toBeGreaterThanOrEqual(expert.minGainPerPass);
     expect(expert.noseTurnDeg).toBeGreaterThanOrEqual(expert.minNoseTurnDeg);
@@ -66,7 +66,7 @@ describe("jump verdicts (issue 4 correctness)", () => {
     const wide = only(doc, { ...STEADY, thresholds: { minNoseTurn: 40 * RAD } });
     expect(wide.verdicts.expert.reason).toBe("nose-turn-too-small");
     expect(wide.verdicts.expert.text).toMatch(
-      /the nose turns only \d+(\.\d)?° \(a set-up is worth it from 40°/,
+      /the nose turns too little: only \d+(\.\d)?° \(a set-up is worth it from 40°/,
     );
     const greedy = only(doc, { ...STEADY, thresholds: { minGainPerPass: 1 } });
     expect(greedy.verdicts.expert.reason).toBe("gain-too-small");
@@ -107,7 +107,8 @@ describe("jump verdicts (issue 4 correctness)", () => {
     expect(j.takeoffSpeed).toBeCloseTo(j.approachMaxSpeed, 2);
     expect(j.landing!.landedOn).toBe("short");
     expect(j.verdicts.club.reason).toBe("cannot-clear");
-    expect(j.verdicts.club.reasonText).toBe("cannot clear: the approach is too short");
+    expect(j.verdicts.club.reasonText).toBe("the approach is too short");
+    expect(j.verdicts.club.text).toMatch(/^Cannot clear: the approach is too short \(at most [\d.]+ m\/s; /);
     expect(j.plan).toBeNull();
   });
 
@@ -170,7 +171,7 @@ describe("a whoops row", () => {
     const fast = only(ovalWithJump(row(6), { approach: 40, after: 30 }));
     expect(fast.approachMaxSpeed).toBeGreaterThanOrEqual(fast.whoops!.skimSpeed);
     expect(fast.whoops!.technique).toBe("skim");
-    expect(fast.verdicts.club.reasonText).toBe("whoops: skim over the tops");
+    expect(fast.verdicts.club.reasonText).toBe("whoops row: skim over the tops");
     const slow = only(ovalWithJump(row(6), { approach: 1.5, after: 30 }));
     const w = slow.whoops!;
     expect(slow.approachMaxSpeed).toBeLessThan(w.skimSpeed);

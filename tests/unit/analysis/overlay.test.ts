@@ -38,8 +38,9 @@ describe("buildOverlay", () => {
         if (v.reason === "cannot-clear") expect(oj.verdict).toBe("cannot-clear");
         else expect(oj.verdict).toBe(v.verdict);
         if (v.verdict === "straight" && v.reason !== "cannot-clear")
-          expect(oj.label).toBe(`Straight: ${v.reasonText}`);
-        if (v.verdict === "set-up") expect(oj.label).toMatch(/^Set up: turn \d+° (left|right) in the air$/);
+          expect(oj.label).toBe(`Take it straight: ${v.reasonText}`);
+        if (v.verdict === "set-up")
+          expect(oj.label).toMatch(/^Set up in the air: land with the nose \d+° (left|right)$/);
       });
     }
   });
@@ -48,14 +49,14 @@ describe("buildOverlay", () => {
     const short = analyseLayout(ovalWithJump(BIG_DOUBLE, { approach: 1 }));
     const o = buildOverlay(short, "buggy-4wd-10");
     expect(o.jumps[0].verdict).toBe("cannot-clear");
-    expect(o.jumps[0].label).toBe("Cannot clear: approach too short");
+    expect(o.jumps[0].label).toBe("Cannot clear: the approach is too short");
     // An expert who reaches the jump at the same speed every lap (takeoff speed spread 0.02 m/s).
     const hairpin = analyseLayout(ovalWithJump(BIG_DOUBLE, { after: 0.5 }), {
       speedSigmas: { novice: 0.5, club: 0.3, expert: 0.02 },
     });
     const e = buildOverlay(hairpin, "buggy-4wd-10", "expert").jumps[0];
     expect(e.verdict).toBe("set-up");
-    expect(e.label).toMatch(/^Set up: turn \d+° left in the air$/);
+    expect(e.label).toMatch(/^Set up in the air: land with the nose \d+° left$/);
     expect(e.landing).not.toBeNull();
   });
 

@@ -5,6 +5,7 @@ import {
   checkRules,
   GUIDANCE_SETS,
   guidanceValues,
+  JUMP_RULE_DEFAULTS,
   RULES_NOTE,
   type RuleMeasurements,
 } from "~/analysis/track/rules";
@@ -23,6 +24,9 @@ const good: RuleMeasurements = {
   startStraight: 25,
   hiddenLength: 0,
   marshalGapRatio: 1.2,
+  landingRunOut: 5,
+  landingFallHeight: 0.2,
+  speedWindow: 0.5,
 };
 
 describe("track guidance sets", () => {
@@ -63,7 +67,7 @@ describe("track guidance sets", () => {
 
   it("check every rule, with the note that the rulebook decides", () => {
     const all = checkRules(good, "club");
-    expect(all.checks.map((c) => c.status)).toEqual(["pass", "pass", "pass", "pass", "pass", "pass"]);
+    expect(all.checks.map((c) => c.status)).toEqual(Array(9).fill("pass"));
     expect(all.note).toBe(RULES_NOTE);
     expect(all.note).toMatch(/current rulebook decides/);
     const bad = checkRules(
@@ -74,10 +78,13 @@ describe("track guidance sets", () => {
         startStraight: 12,
         hiddenLength: 3,
         marshalGapRatio: 2.5,
+        landingRunOut: 1.5,
+        landingFallHeight: 0.8,
+        speedWindow: 0.1,
       },
       "club",
     );
-    expect(bad.failed).toBe(6);
+    expect(bad.failed).toBe(9);
     expect(bad.checks.find((c) => c.id === "minLapLength")!.detail).toBe(
       "100 m measured; at least 120 m required",
     );
@@ -92,6 +99,13 @@ describe("track guidance sets", () => {
     expect(r.checks.find((c) => c.id === "maxHiddenLength")!.status).toBe("not checked");
     expect(r.checks.find((c) => c.id === "maxMarshalGapRatio")!.status).toBe("fail");
     expect(r.notChecked).toBe(2);
+    // Without jump measurements the jump rules are not checked (a layout without jumps).
+    const plain = checkRules(
+      { ...good, landingRunOut: null, landingFallHeight: undefined, speedWindow: null },
+      "club",
+    );
+    expect(plain.notChecked).toBe(3);
+    expect(plain.checks.find((c) => c.id === "minLandingRunOut")!.detail).toBe("no jump lands before a turn");
   });
 
   it("take a club's overrides and say so in the source", () => {
@@ -114,5 +128,43 @@ describe("track guidance sets", () => {
     expect(byId.minLapLength.status).toBe("fail");
     expect(byId.minStartStraight.measured).toBe(24);
     expect(byId.maxMarshalGapRatio.status).toBe("pass");
+  });
+
+  it("carry the three jump rules with defaults marked as estimates or common practice, not a rulebook", () => {
+    for (const set of ["club", "national"] as const)
+      expect(GUIDANCE_SETS[set].values).toMatchObject(JUMP_RULE_DEFAULTS);
+    const r = checkRules(good, "club");
+    const byId = Object.fromEntries(r.checks.map((c) => [c.id, c]));
+    expect(byId.minLandingRunOut).toMatchObject({ value: 3, unit: "m", comparison: "at least" });
+    expect(byId.maxLandingFallHeight).toMatchObject({ value: 0.5, unit: "m", comparison: "at most" });
+    expect(byId.minSpeedWindow).toMatchObject({ value: 0.2, unit: "m/s", comparison: "at least" });
+    expect(byId.minLandingRunOut.source).toMatch(/common practice/);
+    expect(byId.maxLandingFallHeight.source).toMatch(
+      /estimate from memory.*Levy, Hubbard, McNeil & Swedberg/,
+    );
+    expect(byId.minSpeedWindow.source).toMatch(/estimate from memory/);
+    for (const id of ["minLandingRunOut", "maxLandingFallHeight", "minSpeedWindow"])
+      expect(byId[id].source).not.toMatch(/rulebooks/);
+  });
+
+  it("name the worst jump and every other jump that fails, and take a club's values", () => {
+    const m: RuleMeasurements = {
+      ...good,
+      landingRunOut: 1.48,
+      where: { minLandingRunOut: "J7 Hairpin table (1/10 four-wheel-drive buggy)" },
+      failing: { minLandingRunOut: ["J1 First double", "J7 Hairpin table"] },
+    };
+    const runOut = checkRules(m, "club").checks.find((c) => c.id === "minLandingRunOut")!;
+    expect(runOut.status).toBe("fail");
+    expect(runOut.where).toBe("J7 Hairpin table (1/10 four-wheel-drive buggy)");
+    expect(runOut.detail).toBe(
+      "1.48 m measured at J7 Hairpin table (1/10 four-wheel-drive buggy); at least 3 m required; also J1 First double",
+    );
+    const relaxed = checkRules(m, "club", { minLandingRunOut: 1.4 }).checks.find(
+      (c) => c.id === "minLandingRunOut",
+    )!;
+    expect(relaxed.status).toBe("pass");
+    expect(relaxed.source).toBe("Club setting (the club set says 3 m)");
+    expect(() => guidanceValues("club", { minSpeedWindow: -0.1 })).toThrow("overrides.minSpeedWindow");
   });
 });

@@ -11,7 +11,7 @@ import {
   turnCentre,
   turnRadiusFromPoint,
 } from "~/lib/editor/drag-maths";
-import { defaultJump } from "~/lib/editor/jump-presets";
+import { defaultJump } from "~/analysis";
 
 const SNAP = { lengths: true, angles: true };
 const FREE = { lengths: false, angles: false };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { jumpProfile } from "~/analysis";
 import type { CustomJumpSection, JumpSection } from "~/analysis";
-import { defaultJump } from "~/lib/editor/jump-presets";
+import { defaultJump } from "~/analysis";
 import {
   addProfilePoint,
   dragProfileHandle,

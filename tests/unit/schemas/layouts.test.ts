@@ -19,6 +19,8 @@ describe("createLayoutSchema", () => {
   it("reads the track width in metres, with a decimal point or comma, within 1.5 to 10 m", () => {
     expect(width("3.5")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 3.5 } });
     expect(width(" 2,75 ")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 2.75 } });
+    // The same reading as the editor's number fields: the unit may follow the number.
+    expect(width("3,5 m")).toEqual({ ok: true, data: { name: "Loop", surface: "dirt", trackWidth: 3.5 } });
     expect(width(String(TRACK_WIDTH_MIN_M)).ok).toBe(true);
     expect(width(String(TRACK_WIDTH_MAX_M)).ok).toBe(true);
     expect(width("1.49")).toEqual({
@@ -30,10 +32,11 @@ describe("createLayoutSchema", () => {
       errors: { trackWidth: ["Track width must be at most 10 m."] },
     });
     expect(width("")).toEqual({ ok: false, errors: { trackWidth: ["Enter the track width in metres."] } });
-    expect(width("three")).toEqual({
-      ok: false,
-      errors: { trackWidth: ["Enter the track width as a number of metres, like 3.5."] },
-    });
+    for (const bad of ["three", "3 ft", "0x3", "1,000.5"])
+      expect(width(bad)).toEqual({
+        ok: false,
+        errors: { trackWidth: ["Enter the track width as a number of metres, like 3.5."] },
+      });
   });
 
   it("accepts the four surfaces only and needs a name", () => {

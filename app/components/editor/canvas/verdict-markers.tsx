@@ -1,16 +1,18 @@
-import { Circle, Group, Label, Line, Rect, RegularPolygon, Tag, Text } from "react-konva";
+import { Group, Label, Line, Path, Tag, Text } from "react-konva";
 import type { OverlayJump } from "~/analysis";
 import type { Point } from "~/lib/editor/drag-maths";
 import { worldToScreen, type View } from "~/lib/editor/view";
+import { VERDICT_MARK_OUTLINE, VERDICT_MARKS } from "~/lib/verdict-marks";
 import { PLAN } from "../colours";
 
-/** Marker shapes per verdict: the shape and the text carry the verdict, not the colour alone. */
-export const VERDICT_SHAPE = { "set-up": "triangle", straight: "circle", "cannot-clear": "square" } as const;
+/** Size of a marker's shape on screen: its path (about 1 unit in radius) times this, px. */
+const MARK_SCALE = 9;
 
 /**
- * A marker on each jump's landing (or its lip when it cannot be cleared): a triangle for "set up in
- * the air", a circle for "take it straight", a square with a cross for "cannot clear", each with
- * its short text. The flight from lip to landing is a dashed line. Clicking selects the jump.
+ * A marker on each jump's landing (or its lip when it cannot be cleared): the verdict's mark
+ * (app/lib/verdict-marks.ts: triangle, circle or cross, as on the pages) with its short text, so
+ * the shape and the text carry the verdict, not the colour alone. The flight from lip to landing
+ * is a dashed line. Clicking selects the jump.
  */
 export function VerdictMarkers({
   jumps,
@@ -44,31 +46,15 @@ export function VerdictMarkers({
               />
             ) : null}
             <Group x={at.x} y={at.y} name={`verdict-${index}`}>
-              {j.verdict === "set-up" ? (
-                <RegularPolygon sides={3} radius={10} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
-              ) : null}
-              {j.verdict === "straight" ? (
-                <Circle radius={8} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
-              ) : null}
-              {j.verdict === "cannot-clear" ? (
-                <>
-                  <Rect
-                    x={-8}
-                    y={-8}
-                    width={16}
-                    height={16}
-                    fill={colour}
-                    stroke="#ffffff"
-                    strokeWidth={1.5}
-                  />
-                  <Line
-                    points={[-4, -4, 4, 4, 0, 0, -4, 4, 4, -4]}
-                    stroke="#ffffff"
-                    strokeWidth={2}
-                    listening={false}
-                  />
-                </>
-              ) : null}
+              <Path
+                name={`mark-${VERDICT_MARKS[j.verdict].shape}`}
+                data={VERDICT_MARKS[j.verdict].path}
+                scaleX={MARK_SCALE}
+                scaleY={MARK_SCALE}
+                fill={colour}
+                stroke="#ffffff"
+                strokeWidth={VERDICT_MARK_OUTLINE}
+              />
               <Label x={13} y={-9}>
                 <Tag
                   fill={selected ? PLAN.selected : "rgba(251, 249, 245, 0.95)"}

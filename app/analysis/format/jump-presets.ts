@@ -1,22 +1,20 @@
 /**
- * Starting shapes of new jumps, one per preset. Sizes are estimates from memory of common club
- * jumps for 1/10 and 1/8 off-road cars (common practice, no source); every one passes the layout
- * document's checks (tests/unit/editor/section-ops.test.ts).
+ * Starting shapes of new jumps, one per preset (their names: JUMP_PRESET_LABELS in words.ts).
+ * Sizes are estimates from memory of common club jumps for 1/10 and 1/8 off-road cars (common
+ * practice, no source); every one passes the layout document's checks
+ * (tests/unit/editor/section-ops.test.ts).
  */
-import type { JumpPreset, JumpSection } from "~/analysis";
+import type { JumpPreset } from "../words";
+import type { JumpSection } from "./layout-document";
 
-/** The trade's names of the presets, for menus and the side panel. */
-export const JUMP_PRESET_LABELS: Record<JumpPreset, string> = {
-  tabletop: "Tabletop",
-  double: "Double",
-  triple: "Triple",
-  "step-up": "Step-up",
-  "step-down": "Step-down",
-  whoops: "Whoops",
-  custom: "Free profile",
-};
+/** The preset a new jump starts as. */
+export const DEFAULT_JUMP_PRESET: JumpPreset = "tabletop";
 
-/** A new jump of the preset with the given id. */
+/**
+ * A new jump of the preset with the given id, sizes in m and deg as in the layout file.
+ * @param preset the jump's kind
+ * @param id the new section's id
+ */
 export function defaultJump(preset: JumpPreset, id: string): JumpSection {
   switch (preset) {
     case "tabletop":

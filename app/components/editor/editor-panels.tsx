@@ -1,0 +1,115 @@
+import { initialPlacement } from "~/lib/editor/background";
+import { changeSectionKind } from "~/lib/editor/section-ops";
+import { AnalysisPanel } from "./analysis-panel";
+import { HelpPanel } from "./help-panel";
+import { Panel } from "./panel";
+import { PhotoPanel } from "./photo-panel";
+import { SectionPanel } from "./section-panel";
+import { SectionsList } from "./sections-list";
+import { SitePanel } from "./site-panel";
+import type { useAnalysis, Skill } from "./use-analysis";
+import type { EditorCommands, EditorTools } from "./use-editor-commands";
+import type { EditorDocument } from "./use-editor-document";
+
+export interface AnalysisChoice {
+  classId: string | undefined;
+  skill: Skill;
+  setClassId(classId: string): void;
+  setSkill(skill: Skill): void;
+}
+
+interface Props {
+  layoutId: string;
+  ed: EditorDocument;
+  tools: EditorTools;
+  commands: EditorCommands;
+  analysis: ReturnType<typeof useAnalysis>;
+  choice: AnalysisChoice;
+}
+
+/** The editor's side panels: the selected section, the live analysis, the site, the photo, help. */
+export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }: Props) {
+  const { doc, sections, selected, state, change, select, endGesture } = ed;
+  const selectSection = (index: number) => select({ kind: "section", index });
+  return (
+    <aside
+      className="space-y-2 lg:max-h-[calc(62vh+9rem)] lg:w-[22rem] lg:overflow-y-auto"
+      aria-label="Editing panels"
+    >
+      <Panel title={selected !== null ? "Selected section" : "Sections"} open>
+        {selected !== null ? (
+          <SectionPanel
+            doc={doc}
+            index={selected}
+            resolved={sections[selected]}
+            snap={tools.snap}
+            overlayJump={analysis.overlay?.jumps.find((j) => j.sectionId === doc.sections[selected]?.id)}
+            onSection={(s, g) =>
+              change({ ...doc, sections: doc.sections.map((x, i) => (i === selected ? s : x)) }, g)
+            }
+            onPreset={(p) => change(changeSectionKind(doc, selected, "jump", p))}
+            onGestureEnd={endGesture}
+          />
+        ) : (
+          <p className="text-sm text-ink-500">Click a section on the plan or in the list to change it.</p>
+        )}
+        <SectionsList
+          sections={doc.sections}
+          resolved={sections}
+          selected={selected}
+          onSelect={selectSection}
+        />
+      </Panel>
+      <Panel title="Live analysis" open>
+        <AnalysisPanel
+          overlay={analysis.overlay}
+          status={analysis.status}
+          stale={analysis.overlayDoc !== doc}
+          sections={doc.sections}
+          classIds={doc.carClasses}
+          classId={choice.classId}
+          skill={choice.skill}
+          selected={selected}
+          onClass={choice.setClassId}
+          onSkill={choice.setSkill}
+          onSelect={selectSection}
+        />
+      </Panel>
+      <Panel
+        title="Site: width, stand, marshals, boundary"
+        open={
+          state.selection !== null && state.selection.kind !== "section" && state.selection.kind !== "photo"
+        }
+      >
+        <SitePanel
+          doc={doc}
+          selection={state.selection}
+          mode={tools.mode}
+          bounds={commands.bounds}
+          onMode={tools.setMode}
+          onChange={change}
+          onSelect={select}
+          onGestureEnd={endGesture}
+        />
+      </Panel>
+      <Panel title="Site photo" open={tools.mode === "calibrate" || state.selection?.kind === "photo"}>
+        <PhotoPanel
+          layoutId={layoutId}
+          background={doc.background}
+          mode={tools.mode}
+          calibrationPoints={tools.calibrationPoints}
+          onMode={tools.setMode}
+          onUploaded={(fileId, w, h) =>
+            commands.setBackground(initialPlacement(fileId, w, h, commands.bounds()))
+          }
+          onBackground={commands.setBackground}
+          onGestureEnd={endGesture}
+          onResetCalibration={() => tools.setCalibrationPoints([])}
+        />
+      </Panel>
+      <Panel title="Keyboard shortcuts and help">
+        <HelpPanel />
+      </Panel>
+    </aside>
+  );
+}
