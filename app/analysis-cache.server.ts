@@ -8,7 +8,9 @@
  * a warm request for a saved layout skips reading and checking its document as well.
  */
 import { createHash } from "node:crypto";
-import { gzipSync } from "node:zlib";
+import { promisify } from "node:util";
+import { gzip } from "node:zlib";
+import { composeJson } from "~/analysis-pool/analysis-json";
 import type { GuidanceOverrides, GuidanceSetId } from "~/analysis";
 import type { SkillLevel } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
@@ -79,7 +81,8 @@ export class LruMap<K, V> {
 /** A JSON answer made once: UTF-8 bytes, and the same gzip-compressed when first asked for. */
 export interface CachedBody {
   bytes: Uint8Array;
-  gzip(): Uint8Array;
+  /** Compressed on libuv's thread pool, off the request thread. */
+  gzip(): Promise<Uint8Array>;
 }
 
 /** One remembered analysis and the JSON bodies already made from it (by what they hold). */
@@ -96,24 +99,40 @@ const entries = new LruMap<string, CacheEntry<unknown>>(ANALYSIS_CACHE_SIZE);
 const aliases = new LruMap<string, string>(ANALYSIS_CACHE_SIZE * 4);
 const stats = { hits: 0, misses: 0 };
 
+const pending = new Map<string, Promise<CacheEntry<unknown>>>();
+
 /**
- * The remembered result for these inputs, or `compute()`'s result, remembered.
- * @returns the entry and whether it was a hit.
+ * The remembered result for these inputs, or `compute()`'s result, remembered. Requests for the
+ * same inputs while it is being computed wait for that one computation.
+ * @returns the entry and whether it was a hit (remembered, or already being computed).
  */
-export function memoAnalysis<T>(
+export async function memoAnalysis<T>(
   inputs: AnalysisInputs,
-  compute: () => T,
-): { entry: CacheEntry<T>; hit: boolean } {
+  compute: () => Promise<T>,
+): Promise<{ entry: CacheEntry<T>; hit: boolean }> {
   const key = analysisKey(inputs);
   const found = entries.get(key) as CacheEntry<T> | undefined;
   if (found) {
     stats.hits += 1;
     return { entry: found, hit: true };
   }
+  const running = pending.get(key) as Promise<CacheEntry<T>> | undefined;
+  if (running) {
+    stats.hits += 1;
+    return { entry: await running, hit: true };
+  }
   stats.misses += 1;
-  const entry: CacheEntry<T> = { key, value: compute(), bodies: new Map() };
-  entries.set(key, entry as CacheEntry<unknown>);
-  return { entry, hit: false };
+  const made = compute().then((value) => {
+    const entry: CacheEntry<T> = { key, value, bodies: new Map() };
+    entries.set(key, entry as CacheEntry<unknown>);
+    return entry;
+  });
+  pending.set(key, made as Promise<CacheEntry<unknown>>);
+  try {
+    return { entry: await made, hit: false };
+  } finally {
+    pending.delete(key);
+  }
 }
 
 /** The entry an alias points at, if both are still remembered (counts as a hit). */
@@ -129,28 +148,26 @@ export function setAlias(alias: string, key: string): void {
   aliases.set(alias, key);
 }
 
-/** Significant digits of the numbers in JSON answers: far finer than any model estimate. */
-export const JSON_DIGITS = 6;
+export { JSON_DIGITS } from "~/analysis-pool/analysis-json";
 
-/** Writes fractional numbers to JSON_DIGITS significant digits (whole numbers as they are). */
-function compactNumber(_key: string, value: unknown): unknown {
-  return typeof value === "number" && !Number.isInteger(value) && Number.isFinite(value)
-    ? Number(value.toPrecision(JSON_DIGITS))
-    : value;
-}
-
-const encoder = new TextEncoder();
+const gzipAsync = promisify(gzip);
 
 /**
  * A JSON body made once per entry and purpose: a repeat neither serialises, encodes nor compresses
- * again (clients that accept gzip get the compressed bytes, made on the first such request).
+ * again (clients that accept gzip get the compressed bytes, made on the first such request). An
+ * analysis a worker made comes with its JSON already written, which is spliced in
+ * (app/analysis-pool/analysis-json.ts), so a large analysis is not serialised here.
  */
-export function cachedBody<T>(entry: CacheEntry<T>, purpose: string, make: () => unknown): CachedBody {
+export function cachedBody<T>(
+  entry: CacheEntry<T>,
+  purpose: string,
+  make: () => Record<string, unknown>,
+): CachedBody {
   let body = entry.bodies.get(purpose);
   if (body === undefined) {
-    const bytes = encoder.encode(JSON.stringify(make(), compactNumber));
-    let gzipped: Uint8Array | undefined;
-    body = { bytes, gzip: () => (gzipped ??= gzipSync(bytes)) };
+    const bytes = composeJson(make());
+    let gzipped: Promise<Uint8Array> | undefined;
+    body = { bytes, gzip: () => (gzipped ??= gzipAsync(bytes)) };
     entry.bodies.set(purpose, body);
   }
   return body;

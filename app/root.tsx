@@ -13,6 +13,7 @@ import { SiteHeader } from "~/components/site-header";
 import { getUser } from "~/auth/permissions.server";
 import { getSession, sessionStorage } from "~/auth/session.server";
 import { config } from "~/lib/config.server";
+import { useNonce } from "~/lib/nonce";
 import "./app.css";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -34,6 +35,7 @@ export const meta: Route.MetaFunction = () => [
 
 export function Layout({ children }: { children: React.ReactNode }) {
   const root = useRouteLoaderData<typeof loader>("root");
+  const nonce = useNonce();
   return (
     <html lang="en">
       <head>
@@ -54,8 +56,8 @@ export function Layout({ children }: { children: React.ReactNode }) {
           </div>
         ) : null}
         <main className="mx-auto w-full max-w-6xl px-4 py-6 sm:px-6">{children}</main>
-        <ScrollRestoration />
-        <Scripts />
+        <ScrollRestoration nonce={nonce} />
+        <Scripts nonce={nonce} />
       </body>
     </html>
   );
@@ -77,7 +79,8 @@ const ERROR_TEXT: Record<number, { title: string; body: string }> = {
   },
   404: { title: "Not found", body: "There is nothing here, or it is not shared with you." },
   409: { title: "Changed meanwhile", body: "Someone else saved a newer version. Reload to see it." },
-  413: { title: "Too large", body: "That upload is larger than allowed." },
+  413: { title: "Too large", body: "That upload or form is larger than allowed." },
+  415: { title: "Wrong kind of content", body: "The request was not sent as the form or file expected." },
   422: {
     title: "Cannot analyse this layout",
     body: "The saved drawing could not be analysed. Open it in the editor to fix it.",

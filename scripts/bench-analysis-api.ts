@@ -119,6 +119,8 @@ async function main() {
         DATABASE_URL: `file:${path.join(dataDir, "loftline.db")}`,
         SESSION_SECRET: "bench-session-secret",
         APP_URL: `http://127.0.0.1:${port}`,
+        // One account asks thousands of times here: the per-account rate would answer 429.
+        LOFTLINE_ANALYSIS_RATE: "1000000",
       },
     });
     const base = `http://127.0.0.1:${port}`;

@@ -1,7 +1,9 @@
 #!/usr/bin/env bash
 # `npm test`: every test. Installs Debian's chromium and poppler-utils when missing, then runs
 # the typecheck and the lint (a reach past the engine's front door fails here), the unit, component
-# and integration tests (vitest), builds the app and runs the browser tests against it.
+# and integration tests (vitest), builds the app and runs the reliability tests (the built
+# server under bad, oversized and racing requests, the analysis budget, saves surviving kill -9) and
+# the browser tests against it.
 # Runs every stage even when an earlier one fails, prints a summary, and exits non-zero on any failure.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -55,12 +57,15 @@ counted() {
 stage "typecheck" npm run --silent typecheck
 stage "lint" ./node_modules/.bin/eslint .
 stage "unit, component and integration tests" counted ./node_modules/.bin/vitest run
-if stage "build" ./node_modules/.bin/react-router build; then
+if stage "build" npm run --silent build; then
+  stage "reliability tests" counted ./node_modules/.bin/vitest run --config vitest.reliability.config.ts
   stage "browser tests" counted ./node_modules/.bin/vitest run --config vitest.e2e.config.ts
 else
-  names+=("browser tests")
-  results+=("skipped")
-  seconds+=("0")
+  for skipped in "reliability tests" "browser tests"; do
+    names+=("$skipped")
+    results+=("skipped")
+    seconds+=("0")
+  done
 fi
 
 echo

@@ -8,7 +8,7 @@ import { FormStrategy } from "remix-auth-form";
 import { parseForm, type FieldErrors } from "~/lib/forms";
 import { signInSchema } from "~/lib/schemas/auth";
 import type { SessionUser } from "./permissions.server";
-import { checkThrottle, clientAddress, recordFailure, throttleMessage } from "./throttle.server";
+import { purgeFailures, releaseAttempt, reserveAttempt, throttleMessage } from "./throttle.server";
 import { verifyLogin } from "./users.server";
 
 /** Thrown by the strategy when the address and password do not match an account. */
@@ -44,16 +44,21 @@ export type SignInResult =
 
 /**
  * Runs one sign-in attempt from a submitted form: field checks (400), the throttle (429), then
- * the password check through the authenticator. Only a wrong password counts as a failure.
+ * the password check through the authenticator. Only a wrong password counts as a failure: the
+ * attempt is counted before the check and given back when the password is right, so parallel
+ * guesses cannot pass the limit. `clientAddress` comes from the server (the load context).
  */
-export async function signInWithPassword(request: Request): Promise<SignInResult> {
+export async function signInWithPassword(
+  request: Request,
+  clientAddress: string | null,
+): Promise<SignInResult> {
   const form = await request.clone().formData();
   const parsed = parseForm(signInSchema, form);
   const typedEmail = String(form.get("email") ?? "").slice(0, 254);
   if (!parsed.ok) return { kind: "invalid", errors: parsed.errors, email: typedEmail };
 
-  const key = { email: parsed.data.email, clientAddress: clientAddress(request) };
-  const gate = await checkThrottle(key);
+  const key = { email: parsed.data.email, clientAddress };
+  const gate = await reserveAttempt(key);
   if (!gate.allowed) {
     return {
       kind: "throttled",
@@ -62,12 +67,17 @@ export async function signInWithPassword(request: Request): Promise<SignInResult
       email: parsed.data.email,
     };
   }
+  let user: SessionUser;
   try {
-    const user = await authenticator.authenticate("password", request);
-    return { kind: "ok", user, redirectTo: parsed.data.redirectTo };
+    user = await authenticator.authenticate("password", request);
   } catch (err) {
-    if (!(err instanceof InvalidCredentialsError)) throw err;
-    await recordFailure(key);
+    if (!(err instanceof InvalidCredentialsError)) {
+      await releaseAttempt(gate.attemptId); // the server's fault, not a wrong password
+      throw err;
+    }
+    await purgeFailures();
     return { kind: "refused", message: INVALID_CREDENTIALS_MESSAGE, email: parsed.data.email };
   }
+  await releaseAttempt(gate.attemptId);
+  return { kind: "ok", user, redirectTo: parsed.data.redirectTo };
 }

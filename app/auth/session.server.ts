@@ -1,7 +1,8 @@
-import { createCookieSessionStorage, redirect } from "react-router";
-import { eq } from "drizzle-orm";
+import { randomBytes } from "node:crypto";
+import { createCookie, createSessionStorage, redirect } from "react-router";
+import { and, eq, gt, lt } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
-import { users } from "~/db/schema";
+import { sessions, users } from "~/db/schema";
 import { config } from "~/lib/config.server";
 
 const DEV_SECRET = "loftline-development-secret-change-me";
@@ -22,19 +23,59 @@ function sessionSecret(): string {
 type SessionData = { userId: string; sessionVersion: number };
 type SessionFlash = { notice: string };
 
-let storage: ReturnType<typeof createCookieSessionStorage<SessionData, SessionFlash>> | undefined;
+/** How long a session lasts without signing in again, s (30 days). */
+export const SESSION_MAX_AGE_S = 60 * 60 * 24 * 30;
 
-/** Signed, stateless cookie sessions: httpOnly, SameSite=Lax, Secure in production. */
+let storage: ReturnType<typeof createSessionStorage<SessionData, SessionFlash>> | undefined;
+
+/**
+ * Sessions kept in the database (`sessions`), the signed cookie holding only a random id:
+ * httpOnly, SameSite=Lax, Secure in production. Signing out deletes the row, so a copied cookie
+ * stops working (docs/decisions/0314-server-side-sessions.md).
+ */
 export function sessionStorage() {
-  storage ??= createCookieSessionStorage<SessionData, SessionFlash>({
-    cookie: {
-      name: "__loftline",
+  storage ??= createSessionStorage<SessionData, SessionFlash>({
+    cookie: createCookie("__loftline", {
       httpOnly: true,
       sameSite: "lax",
       path: "/",
       secure: config.isProduction && process.env.LOFTLINE_INSECURE_COOKIE !== "1",
       secrets: [sessionSecret()],
-      maxAge: 60 * 60 * 24 * 30,
+      maxAge: SESSION_MAX_AGE_S,
+    }),
+    async createData(data, expires) {
+      const db = await getDb();
+      const now = Date.now();
+      // Rows past their time are of no use: each new session clears them away.
+      await db.delete(sessions).where(lt(sessions.expiresAt, new Date(now)));
+      const id = randomBytes(32).toString("base64url");
+      await db.insert(sessions).values({
+        id,
+        userId: data.userId ?? null,
+        data: JSON.stringify(data),
+        expiresAt: expires ?? new Date(now + SESSION_MAX_AGE_S * 1000),
+      });
+      return id;
+    },
+    async readData(id) {
+      const db = await getDb();
+      const [row] = await db
+        .select({ data: sessions.data })
+        .from(sessions)
+        .where(and(eq(sessions.id, id), gt(sessions.expiresAt, new Date())));
+      return row ? JSON.parse(row.data) : null;
+    },
+    async updateData(id, data, expires) {
+      const db = await getDb();
+      // Only a session that still exists: one signed out meanwhile stays signed out.
+      await db
+        .update(sessions)
+        .set({ data: JSON.stringify(data), ...(expires ? { expiresAt: expires } : {}) })
+        .where(eq(sessions.id, id));
+    },
+    async deleteData(id) {
+      const db = await getDb();
+      await db.delete(sessions).where(eq(sessions.id, id));
     },
   });
   return storage;
@@ -44,14 +85,19 @@ export async function getSession(request: Request) {
   return sessionStorage().getSession(request.headers.get("Cookie"));
 }
 
-/** Starts a session for the user and redirects, with an optional flash notice. */
+/**
+ * Starts a session for the user and redirects, with an optional flash notice. Always a new
+ * session id: a session the browser had before (perhaps one planted on it) is ended.
+ */
 export async function createUserSession(
   request: Request,
   userId: string,
   redirectTo: string,
   notice?: string,
 ) {
-  const session = await getSession(request);
+  const previous = await getSession(request);
+  if (previous.id) await sessionStorage().destroySession(previous);
+  const session = await sessionStorage().getSession();
   const db = await getDb();
   const [user] = await db
     .select({ sessionVersion: users.sessionVersion })
@@ -65,6 +111,7 @@ export async function createUserSession(
   });
 }
 
+/** Signs out: the session's row is deleted (every copy of the cookie stops working) and the cookie cleared. */
 export async function destroyUserSession(request: Request, redirectTo = "/") {
   const session = await getSession(request);
   throw redirect(redirectTo, {
@@ -79,8 +126,22 @@ export async function redirectWithNotice(request: Request, to: string, notice: s
   return redirect(to, { headers: { "Set-Cookie": await sessionStorage().commitSession(session) } });
 }
 
-/** Only same-site paths: an open redirect would let a link send users anywhere. */
+/**
+ * Only paths on the app's own origin: an open redirect would let a link send users anywhere. The
+ * target is read the way a browser reads a Location (backslashes as slashes, tabs and newlines
+ * dropped) against the app's origin, must stay on that origin, and comes back as a clean path.
+ */
 export function safeRedirect(to: FormDataEntryValue | string | null | undefined, fallback = "/clubs") {
-  if (typeof to !== "string" || !to.startsWith("/") || to.startsWith("//")) return fallback;
-  return to;
+  if (typeof to !== "string" || !to.startsWith("/")) return fallback;
+  const own = new URL(config.appUrl);
+  let url: URL;
+  try {
+    url = new URL(to, own);
+  } catch {
+    return fallback;
+  }
+  if (url.origin !== own.origin) return fallback;
+  const path = url.pathname + url.search + url.hash;
+  // "/..//host" resolves to the path "//host", which a browser would read as another site.
+  return path.startsWith("//") ? fallback : path;
 }

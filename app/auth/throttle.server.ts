@@ -3,8 +3,13 @@
  * from one client address, further attempts are answered 429 until the oldest failures age out.
  * Failures are counted for every address typed, whether or not it has an account, so the throttle
  * itself never tells the two apart. See docs/decisions/0301-sign-in-throttle.md.
+ *
+ * An attempt takes its place in the count before the password is checked, in one statement that
+ * counts and inserts together (reserveAttempt), so parallel guesses cannot all slip under the
+ * limit; a right password then gives its place back (releaseAttempt).
  */
-import { and, asc, eq, gte, lt, or } from "drizzle-orm";
+import { and, asc, eq, gte, lt, or, sql } from "drizzle-orm";
+import { isIPv6 } from "node:net";
 import { getDb } from "~/db/client.server";
 import { signInFailures } from "~/db/schema";
 
@@ -16,57 +21,93 @@ export const FAILURE_WINDOW_MS = 15 * 60 * 1000;
 export type ThrottleKey = { email: string; clientAddress: string | null };
 
 /**
- * The client's address as far as it can be trusted: the header named by CLIENT_ADDRESS_HEADER
- * (e.g. "cf-connecting-ip" or "fly-client-ip", set by the platform's proxy), else the last entry
- * of X-Forwarded-For (the one our own reverse proxy appended). CLIENT_ADDRESS_HEADER=none turns
- * per-address counting off. Returns null when no address is known.
+ * The part of a client address that is counted: an IPv4 address whole, an IPv6 address by its
+ * /64 network (one household or server gets a whole /64, so single addresses cost nothing to
+ * change). Null stays null (no address known: only the e-mail address is counted).
  */
-export function clientAddress(request: Request): string | null {
-  const configured = process.env.CLIENT_ADDRESS_HEADER?.trim().toLowerCase();
-  if (configured === "none") return null;
-  const name = configured || "x-forwarded-for";
-  const raw = request.headers.get(name);
-  if (!raw) return null;
-  const parts = raw
-    .split(",")
-    .map((p) => p.trim())
-    .filter(Boolean);
-  const last = parts[parts.length - 1];
-  // Keep it short and printable: a header is client-controlled text.
-  return last && /^[0-9A-Za-z.:[\]_-]{1,64}$/.test(last) ? last.toLowerCase() : null;
+export function addressKey(address: string | null | undefined): string | null {
+  if (!address) return null;
+  if (!isIPv6(address)) return address;
+  const [head, tail = ""] = address.toLowerCase().split("::");
+  const left = head ? head.split(":") : [];
+  const right = tail ? tail.split(":") : [];
+  const groups = address.includes("::")
+    ? [...left, ...Array(8 - left.length - right.length).fill("0"), ...right]
+    : left;
+  return `${groups
+    .slice(0, 4)
+    .map((g) => g.replace(/^0+(?=.)/, ""))
+    .join(":")}::/64`;
 }
 
-/** Which keys of an attempt count: the e-mail address always, the client address when known. */
-function keyCondition(key: ThrottleKey) {
-  return key.clientAddress
-    ? or(eq(signInFailures.email, key.email), eq(signInFailures.clientAddress, key.clientAddress))
-    : eq(signInFailures.email, key.email);
+export type Reservation =
+  { allowed: true; attemptId: string } | { allowed: false; retryAfterSeconds: number };
+
+/**
+ * Counts an attempt as a failure before its password is checked, unless the e-mail address or
+ * the client address already has MAX_FAILURES in the window: then it is refused, with when to
+ * retry (s, rounded up). The count and the insert are one statement, so they cannot be raced.
+ */
+export async function reserveAttempt(key: ThrottleKey, now = Date.now()): Promise<Reservation> {
+  const db = await getDb();
+  const since = now - FAILURE_WINDOW_MS;
+  const address = addressKey(key.clientAddress);
+  const attemptId = crypto.randomUUID();
+  const inserted = await db.run(sql`
+    INSERT INTO sign_in_failures (id, email, client_address, created_at)
+    SELECT ${attemptId}, ${key.email}, ${address}, ${now}
+    WHERE (SELECT count(*) FROM sign_in_failures
+           WHERE email = ${key.email} AND created_at >= ${since}) < ${MAX_FAILURES}
+      AND (${address} IS NULL OR (SELECT count(*) FROM sign_in_failures
+           WHERE client_address = ${address} AND created_at >= ${since}) < ${MAX_FAILURES})`);
+  if (inserted.rowsAffected === 1) return { allowed: true, attemptId };
+  return { allowed: false, retryAfterSeconds: await retryAfterSeconds(key, now) };
 }
 
 /**
- * Whether an attempt may go ahead. When refused, `retryAfterSeconds` is when the attempt would
- * be allowed again (s), rounded up.
+ * The attempt leaves the count: its password was right (earlier failures stay), or the check
+ * itself failed on the server's side. A wrong password keeps its reservation as its failure.
+ */
+export async function releaseAttempt(attemptId: string): Promise<void> {
+  const db = await getDb();
+  await db.delete(signInFailures).where(eq(signInFailures.id, attemptId));
+}
+
+/**
+ * Whether an attempt would be allowed now, without counting it. When refused,
+ * `retryAfterSeconds` is when it would be allowed again (s), rounded up.
  */
 export async function checkThrottle(
   key: ThrottleKey,
   now = Date.now(),
 ): Promise<{ allowed: true } | { allowed: false; retryAfterSeconds: number }> {
+  const wait = await retryAfterSeconds(key, now);
+  return wait > 0 ? { allowed: false, retryAfterSeconds: wait } : { allowed: true };
+}
+
+/** Seconds until the key is below the limit again; 0 when it is already. */
+async function retryAfterSeconds(key: ThrottleKey, now: number): Promise<number> {
   const db = await getDb();
-  const since = new Date(now - FAILURE_WINDOW_MS);
+  const address = addressKey(key.clientAddress);
   const rows = await db
     .select({
       email: signInFailures.email,
-      clientAddress: signInFailures.clientAddress,
+      address: signInFailures.clientAddress,
       at: signInFailures.createdAt,
     })
     .from(signInFailures)
-    .where(and(keyCondition(key), gte(signInFailures.createdAt, since)))
+    .where(
+      and(
+        address
+          ? or(eq(signInFailures.email, key.email), eq(signInFailures.clientAddress, address))
+          : eq(signInFailures.email, key.email),
+        gte(signInFailures.createdAt, new Date(now - FAILURE_WINDOW_MS)),
+      ),
+    )
     .orderBy(asc(signInFailures.createdAt));
-  // Count each key on its own: 3 failures for the e-mail plus 3 others from the address is not 5.
+  // Each key on its own: 3 failures for the e-mail plus 3 others from the address is not 5.
   const byEmail = rows.filter((r) => r.email === key.email).map((r) => r.at.getTime());
-  const byAddress = key.clientAddress
-    ? rows.filter((r) => r.clientAddress === key.clientAddress).map((r) => r.at.getTime())
-    : [];
+  const byAddress = address ? rows.filter((r) => r.address === address).map((r) => r.at.getTime()) : [];
   let retryAt = 0;
   for (const times of [byEmail, byAddress]) {
     if (times.length >= MAX_FAILURES) {
@@ -74,16 +115,17 @@ export async function checkThrottle(
       retryAt = Math.max(retryAt, times[times.length - MAX_FAILURES] + FAILURE_WINDOW_MS);
     }
   }
-  if (retryAt <= now) return { allowed: true };
-  return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil((retryAt - now) / 1000)) };
+  return retryAt <= now ? 0 : Math.max(1, Math.ceil((retryAt - now) / 1000));
 }
 
-/** Records one failed attempt and purges failures older than the window. */
+/** Records one failed attempt (for tests and tools; sign-in uses reserveAttempt). */
 export async function recordFailure(key: ThrottleKey, now = Date.now()): Promise<void> {
   const db = await getDb();
-  await db
-    .insert(signInFailures)
-    .values({ email: key.email, clientAddress: key.clientAddress, createdAt: new Date(now) });
+  await db.insert(signInFailures).values({
+    email: key.email,
+    clientAddress: addressKey(key.clientAddress),
+    createdAt: new Date(now),
+  });
   await purgeFailures(now);
 }
 

@@ -85,6 +85,22 @@ export const passwordResets = sqliteTable("password_resets", {
   createdAt: createdAt(),
 });
 
+/**
+ * Signed-in browsers (server-side sessions): the cookie carries only the signed id, so deleting
+ * the row (signing out) ends the session for every copy of the cookie. `data` is the session's
+ * JSON (user id, session version, flash notice). See docs/decisions/0314-server-side-sessions.md.
+ */
+export const sessions = sqliteTable(
+  "sessions",
+  {
+    id: text("id").primaryKey(),
+    userId: text("user_id").references(() => users.id, { onDelete: "cascade" }),
+    data: text("data").notNull(),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  },
+  (t) => [index("sessions_user").on(t.userId), index("sessions_expires").on(t.expiresAt)],
+);
+
 /** Failed sign-ins, kept for the throttle window (by e-mail address and by client address). */
 export const signInFailures = sqliteTable(
   "sign_in_failures",

@@ -10,6 +10,7 @@ import { carPreset, SKILL_LEVELS, wordList } from "~/analysis";
 import type { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
+import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import { AnalysisInputError, analyseStoredLayout, overlayFor, parseSkill } from "./analysis.server";
 import { loadLayoutDocument } from "./documents.server";
 
@@ -85,8 +86,10 @@ export async function pageAnalysis(layout: LayoutRow, query: URLSearchParams): P
   } catch (error) {
     if (error instanceof AnalysisInputError)
       return { ...base, result: { ok: false, message: `The layout cannot be analysed: ${error.message}.` } };
-    if (error instanceof RangeError)
+    if (error instanceof RangeError || error instanceof AnalysisBudgetError)
       return { ...base, result: { ok: false, message: `The layout cannot be analysed: ${error.message}.` } };
+    if (error instanceof AnalysisBusyError)
+      return { ...base, result: { ok: false, message: `The analysis is not ready: ${error.message}` } };
     throw error;
   }
 }

@@ -1,9 +1,10 @@
 /**
  * JSON answers of the analysis API: the body text made once per memo entry, the cache header,
- * and 400 answers that name the field.
+ * 400 answers that name the field, 422 over the analysis budget, 429 and 503 when busy.
  */
 import type { CachedBody } from "~/analysis-cache.server";
 import type { LayoutIssue } from "~/analysis";
+import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import { AnalysisInputError } from "./analysis.server";
 
 /** A 400 answer listing every issue, each naming its field. */
@@ -21,6 +22,22 @@ export function badRequest(issues: LayoutIssue[], error?: string): Response {
  */
 export function analysisRefusal(error: unknown, prefix = ""): Response {
   if (error instanceof AnalysisInputError) return badRequest(error.issues);
+  if (error instanceof AnalysisBudgetError) {
+    const issues = error.issues.map((i) => ({
+      path: i.path === "(document)" ? prefix.replace(/\.$/, "") || i.path : prefix + i.path,
+      message: i.message,
+    }));
+    const text = `The analysis is over its limit: ${issues.map((i) => `${i.path} ${i.message}`).join("; ")}.`;
+    return Response.json({ error: text, limit: error.limit, issues }, { status: 422 });
+  }
+  if (error instanceof AnalysisBusyError)
+    return Response.json(
+      { error: error.message },
+      {
+        status: error.scope === "server" ? 503 : 429,
+        headers: { "Retry-After": String(error.retryAfterS) },
+      },
+    );
   if (error instanceof RangeError) {
     const match = /^([A-Za-z][\w.[\]]*): (.+)$/.exec(error.message);
     const issue = match
@@ -41,14 +58,14 @@ export function analysisRefusal(error: unknown, prefix = ""): Response {
  * A JSON body already made, gzip-compressed when the client accepts it, with the memo's hit or
  * miss in X-Analysis-Cache.
  */
-export function jsonText(
+export async function jsonText(
   request: Request,
   body: CachedBody,
   hit: boolean,
   extra: Record<string, string> = {},
-): Response {
+): Promise<Response> {
   const gzip = /\bgzip\b/.test(request.headers.get("Accept-Encoding") ?? "");
-  const bytes = gzip ? body.gzip() : body.bytes;
+  const bytes = gzip ? await body.gzip() : body.bytes;
   return new Response(bytes as Uint8Array<ArrayBuffer>, {
     headers: {
       "Content-Type": "application/json; charset=utf-8",

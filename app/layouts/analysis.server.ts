@@ -1,12 +1,12 @@
 /**
  * Runs the layout analysis for the pages and the API: checks the requested classes and skill,
  * applies the club's track guidance, and goes through the process-wide memo
- * (app/analysis-cache.server.ts) so a repeat costs nothing. The engine's own cache underneath
- * keeps each jump's costly parts, so an edited draft recomputes only what changed.
+ * (app/analysis-cache.server.ts) so a repeat costs nothing. The engine runs in the worker pool
+ * (app/analysis-pool/pool.server.ts), whose workers keep each jump's costly parts, so an edited
+ * draft recomputes only what changed.
  */
-import { createAnalysisCache } from "~/analysis";
-import { CAR_PRESET_IDS, carPreset } from "~/analysis";
-import { analyseLayout } from "~/analysis";
+import { carPreset } from "~/analysis";
+import { runAnalysis } from "~/analysis-pool/pool.server";
 import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis";
 import { buildOverlay } from "~/analysis";
 import {
@@ -23,12 +23,10 @@ import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument, LayoutIssue } from "~/analysis";
+import { analysisInputIssues, KNOWN_CLASSES } from "./document-checks.server";
 import { loadLayoutDocument } from "./documents.server";
 
 type LayoutRow = typeof layouts.$inferSelect;
-
-/** The engine's memo of per-jump work (speed windows, flights, plans), shared by every request. */
-const engineCache = createAnalysisCache(4000);
 
 /** A request that names a field wrongly: answered 400 with the issues. */
 export class AnalysisInputError extends Error {
@@ -37,8 +35,6 @@ export class AnalysisInputError extends Error {
     this.name = "AnalysisInputError";
   }
 }
-
-const KNOWN_CLASSES = CAR_PRESET_IDS.join(", ");
 
 /** Checks a skill level given as text (a query parameter or a JSON field named `field`). */
 export function parseSkill(value: unknown, field: string, fallback: SkillLevel = "club"): SkillLevel {
@@ -58,21 +54,6 @@ export function parseClassId(value: unknown, field: string): string | undefined 
   ]);
 }
 
-/** Every car class the document names must be known to the engine. */
-function checkDocumentClasses(doc: LayoutDocument, prefix: string): void {
-  const issues = doc.carClasses.flatMap((id, i) =>
-    carPreset(id)
-      ? []
-      : [
-          {
-            path: `${prefix}carClasses[${i}]`,
-            message: `"${id}" is not a known car class (known: ${KNOWN_CLASSES})`,
-          },
-        ],
-  );
-  if (issues.length) throw new AnalysisInputError(issues);
-}
-
 export interface AnalysisRun {
   analysis: LayoutAnalysis;
   entry: CacheEntry<LayoutAnalysis>;
@@ -84,13 +65,22 @@ export interface AnalysisRun {
  * Analyses a document (a draft or a stored layout's) for the given classes (default: the
  * document's own) with a club's guidance (default: the document's own set, no overrides).
  * @param fieldPrefix how the document's fields are named in issues ("document." in the API).
- * @throws AnalysisInputError naming the field for an unknown class.
+ * @param owner the account asking (user id), held to its own number of analyses at once.
+ * @throws AnalysisInputError naming the field for an unknown class or a custom jump the engine
+ * cannot fly; the pool's AnalysisBudgetError and AnalysisBusyError.
  */
-export function analyseDocument(
+export async function analyseDocument(
   document: LayoutDocument,
-  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance; fieldPrefix?: string },
-): AnalysisRun {
-  checkDocumentClasses(document, opts.fieldPrefix ?? "");
+  opts: {
+    classIds?: readonly string[];
+    skill: SkillLevel;
+    guidance?: ClubGuidance;
+    fieldPrefix?: string;
+    owner?: string;
+  },
+): Promise<AnalysisRun> {
+  const issues = analysisInputIssues(document, opts.fieldPrefix ?? "");
+  if (issues.length) throw new AnalysisInputError(issues);
   const guidance = opts.guidance ?? { guidanceSet: document.guidance, overrides: {} };
   const inputs: AnalysisInputs = {
     document,
@@ -100,15 +90,15 @@ export function analyseDocument(
     overrides: guidance.overrides,
     ...(guidance.verdict ? { verdict: guidance.verdict } : {}),
   };
-  const { entry, hit } = memoAnalysis(inputs, () =>
-    analyseLayout(
+  const { entry, hit } = await memoAnalysis(inputs, () =>
+    runAnalysis(
       { ...document, guidance: guidance.guidanceSet },
       {
         classIds: inputs.classIds,
         skill: inputs.skill,
         overrides: guidance.overrides,
         thresholds: verdictThresholds(guidance),
-        cache: engineCache,
+        owner: opts.owner,
       },
     ),
   );
@@ -129,11 +119,12 @@ async function fullRow(layout: LayoutRef | LayoutRow): Promise<LayoutRow> {
 /**
  * A stored layout's analysis at its current version with its club's guidance. A warm repeat is
  * answered from the memo by the layout's id and version, without reading the document.
- * @param opts.classIds undefined for the document's own classes; opts.guidance when already read.
+ * @param opts.classIds undefined for the document's own classes; opts.guidance when already read;
+ * opts.owner the account asking (see analyseDocument).
  */
 export async function analyseStoredLayout(
   layout: LayoutRef | LayoutRow,
-  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance },
+  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance; owner?: string },
 ): Promise<AnalysisRun & { guidance: ClubGuidance }> {
   const guidance = opts.guidance ?? (await loadClubGuidance(layout.clubId));
   const aliasOf = (version: number) =>
@@ -142,7 +133,12 @@ export async function analyseStoredLayout(
   if (known) return { analysis: known.value, entry: known, hit: true, guidance };
   const row = await fullRow(layout);
   const { document } = await loadLayoutDocument(row);
-  const run = analyseDocument(document, { classIds: opts.classIds, skill: opts.skill, guidance });
+  const run = await analyseDocument(document, {
+    classIds: opts.classIds,
+    skill: opts.skill,
+    guidance,
+    owner: opts.owner,
+  });
   setAlias(aliasOf(row.version), run.entry.key);
   return { ...run, guidance };
 }

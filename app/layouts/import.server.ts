@@ -10,11 +10,9 @@ import {
   parseFormData,
   type FileUpload,
 } from "@remix-run/form-data-parser";
-import { and, eq } from "drizzle-orm";
-import { getDb } from "~/db/client.server";
-import { files } from "~/db/schema";
 import { ONE_MEGABYTE, readLimitedText } from "~/lib/json-body.server";
 import { parseLayoutDocument, type LayoutDocument, type LayoutIssue } from "~/analysis";
+import { analysisInputIssues, backgroundIssues, documentBudgetIssues } from "./document-checks.server";
 
 /** Largest layout file accepted, bytes. */
 export const MAX_LAYOUT_FILE_BYTES = ONE_MEGABYTE;
@@ -25,7 +23,7 @@ export type ImportReading =
   | { ok: true; document: LayoutDocument; source: ImportField; notes: string[] }
   | {
       ok: false;
-      status: 400 | 413;
+      status: 400 | 413 | 422;
       field: ImportField;
       message: string;
       issues: LayoutIssue[];
@@ -36,7 +34,7 @@ export type ImportReading =
 const TOO_LARGE = `The file is too large: a layout file is at most ${MAX_LAYOUT_FILE_BYTES / ONE_MEGABYTE} MB.`;
 
 function refuse(
-  status: 400 | 413,
+  status: 400 | 413 | 422,
   field: ImportField,
   message: string,
   issues: LayoutIssue[] = [],
@@ -108,19 +106,19 @@ export async function readLayoutImport(request: Request, clubId: string): Promis
   const notes: string[] = [];
   let document = parsed.document;
   // A background photo is a file of one club: from another club (or gone) it is left out.
-  if (document.background && !(await clubOwnsFile(clubId, document.background.fileId))) {
+  if ((await backgroundIssues(document, clubId)).length) {
     const { background: _dropped, ...rest } = document;
     document = rest;
     notes.push("The file's background photo is not one of this club's files, so it was left out.");
   }
+  // What the analysis would refuse is refused here too, so an imported layout can be analysed.
+  const inputs = analysisInputIssues(document);
+  const refusals = [...inputs, ...documentBudgetIssues(document)];
+  if (refusals.length) {
+    const n = refusals.length;
+    const message = `The file is a Loftline layout, but it cannot be analysed: ${n} problem${n === 1 ? "" : "s"} found. Nothing was imported.`;
+    const pasted = read.field === "json" ? read.text : undefined;
+    return refuse(inputs.length ? 400 : 422, read.field, message, refusals, pasted);
+  }
   return { ok: true, document, source: read.field, notes };
-}
-
-async function clubOwnsFile(clubId: string, fileId: string): Promise<boolean> {
-  const db = await getDb();
-  const [row] = await db
-    .select({ id: files.id })
-    .from(files)
-    .where(and(eq(files.id, fileId), eq(files.clubId, clubId)));
-  return Boolean(row);
 }

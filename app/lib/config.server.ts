@@ -21,6 +21,13 @@ export const config = {
   get showDevTools() {
     return process.env.NODE_ENV !== "production" || process.env.LOFTLINE_DEMO === "1";
   },
+  /** Bytes of uploaded files one club may keep (LOFTLINE_CLUB_FILE_QUOTA_MB, default 200 MB). */
+  get clubFileQuotaBytes() {
+    const raw = process.env.LOFTLINE_CLUB_FILE_QUOTA_MB;
+    const mb = raw ? Number(raw) : 200;
+    if (!(mb > 0)) throw new Error(`LOFTLINE_CLUB_FILE_QUOTA_MB must be a number above 0 (got "${raw}")`);
+    return Math.round(mb * 1024 * 1024);
+  },
   get appUrl() {
     return process.env.APP_URL ?? `http://localhost:${process.env.PORT ?? 3000}`;
   },

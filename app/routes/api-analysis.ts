@@ -4,6 +4,7 @@ import { cachedBody } from "~/analysis-cache.server";
 import type { ClubGuidance } from "~/clubs/guidance.server";
 import { loadClubGuidance } from "~/clubs/guidance.server";
 import { analyseDocument, overlayFor, parseClassId, parseSkill } from "~/layouts/analysis.server";
+import { countAnalysisRequest } from "~/layouts/analysis-rate.server";
 import { analysisRefusal, badRequest, jsonText } from "~/layouts/analysis-response.server";
 import { ONE_MEGABYTE, readJsonBody } from "~/lib/json-body.server";
 import { parseLayoutDocument } from "~/analysis";
@@ -22,11 +23,13 @@ export function loader(_: Route.LoaderArgs) {
  * beyond). Answers `{ analysis, overlay }`: every class of the document, or only `classId`; the
  * overlay for `classId` or the first class. With `layoutId` (a layout the user may open) the
  * club's track guidance applies, otherwise the document's own set. Signed-in users only (401);
- * a bad document or field answers 400 with `{ error, issues: [{ path, message }] }`.
+ * a bad document or field answers 400 with `{ error, issues: [{ path, message }] }`; over the
+ * work budget 422 naming the limit; too many requests of the account 429; a full queue 503.
  */
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return loader({} as Route.LoaderArgs);
-  await requireUser(request, { api: true });
+  const user = await requireUser(request, { api: true });
+  await countAnalysisRequest(user.id);
   const body = await readJsonBody(request, ONE_MEGABYTE);
   if (typeof body !== "object" || body === null || Array.isArray(body))
     return badRequest([{ path: "(body)", message: "must be a JSON object { document, classId?, skill? }" }]);
@@ -50,17 +53,18 @@ export async function action({ request }: Route.ActionArgs) {
       const { layout } = await requireLayoutAccess(request, input.layoutId, "member", { api: true });
       guidance = await loadClubGuidance(layout.clubId);
     }
-    const run = analyseDocument(parsed.document, {
+    const run = await analyseDocument(parsed.document, {
       classIds: classId ? [classId] : undefined,
       skill,
       guidance,
       fieldPrefix: "document.",
+      owner: user.id,
     });
     const text = cachedBody(run.entry, "post", () => ({
       analysis: run.analysis,
       overlay: overlayFor(run, classId, skill),
     }));
-    return jsonText(request, text, run.hit);
+    return await jsonText(request, text, run.hit);
   } catch (error) {
     if (error instanceof Response) throw error;
     return analysisRefusal(error, "document.");

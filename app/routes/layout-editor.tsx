@@ -9,6 +9,7 @@ import {
   StaleVersionError,
 } from "~/layouts/documents.server";
 import { parseSaveRequest } from "~/lib/editor/save-request";
+import { describeFirstIssue, refuseDocument } from "~/layouts/document-checks.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `Edit ${data?.layout.name ?? "layout"} · Loftline` },
@@ -32,7 +33,9 @@ const MAX_BODY_BYTES = 5 * 1024 * 1024;
 /**
  * Saves the drawing as a new version ("save", naming the version it started from; 409 when someone
  * saved meanwhile) or as a new layout ("save-copy"). Answers JSON, never throws at the editor: 400
- * naming the field, 401 signed out, 403 for other roles, 409 stale, 413 too large, 415 wrong type.
+ * naming the field (also what the analysis would refuse: an unknown class, a jump that cannot be
+ * flown, another club's photo), 401 signed out, 403 for other roles, 409 stale, 413 too large,
+ * 415 wrong type, 422 over the analysis budget.
  */
 export async function action({ request, params }: Route.ActionArgs) {
   try {
@@ -52,6 +55,18 @@ export async function action({ request, params }: Route.ActionArgs) {
         { status: 400 },
       );
     const { intent, document, baseVersion, note } = parsed.request;
+    // The same checks as the analysis and the import: known classes, flyable jumps, the club's photo, the budget.
+    const refused = await refuseDocument(document, club.id);
+    if (refused)
+      return data(
+        {
+          ok: false as const,
+          error: `Not saved: ${describeFirstIssue(refused.issues)}.`,
+          issues: refused.issues,
+          field: refused.issues[0].path,
+        },
+        { status: refused.status },
+      );
     if (intent === "save-copy") {
       const copy = await createLayoutFromDocument(
         club.id,

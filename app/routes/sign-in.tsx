@@ -12,6 +12,12 @@ import { config } from "~/lib/config.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Sign in · Loftline" }];
 
+// An action's headers reach the answer only through this: the throttle's Retry-After with its 429.
+export const headers: Route.HeadersFunction = ({ actionHeaders }) => {
+  const retryAfter = actionHeaders.get("Retry-After");
+  return retryAfter ? { "Retry-After": retryAfter } : new Headers();
+};
+
 export async function loader({ request }: Route.LoaderArgs) {
   const redirectTo = new URL(request.url).searchParams.get("redirectTo") ?? undefined;
   if (await getUser(request)) throw redirect(safeRedirect(redirectTo));
@@ -23,8 +29,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 type ActionData = { errors?: FieldErrors; formError?: string; email: string };
 
-export async function action({ request }: Route.ActionArgs) {
-  const result = await signInWithPassword(request);
+export async function action({ request, context }: Route.ActionArgs) {
+  const result = await signInWithPassword(request, context?.clientAddress ?? null);
   switch (result.kind) {
     case "invalid":
       return data<ActionData>({ errors: result.errors, email: result.email }, { status: 400 });

@@ -5,9 +5,10 @@ import {
   parseFormData,
   type FileUpload,
 } from "@remix-run/form-data-parser";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { files } from "~/db/schema";
+import { config } from "~/lib/config.server";
 import { fileStore } from "./storage.server";
 
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
@@ -32,9 +33,32 @@ function fail(status: number, field: string, message: string): Response {
   return Response.json({ error: message, field, errors: { [field]: [message] } }, { status });
 }
 
+const MB = 1024 * 1024;
+const megabytes = (bytes: number) => `${(bytes / MB).toFixed(bytes < 10 * MB ? 1 : 0)} MB`;
+
+/** Bytes of the club's stored files. */
+export async function clubFileBytes(clubId: string): Promise<number> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ bytes: sql<number>`coalesce(sum(${files.size}), 0)` })
+    .from(files)
+    .where(eq(files.clubId, clubId));
+  return Number(row?.bytes ?? 0);
+}
+
+function overQuota(field: string, used: number): Response {
+  const quota = config.clubFileQuotaBytes;
+  return fail(
+    413,
+    field,
+    `The club's files would go over its storage quota of ${megabytes(quota)} (${megabytes(used)} used). Delete layouts you no longer need: photos no saved version uses are removed by the site's clean-up.`,
+  );
+}
+
 /**
- * Reads one uploaded file from a multipart request, refusing anything too large (413), of the wrong
- * type (415) or missing (400), stores it, and records it in the files table.
+ * Reads one uploaded file from a multipart request, refusing anything too large (413), over the
+ * club's storage quota (413), of the wrong type (415) or missing (400), stores it, and records it
+ * in the files table.
  * @returns the stored file's id and content type; throws a JSON Response on bad input.
  */
 export async function receiveUpload(
@@ -46,6 +70,8 @@ export async function receiveUpload(
   if (declared > kind.maxBytes + 64 * 1024) {
     throw fail(413, kind.field, `The file is too large: at most ${kind.maxBytes / (1024 * 1024)} MB.`);
   }
+  const usedBefore = await clubFileBytes(owner.clubId);
+  if (usedBefore >= config.clubFileQuotaBytes) throw overQuota(kind.field, usedBefore);
   if (!(request.headers.get("Content-Type") ?? "").startsWith("multipart/form-data")) {
     throw fail(400, kind.field, "Send the file as a multipart form upload.");
   }
@@ -80,21 +106,27 @@ export async function receiveUpload(
   const storageKey = `${owner.clubId}/${id}.${type.ext}`;
   await fileStore().put(storageKey, upload.bytes);
   const db = await getDb();
+  const size = upload.bytes.length;
+  let inserted: number;
   try {
-    await db.insert(files).values({
-      id,
-      clubId: owner.clubId,
-      storageKey,
-      contentType: upload.type,
-      size: upload.bytes.length,
-      originalName: upload.name.slice(0, 200),
-      createdBy: owner.userId,
-    });
+    // One statement sums the club's files and inserts only within the quota, so parallel uploads
+    // cannot all slip under it (docs/decisions/0304-single-statement-writes.md).
+    const result = await db.run(sql`
+      INSERT INTO files (id, club_id, storage_key, content_type, size, original_name, created_by, created_at)
+      SELECT ${id}, ${owner.clubId}, ${storageKey}, ${upload.type}, ${size}, ${upload.name.slice(0, 200)},
+             ${owner.userId}, ${Date.now()}
+      WHERE (SELECT coalesce(sum(size), 0) FROM files WHERE club_id = ${owner.clubId}) + ${size}
+            <= ${config.clubFileQuotaBytes}`);
+    inserted = result.rowsAffected;
   } catch (err) {
     await fileStore().delete(storageKey);
     throw err;
   }
-  return { fileId: id, contentType: upload.type, size: upload.bytes.length, fields };
+  if (inserted !== 1) {
+    await fileStore().delete(storageKey);
+    throw overQuota(kind.field, await clubFileBytes(owner.clubId));
+  }
+  return { fileId: id, contentType: upload.type, size, fields };
 }
 
 /** A stored file's bytes and metadata, or null. */

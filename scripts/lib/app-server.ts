@@ -6,12 +6,16 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import net from "node:net";
 import path from "node:path";
+import { WORKER_BUNDLE } from "../build-analysis-worker";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
 const SERVER_ENTRY = path.join(ROOT, "build/server/index.js");
+/** The project's own server (server/index.ts), bundled by `npm run build`. */
+const SERVE_ENTRY = path.join(ROOT, "build/serve/index.js");
 /** What the build depends on besides node_modules. */
 const SOURCES = [
   "app",
+  "server",
   "public",
   "package-lock.json",
   "vite.config.ts",
@@ -28,28 +32,30 @@ function newestMtime(p: string): number {
   return newest;
 }
 
-/** True when build/ is missing or older than any source file. */
+/** True when build/ (the server or its analysis worker) is missing or older than any source file. */
 export function buildIsStale(): boolean {
-  if (!fs.existsSync(SERVER_ENTRY)) return true;
-  const built = fs.statSync(SERVER_ENTRY).mtimeMs;
+  const outputs = [SERVER_ENTRY, SERVE_ENTRY, WORKER_BUNDLE];
+  if (!outputs.every((f) => fs.existsSync(f))) return true;
+  const built = Math.min(...outputs.map((f) => fs.statSync(f).mtimeMs));
   return SOURCES.some((s) => newestMtime(path.join(ROOT, s)) > built);
 }
 
 /**
- * Runs `react-router build` when the build is stale (or always with `force`). Returns the seconds
- * it took, or null when the build was already current. Throws when the build fails.
+ * Runs `npm run build` (the app, the analysis worker's bundle, then the server entry) when the build
+ * is stale (or always with `force`). Returns the seconds it took, or null when the build was already
+ * current. Throws when the build fails.
  */
 export function buildApp({ force = false, quiet = false } = {}): number | null {
   if (!force && !buildIsStale()) return null;
   const started = performance.now();
-  const result = spawnSync(path.join(ROOT, "node_modules/.bin/react-router"), ["build"], {
+  const result = spawnSync("npm", ["run", "--silent", "build"], {
     cwd: ROOT,
     stdio: quiet ? "pipe" : "inherit",
     env: { ...process.env, NODE_ENV: "production" },
   });
   if (result.status !== 0) {
     if (quiet) process.stderr.write(String(result.stdout ?? "") + String(result.stderr ?? ""));
-    throw new Error(`react-router build failed (exit ${result.status})`);
+    throw new Error(`npm run build failed (exit ${result.status})`);
   }
   return (performance.now() - started) / 1000;
 }
@@ -69,8 +75,8 @@ export async function freePort(): Promise<number> {
 export type AppServer = { url: string; child: ChildProcess; stop: () => Promise<void> };
 
 /**
- * Starts the built app with react-router-serve (the binary itself, not an npx wrapper, so that
- * stopping it stops the server) and resolves once it answers HTTP.
+ * Starts the built app with the project's server entry (node itself, not an npm wrapper, so that
+ * stopping the child stops the server) and resolves once it answers HTTP.
  */
 export async function startAppServer(opts: {
   port: number;
@@ -78,7 +84,7 @@ export async function startAppServer(opts: {
   output?: "inherit" | "ignore";
   timeoutMs?: number;
 }): Promise<AppServer> {
-  const child = spawn(path.join(ROOT, "node_modules/.bin/react-router-serve"), [SERVER_ENTRY], {
+  const child = spawn(process.execPath, [SERVE_ENTRY], {
     cwd: ROOT,
     env: { ...process.env, ...opts.env, PORT: String(opts.port) },
     stdio: ["ignore", opts.output ?? "inherit", "inherit"],

@@ -1,6 +1,6 @@
 // The engine's input format: the layout document, car profiles and class presets.
 export * from "./layout-document";
-export { crossFieldIssues } from "./layout-document-checks";
+export { crossFieldIssues, takeoffIssues } from "./layout-document-checks";
 export * from "./car-schema";
 export * from "./cars";
 export * from "./starter-layout";

@@ -104,3 +104,30 @@ function customProfileIssues(s: CustomJumpSection, i: number): { path: RawPath; 
     });
   return out;
 }
+
+/**
+ * Custom jumps the flight model cannot fly: where the ground just after the lip rises more steeply
+ * than the face before it, a car launched along the face would be inside the ground at once
+ * (flight.ts refuses such a takeoff). Kept out of the schema so stored documents still load; the
+ * server runs it before saving, importing or analysing. Paths are the document's own fields.
+ * @returns one issue per such jump, naming its `lipIndex`.
+ */
+export function takeoffIssues(
+  doc: Pick<LayoutDocumentFields, "sections">,
+): { path: string; message: string }[] {
+  const out: { path: string; message: string }[] = [];
+  doc.sections.forEach((s, i) => {
+    if (s.kind !== "jump" || s.preset !== "custom") return;
+    const p = s.profile;
+    const k = s.lipIndex;
+    if (k < 1 || k + 1 >= p.length) return; // the schema's own checks report these
+    const face = (p[k][1] - p[k - 1][1]) / (p[k][0] - p[k - 1][0]);
+    const after = (p[k + 1][1] - p[k][1]) / (p[k + 1][0] - p[k][0]);
+    if (after > face + 1e-9)
+      out.push({
+        path: `sections[${i}].lipIndex`,
+        message: `is not a takeoff: the ground after profile point ${k} rises more steeply than the face before it, so no car can leave the ground there (put the lip at the top of the face)`,
+      });
+  });
+  return out;
+}

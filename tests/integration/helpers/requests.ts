@@ -81,7 +81,11 @@ function isDataWithResponseInit(v: unknown): v is DataWithInit {
   return typeof v === "object" && v !== null && (v as { type?: string }).type === "DataWithResponseInit";
 }
 
-/** Route args for a loader/action call. */
-export function args(request: Request, params: Record<string, string> = {}) {
-  return { request, params, context: {} } as never;
+/** Route args for a loader/action call; `context` is what the server entry would give. */
+export function args(
+  request: Request,
+  params: Record<string, string> = {},
+  context: { clientAddress?: string | null } = {},
+) {
+  return { request, params, context } as never;
 }
