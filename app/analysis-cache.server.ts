@@ -22,6 +22,8 @@ export interface AnalysisInputs {
   skill: SkillLevel;
   guidance: GuidanceSetId;
   overrides: GuidanceOverrides;
+  /** The club's own verdict values, when it set any. */
+  verdict?: { minGainPerPass?: number; minNoseTurnDeg?: number };
 }
 
 /** JSON with object keys sorted at every level, so equal inputs give equal text. */
@@ -43,6 +45,7 @@ export function analysisKey(inputs: AnalysisInputs): string {
     skill: inputs.skill,
     guidance: inputs.guidance,
     overrides: inputs.overrides,
+    ...(inputs.verdict ? { verdict: inputs.verdict } : {}),
   });
   return createHash("sha256").update(text).digest("hex");
 }

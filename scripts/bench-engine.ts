@@ -4,6 +4,9 @@
  * - allocation inside the integrator's loop (target: none; measured as heap bytes per step),
  * - a complete mid-air set-up plan with timing windows and three success rates (target: under
  *   15 ms; aim about 4 ms),
+ * - a complete joint plan as the layout analysis asks for it: the brake pulse searched with the
+ *   steering, world-frame angles from the face angle, what a turn is worth, the driver's steering,
+ *   pulse and takeoff-speed errors, and what turning alone would give (target: under 15 ms),
  * - for information: one jump flight and one speed window.
  */
 import { spawnSync } from "node:child_process";
@@ -129,6 +132,37 @@ report(
   "set-up plan, slowest of the 12 cases (its median)",
   `${Math.max(...planTimes).toFixed(2)} ms`,
   "(4 classes x airtimes 0.5, 0.8, 1.1 s)",
+);
+
+// 3b. Joint plans as the layout analysis asks for them (pulse and steering together, every error).
+const jointCases = CAR_PRESET_IDS.flatMap((id) =>
+  [
+    { speed: 6.5, airtime: 0.69, pitchDeg: -50, faceDeg: 30, turn: "left" as const },
+    { speed: 8.9, airtime: 1.06, pitchDeg: -57, faceDeg: 35, turn: "left" as const },
+    { speed: 5.6, airtime: 0.56, pitchDeg: -52, faceDeg: 27, turn: "right" as const },
+  ].map((j) => ({
+    car: CAR_PRESETS[id],
+    speed: j.speed,
+    airtime: j.airtime,
+    turn: j.turn,
+    turnAngleRad: rad(45),
+    pitchChangeRad: rad(j.pitchDeg),
+    takeoffPitchRad: rad(j.faceDeg),
+    airtimePerSpeed: 0.2,
+    value: { secondsPerRad: 3 / 5.5, failCost: 3, minYawRad: rad(10) },
+  })),
+);
+const jointTimes = jointCases.map((c) => time(() => planAirSetup(c), 9, 3, 3));
+const jointMedian = median(jointTimes);
+report(
+  "joint plan: pulse with steering, every error, turn alone (median)",
+  `${jointMedian.toFixed(2)} ms`,
+  jointMedian < 15 ? "target < 15 ms: met" : "target < 15 ms: MISSED",
+);
+report(
+  "joint plan, slowest of the 12 cases (its median)",
+  `${Math.max(...jointTimes).toFixed(2)} ms`,
+  "(4 classes x the summer layout's 3 jumps into hairpins)",
 );
 
 // 4. Flight, for information.

@@ -20,26 +20,35 @@
  *   angularMomentumDrift, finalRates, finalQuaternion, series? }`.
  *
  * Mid-air set-up plan (air-plan.ts)
- * - `planAirSetup({ car, speed, airtime, turn: "left" | "right", rollToleranceRad?, maxYawRad?,
- *   turnAngleRad?, pitchChangeRad?, seed?, skillSigmas? })` -> `{ feasible, reason, steering:
- *   [t, rad][], rearWheelAccel: [t, rad/s^2][], yawRad, pitchRad, rollRad, targetYawRad,
- *   pitchPulse: { kind: "brake" | "throttle" | "none", start, duration, wheelAccel, limited },
- *   switches: [{ t, earlyMs, lateMs }], timingWindowMs, successRate: { novice, club, expert } }`.
- *   Steering is in radians here; the command line prints degrees. `nutationPeriod(car, speed)` s:
- *   the plan starts away from the turn on flights shorter than about 0.6 of it.
+ * - `planAirSetup({ car, speed, airtime, turn: "left" | "right", rollToleranceRad?,
+ *   pitchToleranceRad?, maxYawRad?, turnAngleRad?, pitchChangeRad?, takeoffPitchRad?,
+ *   airtimePerSpeed? (s per m/s), value?: { secondsPerRad, failCost, minYawRad? }, rankFor?, seed?,
+ *   skillSigmas? (s), speedSigmas? (m/s) })` -> `{ feasible, reason, steering: [t, rad][],
+ *   rearWheelAccel: [t, rad/s^2][], yawRad, pitchRad, rollRad, targetYawRad, pitchAimRad,
+ *   pitchPulse: { kind, start, duration, wheelAccel, strength, limited, stopsWheels }, switches,
+ *   pulseSwitches: [{ t, earlyMs, lateMs }], timingWindowMs, successRate, successAlone: { steering,
+ *   pulse, speed }, mainError, withoutLevelling, tradeOff }`: pulse and steering searched together,
+ *   the driver's timing and takeoff-speed errors sampled. Steering is in radians here; the command
+ *   line prints degrees. `nutationPeriod(car, speed)` s: the plan starts away from the turn on
+ *   flights shorter than about 0.6 of it.
+ * - `analyseWhoops(section, faceAngleRad, approachSpeed m/s, drag?, g?)` -> the ways through a
+ *   whoops row (skim, doubles, triples, roll) with the speed each needs (m/s).
  *
  * Track length saved and the verdict (verdict.ts)
  * - `landsIntoTurn(distanceToTurn, landingSpeed, lookaheadS = 0.5)`,
  *   `trackLengthSaved(radius, psi, turnAngle)` m, `timeSaved(radius, psi, turnAngle, entrySpeed)` s,
  *   `expectedGain(successRate, timeSaved, failCost = 3)` s,
- *   `jumpVerdict({ landsIntoTurn, turnAngle, airtime, expectedGain, planFeasible? })`
- *   -> `{ verdict: "set-up" | "straight", reason }`; the sentences drivers read are written by
- *   `describeVerdicts` (jump-verdicts.ts) from the words below.
+ *   `jumpVerdict({ landsIntoTurn, turnAngle, airtime, expectedGain, planReason?, noseTurn?,
+ *   noseTurnUnlevelled?, thresholds? })` -> `{ verdict: "set-up" | "straight", reason }` (reasons
+ *   are data; the sentences drivers read, with their numbers, are written by `describeVerdicts`
+ *   (jump-verdicts.ts, verdict-text.ts) from the words below). `DEFAULT_VERDICT_THRESHOLDS`:
+ *   smallest turn 20 deg, airtime 0.3 s, worthwhile gain 0.05 s a pass, nose turn 10 deg, failure 3 s.
  *
  * The product's words (words.ts): `SKILL_LEVELS` / `SKILL_LABELS` / `skillPhrase`, `JUMP_PRESETS` /
  * `JUMP_PRESET_LABELS`, `SURFACES` / `SURFACE_LABELS`, `GUIDANCE_SET_IDS` / `GUIDANCE_SET_LABELS`,
- * `VERDICT_KINDS` / `VERDICT_WORDS` / `verdictKind`, `REASON_TEXT`, `quotedList`. Defined once;
- * every screen, message and command imports them from here.
+ * `VERDICT_KINDS` / `VERDICT_WORDS` / `verdictKind`, `REASON_TEXT`, `ERROR_SOURCES` / `ERROR_WORDS`,
+ * `WHOOPS_TECHNIQUES` / `WHOOPS_WORDS`, `quotedList`. Defined once; every screen, message and
+ * command imports them from here.
  *
  * Car classes (cars.ts)
  * - `CAR_PRESETS` by id ("buggy-2wd-10", "buggy-4wd-10", "sct-10", "buggy-8"), `CAR_PRESET_IDS`,
@@ -68,10 +77,11 @@ export { rad, deg, DEG_PER_RAD, RAD_PER_DEG } from "./math/vec";
 /*
  * Layout analysis (layout-analysis.ts, jump-analysis.ts, overlay.ts, analysis-cache.ts)
  * - `analyseLayout(doc, { classIds?, skill?, guidance?, overrides?, cache?, cars?, skillSigmas?,
- *   lookaheadS?, failCost?, seed?, marshal? })` -> `LayoutAnalysis` (plain JSON data: lap length,
- *   closure, plan checks, rule report with the jump rules, per class: lap time, speed along the
- *   downsampled line, jumps with flight, window, EFH, landing turn, set-up plan and a verdict per
- *   skill level; angles in deg; `risk`: the marshal plan when `marshal` settings are given).
+ *   speedSigmas?, thresholds?, lookaheadS?, failCost?, seed?, marshal? })` -> `LayoutAnalysis`
+ *   (plain JSON data: lap length, closure, plan checks, rule report with the jump rules, per class:
+ *   lap time, speed along the downsampled line, jumps with flight, window, EFH, landing turn,
+ *   set-up plan, whoops ways and a verdict per skill level; angles in deg; `risk`: the marshal
+ *   plan when `marshal` settings are given).
  * - `analyseJump(context, options)` -> `JumpAnalysis` for one jump and one car class.
  * - `buildOverlay(analysis, classId, skill?)` -> `AnalysisOverlay` (app/lib/analysis-overlay.ts).
  * - `createAnalysisCache(maxEntries?)` -> an LRU memo (`memo`, `stats`, `clear`); `cacheKey`,

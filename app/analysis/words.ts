@@ -1,9 +1,9 @@
 /**
  * The product's words for what the engine works with, each defined once: driver skill levels,
- * jump presets, surfaces, track guidance sets and the verdict kinds with their reasons. The
- * editor, the pages, the command line and the e-mails import them through `~/analysis`; the
- * layout file format, the rule checks and the verdicts are built on the same lists, so an id and
- * its word cannot drift apart (docs/decisions/0020-product-words-once.md).
+ * jump presets, surfaces, track guidance sets, the verdict kinds with their reasons, the driver's
+ * errors and the ways through a whoops row. The editor, the pages, the command line and the
+ * e-mails import them through `~/analysis`; the layout file format, the rule checks and the
+ * verdicts are built on the same lists, so an id and its word cannot drift apart (docs/decisions/0020-product-words-once.md).
  *
  * Plain data, no imports: every part of the engine may depend on this file.
  */
@@ -101,28 +101,87 @@ export const VERDICT_WORDS: Record<VerdictKind, string> = {
 };
 
 /**
- * Why a jump is best taken straight (or cannot be cleared):
+ * Why a jump is best taken straight (or cannot be cleared), as data; the first that applies, in
+ * this order (verdict/verdict.ts decides the first ten, the analysis the last three):
  * - "no-turn": no turn starts close enough to the landing;
- * - "turn-too-gentle": the turn after the landing is too gentle to gain anything;
- * - "not-enough-airtime": the car is not in the air long enough to turn it;
- * - "too-risky": at this skill level a set-up costs more than it saves;
+ * - "turn-too-gentle": the turn is gentler than the smallest worth a set-up;
+ * - "not-enough-airtime": the flight is too short to steer in;
+ * - "no-wheel-spin", "no-useful-yaw", "cannot-land-flat", "levelling-costs-turn": the plan's own
+ *   outcome (no spin to steer with; no steering turns the nose toward the turn; none lands it flat;
+ *   the pulse that levels the car leaves too little turn, though turning alone would give enough);
+ * - "nose-turn-too-small": the plan turns the nose less than the smallest worth a set-up;
+ * - "too-risky": the failed landings cost more than the clean ones save (expected gain <= 0);
+ * - "gain-too-small": the expected gain is positive but under the smallest worth a set-up;
  * - "cannot-clear": the approach is too short to reach the landing;
- * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it).
+ * - "flown-over": another jump's flight passes over this jump's lip (the car never touches it);
+ * - "whoops": a whoops row, skimmed, jumped through or rolled (the way through: WHOOPS_WORDS).
  */
 export type JumpReason =
-  "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky" | "cannot-clear" | "flown-over";
+  | "no-turn"
+  | "turn-too-gentle"
+  | "not-enough-airtime"
+  | "no-wheel-spin"
+  | "no-useful-yaw"
+  | "cannot-land-flat"
+  | "levelling-costs-turn"
+  | "nose-turn-too-small"
+  | "too-risky"
+  | "gain-too-small"
+  | "cannot-clear"
+  | "flown-over"
+  | "whoops";
 
-/** Each reason in a few plain words, shown after the verdict's word ("flown-over" also names the other jump). */
+/**
+ * Each reason in a few plain words, shown after the verdict's word ("flown-over" also names the
+ * other jump, "whoops" the way through).
+ */
 export const REASON_TEXT: Record<JumpReason, string> = {
   "no-turn": "no turn at the landing",
   "turn-too-gentle": "turn too gentle",
   "not-enough-airtime": "not enough airtime",
-  "too-risky": "too risky at this skill",
+  "no-wheel-spin": "no wheel spin to steer with",
+  "no-useful-yaw": "no steering turns the nose",
+  "cannot-land-flat": "no steering lands it flat",
+  "levelling-costs-turn": "levelling the car costs the turn",
+  "nose-turn-too-small": "the nose turns too little",
+  "too-risky": "the gain is smaller than the risk",
+  "gain-too-small": "the gain is too small",
   "cannot-clear": "the approach is too short",
   "flown-over": "flown over",
+  whoops: "whoops row",
 };
 
 /** The kind of a verdict: its own, except that a jump the approach cannot clear stands apart. */
 export function verdictKind(v: { verdict: "set-up" | "straight"; reason: JumpReason | null }): VerdictKind {
   return v.reason === "cannot-clear" ? "cannot-clear" : v.verdict;
 }
+
+// The driver's errors ---------------------------------------------------------------------------
+
+/**
+ * The driver's errors a set-up's success rate samples: the timing of the steering switches, the
+ * timing of the brake or throttle pulse, and the takeoff speed (docs/decisions/0111).
+ */
+export const ERROR_SOURCES = ["steering", "pulse", "speed"] as const;
+export type ErrorSource = (typeof ERROR_SOURCES)[number];
+
+/** The driver's errors as the pages name them. */
+export const ERROR_WORDS: Record<ErrorSource, string> = {
+  steering: "the timing of the steering",
+  pulse: "the timing of the brake or throttle",
+  speed: "the takeoff speed (it sets the airtime)",
+};
+
+// Whoops ---------------------------------------------------------------------------------------
+
+/** Ways through a whoops row, fastest first (docs/decisions/0112). */
+export const WHOOPS_TECHNIQUES = ["skim", "triples", "doubles", "roll"] as const;
+export type WhoopsTechnique = (typeof WHOOPS_TECHNIQUES)[number];
+
+/** Ways through a whoops row in words. */
+export const WHOOPS_WORDS: Record<WhoopsTechnique, string> = {
+  skim: "skim over the tops",
+  triples: "jump through in triples",
+  doubles: "jump through in doubles",
+  roll: "roll through bump by bump",
+};

@@ -1,16 +1,39 @@
 /**
  * A club's track guidance for the rule checks: the chosen set ("club" or "national") and the
- * club's own values for some rules, stored in clubs.guidance_set and clubs.guidance_overrides.
+ * club's own values for some rules, stored in clubs.guidance_set and clubs.guidance_overrides;
+ * and the club's own values for the set-up verdicts (smallest worthwhile gain and turn of the
+ * nose), stored under "verdict" in the same JSON (no migration: decision 0110).
  */
 import { eq } from "drizzle-orm";
-import { GUIDANCE_SET_IDS, type GuidanceOverrides, type GuidanceSetId } from "~/analysis";
+import {
+  GUIDANCE_SET_IDS,
+  type GuidanceOverrides,
+  type GuidanceSetId,
+  type VerdictThresholds,
+} from "~/analysis";
 import { getDb } from "~/db/client.server";
 import { clubs } from "~/db/schema";
-import { storedOverridesSchema } from "~/lib/schemas/club-settings";
+import {
+  storedOverridesSchema,
+  storedVerdictSchema,
+  type VerdictSettings,
+} from "~/lib/schemas/club-settings";
 
 export interface ClubGuidance {
   guidanceSet: GuidanceSetId;
   overrides: GuidanceOverrides;
+  /** The club's verdict values, when it set any (s, deg). */
+  verdict?: VerdictSettings;
+}
+
+/** The club's verdict values as the engine's thresholds (SI, radians); undefined for none. */
+export function verdictThresholds(g: ClubGuidance): Partial<VerdictThresholds> | undefined {
+  const v = g.verdict;
+  if (!v) return undefined;
+  return {
+    ...(v.minGainPerPass === undefined ? {} : { minGainPerPass: v.minGainPerPass }),
+    ...(v.minNoseTurnDeg === undefined ? {} : { minNoseTurn: (v.minNoseTurnDeg * Math.PI) / 180 }),
+  };
 }
 
 /** Reads stored values defensively: an unknown set falls back to "club", bad overrides to none. */
@@ -19,17 +42,21 @@ export function readGuidance(row: { guidanceSet: string; guidanceOverrides: stri
     ? (row.guidanceSet as GuidanceSetId)
     : "club";
   let overrides: GuidanceOverrides = {};
+  let verdict: VerdictSettings | undefined;
   try {
-    const parsed = storedOverridesSchema.safeParse(JSON.parse(row.guidanceOverrides));
+    const stored = JSON.parse(row.guidanceOverrides);
+    const parsed = storedOverridesSchema.safeParse(stored);
     if (parsed.success) overrides = stripUndefined(parsed.data);
+    const v = storedVerdictSchema.safeParse(stored?.verdict);
+    if (v.success && Object.values(v.data).some((x) => x !== undefined)) verdict = stripUndefined(v.data);
   } catch {
     // Not JSON: treated as no overrides; the settings page shows the set's values and a save repairs it.
   }
-  return { guidanceSet, overrides };
+  return verdict ? { guidanceSet, overrides, verdict } : { guidanceSet, overrides };
 }
 
-function stripUndefined(o: GuidanceOverrides): GuidanceOverrides {
-  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as GuidanceOverrides;
+function stripUndefined<T extends object>(o: T): T {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as T;
 }
 
 /** The club's guidance (the defaults when the club does not exist). */
@@ -49,7 +76,10 @@ export async function saveClubGuidance(clubId: string, guidance: ClubGuidance): 
     .update(clubs)
     .set({
       guidanceSet: guidance.guidanceSet,
-      guidanceOverrides: JSON.stringify(stripUndefined(guidance.overrides)),
+      guidanceOverrides: JSON.stringify({
+        ...stripUndefined(guidance.overrides),
+        ...(guidance.verdict ? { verdict: stripUndefined(guidance.verdict) } : {}),
+      }),
     })
     .where(eq(clubs.id, clubId));
 }

@@ -17,7 +17,7 @@ import {
   type AnalysisInputs,
   type CacheEntry,
 } from "~/analysis-cache.server";
-import { loadClubGuidance, type ClubGuidance } from "~/clubs/guidance.server";
+import { loadClubGuidance, verdictThresholds, type ClubGuidance } from "~/clubs/guidance.server";
 import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
@@ -88,6 +88,7 @@ export async function analyseDocument(
     skill: opts.skill,
     guidance: guidance.guidanceSet,
     overrides: guidance.overrides,
+    ...(guidance.verdict ? { verdict: guidance.verdict } : {}),
   };
   const { entry, hit } = await memoAnalysis(inputs, () =>
     runAnalysis(
@@ -96,6 +97,7 @@ export async function analyseDocument(
         classIds: inputs.classIds,
         skill: inputs.skill,
         overrides: guidance.overrides,
+        thresholds: verdictThresholds(guidance),
         owner: opts.owner,
       },
     ),

@@ -20,6 +20,7 @@ import {
   clubSettingsSchema,
   RULE_FIELDS,
   settingsFromForm,
+  VERDICT_FIELDS,
 } from "~/lib/schemas/club-settings";
 import { LIST_FIELDS } from "~/lib/schemas/layouts";
 import { loadClubCarClasses, saveClubCarClasses } from "~/clubs/car-classes.server";
@@ -87,7 +88,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   throw await redirectWithNotice(
     request,
     `/clubs/${club.id}/settings`,
-    "Track guidance saved. Every layout's rule checks now use it.",
+    "Track guidance saved. Every layout's rule checks and set-up verdicts now use it.",
   );
 }
 
@@ -100,6 +101,8 @@ export default function ClubSettings({ loaderData, actionData }: Route.Component
   const chosen = (values?.guidanceSet as GuidanceSetId | undefined) ?? guidance.guidanceSet;
   const overrideText = (id: string) =>
     values ? (values[id] ?? "") : (guidance.overrides[id as keyof GuidanceOverrides]?.toString() ?? "");
+  const verdictText = (id: string) =>
+    values ? (values[id] ?? "") : (guidance.verdict?.[id as keyof typeof guidance.verdict]?.toString() ?? "");
   return (
     <div className="max-w-4xl space-y-10">
       <DefaultClassesForm
@@ -196,6 +199,38 @@ export default function ClubSettings({ loaderData, actionData }: Route.Component
               </tbody>
             </table>
           </div>
+          <fieldset className="space-y-2">
+            <legend className="text-sm font-medium text-ink-700">When a set-up in the air is worth it</legend>
+            <p className="max-w-prose text-sm text-ink-700">
+              The jump verdicts recommend a set-up only above both values; the defaults are estimates, not
+              measurements. An empty field keeps the default.
+            </p>
+            {VERDICT_FIELDS.map((f) => {
+              const id = `verdict-${f.id}`;
+              const fieldErrors = errors?.[f.id];
+              return (
+                <div key={f.id} className="text-sm">
+                  <label htmlFor={id} className="font-medium">
+                    {f.label} ({f.unit})
+                  </label>
+                  <p className="text-xs text-ink-500">
+                    {f.hint} Default {f.default} {f.unit} (an estimate).
+                  </p>
+                  <input
+                    id={id}
+                    name={f.id}
+                    inputMode="decimal"
+                    defaultValue={verdictText(f.id)}
+                    placeholder={`${f.default}`}
+                    className="mt-1 w-28 rounded-md border border-ink-300 px-2 py-1 aria-[invalid=true]:border-danger-700"
+                    aria-invalid={fieldErrors ? true : undefined}
+                    aria-describedby={fieldErrors ? `${id}-error` : undefined}
+                  />
+                  <FieldError id={`${id}-error`} errors={fieldErrors} />
+                </div>
+              );
+            })}
+          </fieldset>
           <Button type="submit" disabled={busy}>
             Save the track guidance
           </Button>

@@ -14,6 +14,7 @@ import { elevationData, steeringSeries } from "~/layouts/jump-page.server";
 import {
   JUMP_PRESET_LABELS,
   skillPhrase,
+  speedSpreadPhrase,
   timingErrorsPhrase,
   verdictKind,
   type JumpSection,
@@ -130,7 +131,7 @@ export default function JumpPage({ loaderData: d }: Route.ComponentProps) {
           <JumpVerdictsTable jump={j} />
         </section>
       </div>
-      <JumpPlanSection jump={j} steering={d.steering} />
+      <JumpPlanSection jump={j} steering={d.steering} skill={d.skill} />
       <Assumptions />
       <nav aria-label="Other jumps" className="flex flex-wrap justify-between gap-3 text-sm">
         {d.previous ? (
@@ -176,6 +177,10 @@ function Assumptions() {
           the nose, throttle raises it.
         </li>
         <li>Driver timing errors: {timingErrorsPhrase()} (estimates); a failed landing costs about 3 s.</li>
+        <li>
+          Takeoff speed from one pass to the next varies by {speedSpreadPhrase()}: estimates of what is left
+          after the driver's own correction in the air by eye, which the model does not simulate.
+        </li>
         <li>A jump lands into a turn when the turn starts within half a second of travel after touchdown.</li>
       </ul>
     </section>

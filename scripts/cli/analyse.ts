@@ -2,8 +2,8 @@
  * `loftline analyse FILE [--class ID] [--skill novice|club|expert]`: the whole analysis of a
  * layout file (the product's own format, docs/layout-format.md) as JSON: lap length and time,
  * closure, rule checks, and per car class and jump: takeoff speed, speed window, airtime,
- * landing, equivalent fall height, the turn it lands into and the distance to it, and the
- * verdict with its reason and numbers. `--class` may be given more than once (default: the
+ * landing, equivalent fall height, the turn it lands into and the distance to it, the verdict
+ * with its reason and numbers, and for a whoops row the ways through it. `--class` may be given more than once (default: the
  * layout's own classes); `--skill` picks the level of each jump's `verdict` (default club; every
  * level is in `verdicts`). Bad input names the field on stderr, exit code 2, nothing on stdout.
  */
@@ -73,6 +73,7 @@ function jumpOutput(j: JumpAnalysis) {
     verdict: j.verdict,
     verdicts: j.verdicts,
     plan: j.plan,
+    whoops: j.whoops,
   };
 }
 

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
+import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
 import { loadClubGuidance } from "~/clubs/guidance.server";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
@@ -130,5 +130,43 @@ describe("the rule checks follow the club's settings", () => {
     const overridden = await width();
     expect(overridden).toMatchObject({ value: 3.5, measured: 3.2, status: "fail" });
     expect(overridden.source).toMatch(/^Club setting/);
+  });
+});
+
+describe("the set-up verdicts follow the club's values", () => {
+  it("saves the smallest worthwhile gain and turn of the nose, refuses bad ones naming the field, and the verdicts use them", async () => {
+    const { club, director } = await makeClubWithRoles();
+    const layout = await createLayoutFromDocument(club.id, SUMMER_LAYOUT, director.id);
+    const verdict = async () => {
+      const [row] = await (await getDb()).select().from(layouts).where(eq(layouts.id, layout.id));
+      const run = await analyseStoredLayout(row, { classIds: ["buggy-2wd-10"], skill: "club" });
+      return run.analysis.classes[0].jumps.find((j) => j.sectionId === "hairpin-double")!.verdicts.expert;
+    };
+    // Defaults (estimates): 0.05 s a pass and 10 deg.
+    expect(await verdict()).toMatchObject({ minGainPerPass: 0.05, minNoseTurnDeg: 10 });
+    const ok = await post(
+      club.id,
+      { guidanceSet: "club", ...EMPTY_OVERRIDES, minGainPerPass: "0,1", minNoseTurnDeg: "15" },
+      director.cookie,
+    );
+    expect(ok.status).toBe(302);
+    expect(await loadClubGuidance(club.id)).toEqual({
+      guidanceSet: "club",
+      overrides: {},
+      verdict: { minGainPerPass: 0.1, minNoseTurnDeg: 15 },
+    });
+    const v = await verdict();
+    expect(v.minGainPerPass).toBe(0.1);
+    expect(v.minNoseTurnDeg).toBeCloseTo(15, 9);
+    const bad = await post(
+      club.id,
+      { guidanceSet: "club", ...EMPTY_OVERRIDES, minGainPerPass: "lots", minNoseTurnDeg: "90" },
+      director.cookie,
+    );
+    expect(bad.status).toBe(400);
+    const errors = (bad.data as { errors: Record<string, string[]> }).errors;
+    expect(Object.keys(errors).sort()).toEqual(["minGainPerPass", "minNoseTurnDeg"]);
+    expect(errors.minNoseTurnDeg[0]).toMatch(/between 0 and 45/);
+    expect((await loadClubGuidance(club.id)).verdict).toEqual({ minGainPerPass: 0.1, minNoseTurnDeg: 15 });
   });
 });

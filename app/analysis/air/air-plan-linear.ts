@@ -1,15 +1,19 @@
 /**
- * A linear guide for the set-up plan search. For small roll and yaw, and steering angles small
- * enough that cos(delta) ~ 1, the gyrostat equations reduce to
- *   Ixx phi' =  H psi + K cos(caster) delta
- *   Izz psi' = -H phi + K sin(caster) delta
- * (H: wheels' spin momentum, K: the front pair's, both possibly changing with a brake or throttle
- * pulse). With z = phi sqrt(Ixx) + i psi sqrt(Izz) this is z' = -i w(t) z + beta(t) delta(t),
- * w = H / sqrt(Ixx Izz), beta = K (cos c / sqrt(Ixx) + i sin c / sqrt(Izz)), so
- *   z(T) = e^{-i W(T)} * integral of beta(s) e^{i W(s)} delta(s) ds,   W(t) = integral of w.
- * A block of constant steering therefore adds a fixed complex number, and the landing roll and
- * yaw of any block plan follow from a table of the cumulative integral. The full model then
- * corrects the guide (air-plan.ts).
+ * A linear guide for the set-up plan search: the landing roll and yaw of any steering plan,
+ * to first order in the steering, read from two tables.
+ *
+ * The reference motion is the flight without steering: the brake or throttle pulse only
+ * changes the wheels' spin about the body y axis, so the car only pitches, at
+ * q(t) = (H0 - h_y(t)) / Iyy (H0: the wheels' spin momentum at takeoff, h_y(t) after the pulse).
+ * A small body-frame rotation e = (ex, ey, ez) away from it (R = R_ref (1 + [e])) obeys
+ *   ex' =  (H0 / Ixx - q) ez + K cos(caster) / Ixx * delta
+ *   ez' = -(H0 / Izz - q) ex + K sin(caster) / Izz * delta
+ * (K: the front pair's spin momentum, which a 4wd brake takes away), and at touchdown, pitched
+ * at theta (nose down positive, from the takeoff pitch given), the landing angles are
+ *   roll = ex + ez tan(theta),   yaw = ez / cos(theta).
+ * So landing roll and yaw are integrals of a kernel times the steering; the kernels come from
+ * the adjoint equations integrated back from touchdown. A block of constant steering adds the
+ * difference of two cumulative sums. The full model then corrects the guide (air-plan-refine.ts).
  */
 import type { AttitudeCar } from "./attitude";
 import type { PiecewiseLinear } from "./attitude-inputs";
@@ -29,82 +33,139 @@ export function nutationPeriod(car: AttitudeCar, speed: number): number {
 }
 
 export interface LinearGuide {
-  /** Grid step of the table, s. */
+  /** Grid step of the tables, s. */
   step: number;
   /** Table length. */
   n: number;
-  /** Cumulative integral of beta e^{iW}, rotated by e^{-iW(T)}: real and imaginary parts. */
-  cumRe: Float64Array;
-  cumIm: Float64Array;
-  /** Kernel beta e^{iW} e^{-iW(T)} at grid points (for edge sensitivities). */
-  kerRe: Float64Array;
-  kerIm: Float64Array;
-  sqrtIxx: number;
-  sqrtIzz: number;
+  /** Landing roll and yaw (rad) per rad of steering held from takeoff to each grid time. */
+  cumRoll: Float64Array;
+  cumYaw: Float64Array;
+  /** Their rates: landing roll and yaw per rad of steering per second at each grid time. */
+  kerRoll: Float64Array;
+  kerYaw: Float64Array;
+  /** Pitch change of the reference flight (the pulse alone) at touchdown, rad, nose up positive. */
+  pitchChange: number;
+  /**
+   * Roll rate at touchdown per rad of yaw for a plan that lands flat with straight wheels, rad/s
+   * per rad: the spin's angular momentum, fixed in space, no longer lies along the yawed axle,
+   * so a yawed car rolls. With the airtime's spread it sets how much the takeoff speed matters.
+   */
+  rollRatePerYaw: number;
 }
 
-function pieceValue(f: PiecewiseLinear, t: number, cursor: { k: number }): number {
-  while (cursor.k + 1 < f.n && f.t[cursor.k + 1] <= t) cursor.k++;
-  const k = cursor.k;
-  return t <= f.t[k] ? f.v[k] : f.v[k] + f.s[k] * (t - f.t[k]);
-}
+/** Reused coefficient tables (the guide is built many times per plan). */
+let scratch = {
+  alpha: new Float64Array(0),
+  gamma: new Float64Array(0),
+  bx: new Float64Array(0),
+  bz: new Float64Array(0),
+  times: new Float64Array(0),
+};
 
 /**
- * Builds the guide's table for a flight of `airtime` s at takeoff `speed` m/s, with the driven
- * wheels' spin given by `rearSpin` (rad/s over time) and the front spin following it on a 4wd car.
+ * Builds the guide for a flight of `airtime` s at takeoff `speed` m/s, with the driven wheels'
+ * spin given by `rearSpin` (rad/s over time; the front spin follows it on a 4wd car).
+ * @param takeoffPitchRad the car's pitch at takeoff, rad (nose up positive): with it the guide's
+ *   roll and yaw are the world-frame landing angles; 0 gives angles relative to the takeoff attitude.
  */
 export function buildLinearGuide(
   car: AttitudeCar,
   speed: number,
   airtime: number,
   rearSpin: PiecewiseLinear,
+  takeoffPitchRad = 0,
 ): LinearGuide {
   const step = 0.002;
   const n = Math.max(2, Math.ceil(airtime / step) + 1);
-  const [ixx, , izz] = car.inertia;
-  const sqrtIxx = Math.sqrt(ixx);
-  const sqrtIzz = Math.sqrt(izz);
-  const br = Math.cos(car.casterRad) / sqrtIxx;
-  const bi = Math.sin(car.casterRad) / sqrtIzz;
+  const [ixx, iyy, izz] = car.inertia;
+  const kf = 2 * car.frontWheel.spinInertia;
+  const kr = 2 * car.rearWheel.spinInertia;
   const fourWd = car.drive === "4wd";
   const ratio = car.rearWheel.radius / car.frontWheel.radius;
   const wf0 = speed / car.frontWheel.radius;
-  const kerRe = new Float64Array(n);
-  const kerIm = new Float64Array(n);
-  const cumRe = new Float64Array(n);
-  const cumIm = new Float64Array(n);
-  const cursor = { k: 0 };
-  let phase = 0;
-  let prevOmega = 0;
+  const h0 = kr * (speed / car.rearWheel.radius) + kf * wf0;
+  const cc = Math.cos(car.casterRad);
+  const sc = Math.sin(car.casterRad);
+  // Coefficients at each grid time: alpha, gamma (rad/s) and the steering gains bx, bz (1/s).
+  if (scratch.times.length < n) {
+    const size = 2 * n;
+    scratch = {
+      alpha: new Float64Array(size),
+      gamma: new Float64Array(size),
+      bx: new Float64Array(size),
+      bz: new Float64Array(size),
+      times: new Float64Array(size),
+    };
+  }
+  const { alpha, gamma, bx, bz, times } = scratch;
+  for (let i = 0; i < n; i++) times[i] = Math.min(i * step, airtime);
+  let k = 0;
+  let theta = -takeoffPitchRad;
+  let prevQ = 0;
   for (let i = 0; i < n; i++) {
-    const t = Math.min(i * step, airtime);
-    const wr = pieceValue(rearSpin, t, cursor);
+    const t = times[i];
+    while (k + 1 < rearSpin.n && rearSpin.t[k + 1] <= t) k++;
+    const wr = t <= rearSpin.t[k] ? rearSpin.v[k] : rearSpin.v[k] + rearSpin.s[k] * (t - rearSpin.t[k]);
     const wf = fourWd ? wr * ratio : wf0;
-    const K = 2 * car.frontWheel.spinInertia * wf;
-    const H = 2 * car.rearWheel.spinInertia * wr + K;
-    const omega = H / (sqrtIxx * sqrtIzz);
-    if (i > 0) phase += 0.5 * (omega + prevOmega) * (t - Math.min((i - 1) * step, airtime));
-    prevOmega = omega;
-    const c = Math.cos(phase);
-    const s = Math.sin(phase);
-    kerRe[i] = K * (br * c - bi * s);
-    kerIm[i] = K * (br * s + bi * c);
+    const q = (h0 - kr * wr - kf * wf) / iyy;
+    if (i > 0) theta += 0.5 * (q + prevQ) * (t - times[i - 1]);
+    prevQ = q;
+    alpha[i] = h0 / ixx - q;
+    gamma[i] = h0 / izz - q;
+    bx[i] = (kf * wf * cc) / ixx;
+    bz[i] = (kf * wf * sc) / izz;
   }
-  // Rotate by e^{-i W(T)} and accumulate (trapezoid).
-  const c = Math.cos(phase);
-  const s = Math.sin(phase);
-  for (let i = 0; i < n; i++) {
-    const re = kerRe[i] * c + kerIm[i] * s;
-    const im = kerIm[i] * c - kerRe[i] * s;
-    kerRe[i] = re;
-    kerIm[i] = im;
-    if (i > 0) {
-      const h = Math.min(i * step, airtime) - Math.min((i - 1) * step, airtime);
-      cumRe[i] = cumRe[i - 1] + 0.5 * h * (kerRe[i] + kerRe[i - 1]);
-      cumIm[i] = cumIm[i - 1] + 0.5 * h * (kerIm[i] + kerIm[i - 1]);
-    }
+  const cosT = Math.cos(theta);
+  const sinT = Math.sin(theta);
+  const last = n - 1;
+  const safeCos = Math.abs(cosT) < 1e-6 ? (cosT < 0 ? -1e-6 : 1e-6) : cosT;
+  const kerRoll = new Float64Array(n);
+  const kerYaw = new Float64Array(n);
+  // Adjoint lambda' = -A^T lambda, backward from touchdown: lx' = gamma lz, lz' = -alpha lx.
+  adjoint(1, Math.tan(theta), n, kerRoll);
+  adjoint(0, 1 / safeCos, n, kerYaw);
+  const cumRoll = new Float64Array(n);
+  const cumYaw = new Float64Array(n);
+  for (let i = 1; i < n; i++) {
+    const h = times[i] - times[i - 1];
+    cumRoll[i] = cumRoll[i - 1] + 0.5 * h * (kerRoll[i] + kerRoll[i - 1]);
+    cumYaw[i] = cumYaw[i - 1] + 0.5 * h * (kerYaw[i] + kerYaw[i - 1]);
   }
-  return { step, n, cumRe, cumIm, kerRe, kerIm, sqrtIxx, sqrtIzz };
+  // Flat landing (roll 0) with yaw psi: ex = -psi sin(theta), ez = psi cos(theta); the roll rate
+  // ex' + ez' tan(theta) + ez theta' / cos^2(theta) with ex' = alpha ez, ez' = -gamma ex.
+  const q = prevQ;
+  const rollRatePerYaw = alpha[last] * cosT + (gamma[last] * sinT * sinT + q) / safeCos;
+  return {
+    step,
+    n,
+    cumRoll,
+    cumYaw,
+    kerRoll,
+    kerYaw,
+    pitchChange: -theta - takeoffPitchRad,
+    rollRatePerYaw,
+  };
+}
+
+/** Integrates one adjoint backward (RK2 on the grid) and writes its kernel lambda . b to `out`. */
+function adjoint(lx0: number, lz0: number, n: number, out: Float64Array): void {
+  const { alpha, gamma, bx, bz, times } = scratch;
+  let lx = lx0;
+  let lz = lz0;
+  out[n - 1] = lx * bx[n - 1] + lz * bz[n - 1];
+  for (let i = n - 1; i > 0; i--) {
+    const h = times[i] - times[i - 1];
+    // Backward step from t_i to t_{i-1} (Heun): the forward rates are lx' = gamma lz, lz' = -alpha lx.
+    const dx1 = gamma[i] * lz;
+    const dz1 = -alpha[i] * lx;
+    const mx = lx - h * dx1;
+    const mz = lz - h * dz1;
+    const dx2 = gamma[i - 1] * mz;
+    const dz2 = -alpha[i - 1] * mx;
+    lx -= 0.5 * h * (dx1 + dx2);
+    lz -= 0.5 * h * (dz1 + dz2);
+    out[i - 1] = lx * bx[i - 1] + lz * bz[i - 1];
+  }
 }
 
 /** Linear interpolation of a table at time t (s). */

@@ -2,7 +2,9 @@
  * The brake or throttle pulse that supplies the pitch rotation a flight needs (engine.md
  * section 5). Changing the driven wheels' spin by dW hands their angular momentum change to the
  * chassis: the pitch rate changes by J dW / Iyy (J: spin inertia of the driven wheels, in
- * rear-wheel terms), and that rate acts until touchdown.
+ * rear-wheel terms), and that rate acts until touchdown. A pulse has a start, a strength (a share
+ * of the car's full brake or full throttle) and a length; the set-up search (air-plan-joint.ts)
+ * tries several starts and strengths together with the steering.
  */
 import type { AttitudeCar } from "./attitude";
 
@@ -16,8 +18,12 @@ export interface PitchPulse {
   duration: number;
   /** Driven-wheel angular acceleration during the pulse, rad/s^2 (negative = brake). */
   wheelAccel: number;
+  /** Share of the car's full brake or full throttle, 0..1 (0 for no pulse). */
+  strength: number;
   /** True when the car's limits (wheel stopped, motor top speed) cannot supply all of it. */
   limited: boolean;
+  /** True when a brake pulse stops the wheels before it ends (holding it longer changes nothing). */
+  stopsWheels: boolean;
 }
 
 /** Car data the pulse needs beyond the attitude model. */
@@ -30,6 +36,9 @@ export interface PulseLimits {
 
 /** Pitch changes smaller than this (rad) get no pulse. */
 export const PULSE_THRESHOLD_RAD = (0.5 * Math.PI) / 180;
+/** Defaults when a car gives no limits, rad/s^2 (estimates). */
+const DEFAULT_BRAKE = 3000;
+const DEFAULT_THROTTLE = 2500;
 
 /** Spin inertia driven by the rear-wheel acceleration, in rear-wheel terms, kg m^2. */
 export function drivenSpinInertia(car: AttitudeCar): number {
@@ -38,10 +47,25 @@ export function drivenSpinInertia(car: AttitudeCar): number {
   return rear + 2 * car.frontWheel.spinInertia * (car.rearWheel.radius / car.frontWheel.radius);
 }
 
+/** The pulse that does nothing, starting at `start` s. */
+export function noPulse(start: number): PitchPulse {
+  return {
+    kind: "none",
+    start,
+    duration: 0,
+    wheelAccel: 0,
+    strength: 0,
+    limited: false,
+    stopsWheels: false,
+  };
+}
+
 /**
- * The shortest full-strength pulse starting at `start` s that changes the pitch by
- * `pitchChangeRad` (nose up positive) by `airtime` s, within the wheels' limits.
+ * The pulse of the given strength starting at `start` s that changes the pitch by
+ * `pitchChangeRad` (nose up positive) by `airtime` s, as short as that allows, within the
+ * wheels' limits.
  * @param speed takeoff speed, m/s (the wheels start at speed / radius)
+ * @param strength share of the full brake or throttle, (0, 1] (default 1)
  */
 export function pitchPulse(
   car: AttitudeCar & PulseLimits,
@@ -49,11 +73,14 @@ export function pitchPulse(
   airtime: number,
   pitchChangeRad: number,
   start: number,
+  strength = 1,
 ): PitchPulse {
-  const none: PitchPulse = { kind: "none", start, duration: 0, wheelAccel: 0, limited: false };
+  const none = noPulse(start);
   if (Math.abs(pitchChangeRad) < PULSE_THRESHOLD_RAD || airtime <= start) return none;
   const brake = pitchChangeRad < 0;
-  const accel = brake ? -(car.maxWheelBrake ?? 3000) : (car.maxWheelAccel ?? 2500);
+  const share = Math.min(1, Math.max(1e-3, strength));
+  const accel =
+    share * (brake ? -(car.maxWheelBrake ?? DEFAULT_BRAKE) : (car.maxWheelAccel ?? DEFAULT_THROTTLE));
   const J = drivenSpinInertia(car);
   const iyy = car.inertia[1];
   const w0 = speed / car.rearWheel.radius;
@@ -68,11 +95,33 @@ export function pitchPulse(
   let d = disc >= 0 ? span - Math.sqrt(disc) : span;
   let limited = disc < 0;
   const dMax = maxChange / Math.abs(accel);
-  if (d > dMax) {
+  let stopsWheels = false;
+  if (d >= dMax) {
+    limited = limited || d > dMax + 1e-9;
     d = dMax;
-    limited = true;
+    stopsWheels = brake;
   }
-  return { kind: brake ? "brake" : "throttle", start, duration: d, wheelAccel: accel, limited };
+  return {
+    kind: brake ? "brake" : "throttle",
+    start,
+    duration: d,
+    wheelAccel: accel,
+    strength: share,
+    limited,
+    stopsWheels,
+  };
+}
+
+/**
+ * Pitch change (rad) a pulse supplies by `airtime` s, from its length and strength:
+ * (J a d / Iyy) (T - start - d / 2). The steering adds a little of its own (air-plan.ts).
+ */
+export function pulseSupplied(car: AttitudeCar, airtime: number, p: PitchPulse): number {
+  if (p.kind === "none") return 0;
+  return (
+    ((drivenSpinInertia(car) * p.wheelAccel * p.duration) / car.inertia[1]) *
+    (airtime - p.start - p.duration / 2)
+  );
 }
 
 /** The pulse as a wheel acceleration timeline [[t s, rad/s^2], ...] for the attitude model. */
@@ -82,4 +131,28 @@ export function pulseTimeline(p: PitchPulse): Array<[number, number]> {
     [p.start, p.wheelAccel],
     [p.start + p.duration, 0],
   ];
+}
+
+/** Shares of full brake or throttle the joint search tries (full, about a third, a tenth). */
+export const PULSE_STRENGTHS: readonly number[] = [1, 0.35, 0.12];
+
+/**
+ * Pulses the joint search tries: each strength in PULSE_STRENGTHS started at `starts` s, each
+ * sized for the wanted pitch change (or as much of it as the car can give from that start).
+ */
+export function pulseCandidates(
+  car: AttitudeCar & PulseLimits,
+  speed: number,
+  airtime: number,
+  pitchChangeRad: number,
+  starts: readonly number[],
+): PitchPulse[] {
+  if (Math.abs(pitchChangeRad) < PULSE_THRESHOLD_RAD) return [];
+  const out: PitchPulse[] = [];
+  for (const start of starts)
+    for (const strength of PULSE_STRENGTHS) {
+      const p = pitchPulse(car, speed, airtime, pitchChangeRad, start, strength);
+      if (p.kind !== "none" && p.start + p.duration < airtime) out.push(p);
+    }
+  return out;
 }

@@ -41,6 +41,8 @@ export interface Refined {
 
 const ROLL_DONE = (0.02 * Math.PI) / 180;
 const YAW_DONE = (0.25 * Math.PI) / 180;
+/** How far inside the yaw cap the plan aims, rad. */
+const YAW_MARGIN = (0.1 * Math.PI) / 180;
 /** Two phases the same way whose amounts differ by less than this are one phase, rad. */
 const SAME_AMOUNT = (5 * Math.PI) / 180;
 
@@ -148,7 +150,8 @@ export function refineAmounts(
   o: RefineOptions,
 ): Refined | null {
   const start = simplify(guide);
-  const target = Math.min(start.yaw, o.yawCap);
+  // Aim a little inside the cap: the search steps (8 ms) and the final 1 ms run differ slightly.
+  const target = Math.min(start.yaw, o.yawCap - YAW_MARGIN);
   const run: Run = (plan) => {
     const r = sim(timeline(plan), accel);
     return { plan, roll: r.rollRad, yaw: o.dir * r.yawRad, pitch: r.pitchRad };

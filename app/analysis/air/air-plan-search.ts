@@ -20,6 +20,8 @@ export interface BlockPlan {
   single: boolean;
   /** Yaw the guide predicts, rad (signed toward the turn). */
   yaw: number;
+  /** The guide's estimate of the share of landings within the roll tolerance at the ranking sigma. */
+  success?: number;
 }
 
 export interface SearchOptions {
@@ -37,6 +39,8 @@ export interface SearchOptions {
   sigma: number;
   /** Shortest steering phase a driver can make, s. */
   minPhase: number;
+  /** Most switch times tried (default 40; fewer for a quick screening). */
+  maxGrid?: number;
 }
 
 const MAX_GRID = 40;
@@ -47,14 +51,12 @@ export function guideLanding(
   p: Omit<BlockPlan, "yaw" | "single"> & { single?: boolean },
   out: number[],
 ): void {
-  const ca = [tableAt(g, g.cumRe, p.a), tableAt(g, g.cumIm, p.a)];
-  const cm = [tableAt(g, g.cumRe, p.m), tableAt(g, g.cumIm, p.m)];
-  const cb = [tableAt(g, g.cumRe, p.b), tableAt(g, g.cumIm, p.b)];
+  const ca = [tableAt(g, g.cumRoll, p.a), tableAt(g, g.cumYaw, p.a)];
+  const cm = [tableAt(g, g.cumRoll, p.m), tableAt(g, g.cumYaw, p.m)];
+  const cb = [tableAt(g, g.cumRoll, p.b), tableAt(g, g.cumYaw, p.b)];
   const u2 = p.single ? 0 : p.u2;
-  const re = p.u1 * (cm[0] - ca[0]) + u2 * (cb[0] - cm[0]);
-  const im = p.u1 * (cm[1] - ca[1]) + u2 * (cb[1] - cm[1]);
-  out[0] = re / g.sqrtIxx;
-  out[1] = im / g.sqrtIzz;
+  out[0] = p.u1 * (cm[0] - ca[0]) + u2 * (cb[0] - cm[0]);
+  out[1] = p.u1 * (cm[1] - ca[1]) + u2 * (cb[1] - cm[1]);
 }
 
 function successEstimate(
@@ -66,7 +68,7 @@ function successEstimate(
 ): number {
   let varSum = 0;
   for (let k = 0; k < edges.length; k++) {
-    const s = (jumps[k] * tableAt(g, g.kerRe, edges[k])) / g.sqrtIxx;
+    const s = jumps[k] * tableAt(g, g.kerRoll, edges[k]);
     varSum += s * s;
   }
   const sd = o.sigma * Math.sqrt(varSum);
@@ -80,16 +82,16 @@ function successEstimate(
  */
 export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null {
   if (o.tLast <= o.t0) return null;
-  const count = Math.min(MAX_GRID, Math.max(3, Math.floor((o.tLast - o.t0) / 0.02) + 1));
+  const count = Math.min(o.maxGrid ?? MAX_GRID, Math.max(3, Math.floor((o.tLast - o.t0) / 0.02) + 1));
   const grid = new Float64Array(count);
   const re = new Float64Array(count);
   const im = new Float64Array(count);
   for (let i = 0; i < count; i++) {
     grid[i] = o.t0 + ((o.tLast - o.t0) * i) / (count - 1);
-    re[i] = tableAt(g, g.cumRe, grid[i]);
-    im[i] = tableAt(g, g.cumIm, grid[i]);
+    re[i] = tableAt(g, g.cumRoll, grid[i]);
+    im[i] = tableAt(g, g.cumYaw, grid[i]);
   }
-  const yz = o.dir * g.sqrtIzz; // yaw of 1 rad toward the turn, in z units
+  const yz = o.dir; // yaw of 1 rad toward the turn
   let bestYaw = 0;
   const yawOf = (i: number, j: number, l: number, out: number[]): number => {
     const g1r = re[j] - re[i],
@@ -97,14 +99,14 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
     if (l < 0) {
       // Single block: amount for the capped yaw, roll must stay within half the tolerance.
       if (Math.abs(g1i) < 1e-15) return 0;
-      const perRad = (o.dir * g1i) / g.sqrtIzz; // yaw toward the turn per rad of steering
+      const perRad = o.dir * g1i; // yaw toward the turn per rad of steering
       const u1Max = o.lock * Math.sign(perRad);
       let yaw = Math.min(Math.abs(u1Max * perRad), o.yawCap);
-      const rollPerYaw = Math.abs(g1r / g.sqrtIxx / perRad);
+      const rollPerYaw = Math.abs(g1r / perRad);
       if (rollPerYaw * yaw > o.rollTol / 2) yaw = o.rollTol / 2 / rollPerYaw;
       out[0] = (yaw / perRad) * 1;
       out[1] = 0;
-      out[2] = ((yaw / perRad) * g1r) / g.sqrtIxx;
+      out[2] = (yaw / perRad) * g1r;
       return yaw;
     }
     const g2r = re[l] - re[j],
@@ -143,7 +145,8 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
         const [u1, u2, rollMean] = tmp;
         const edges = single ? [grid[i], grid[j]] : [grid[i], grid[j], grid[l]];
         const jumps = single ? [-u1, u1] : [-u1, u1 - u2, u2];
-        const score = successEstimate(g, edges, jumps, rollMean, o) - 1e-3 * (Math.abs(u1) + Math.abs(u2));
+        const success = successEstimate(g, edges, jumps, rollMean, o);
+        const score = success - 1e-3 * (Math.abs(u1) + Math.abs(u2));
         if (score > bestScore) {
           bestScore = score;
           best = {
@@ -154,6 +157,7 @@ export function searchBlocks(g: LinearGuide, o: SearchOptions): BlockPlan | null
             u2: single ? 0 : u2,
             single,
             yaw,
+            success,
           };
         }
       }

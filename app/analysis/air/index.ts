@@ -10,8 +10,11 @@ export {
 } from "./attitude-inputs";
 export * from "./air-plan";
 export { nutationPeriod } from "./air-plan-linear";
+export type { TradeOffPoint } from "./air-plan-joint";
 export {
   DEFAULT_SKILL_SIGMAS,
+  DEFAULT_SPEED_SIGMAS,
+  speedSpreadPhrase,
   timingErrorsPhrase,
   type SkillSigmas,
   type SwitchWindow,
@@ -19,6 +22,7 @@ export {
 export {
   pitchPulse,
   drivenSpinInertia,
+  PULSE_STRENGTHS,
   type PitchPulse,
   type PulseKind,
   type PulseLimits,

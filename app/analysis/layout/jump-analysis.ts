@@ -7,26 +7,25 @@
  * Results are estimates from a model, not a safety certification.
  */
 import type { JumpSection } from "../format/layout-document";
-import { planAirSetup, type AirPlan } from "../air/air-plan";
-import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
+import { planAirSetup } from "../air/air-plan";
+import { DEFAULT_SKILL_SIGMAS, DEFAULT_SPEED_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
 import { cacheKeyOf, hashOnce, type AnalysisCache } from "./analysis-cache";
 import type { CarParams } from "../format/cars";
-import { flyJump, type FlightInput, type FlightResult } from "../flight/flight";
-import { speedToLandAt, speedWindow, type SpeedWindow } from "../flight/flight-window";
+import { flyJump, type FlightResult } from "../flight/flight";
+import { analyseWhoops } from "../flight/whoops";
 import type { CentreLine, ResolvedSection } from "../track/geometry";
-import type { JumpProfile } from "../track/jump-profile";
-import { ballisticJumpWindow, STANDARD_GRAVITY } from "../track/lap-jumps";
+import { STANDARD_GRAVITY } from "../track/lap-jumps";
 import { findLandingTurn, lineIndexAt, pointAt } from "../verdict/jump-turn";
 import { describeVerdicts, type VerdictInputs } from "../verdict/jump-verdicts";
-import type { JumpAnalysis, JumpPlan } from "./layout-analysis-types";
+import type { JumpAnalysis } from "./layout-analysis-types";
 import type { SkillLevel } from "../words";
 import type { JumpLap } from "../track/speed";
 import {
-  DEFAULT_FAIL_COST_S,
-  DEFAULT_MIN_AIRTIME_S,
-  DEFAULT_MIN_TURN_ANGLE,
   DEFAULT_TURN_LOOKAHEAD_S,
+  DEFAULT_VERDICT_THRESHOLDS,
+  type VerdictThresholds,
 } from "../verdict/verdict";
+import { airtimePerSpeed, dragWindow, flightBase, planSummary } from "./jump-flight";
 
 /** The jump and its surroundings, as the lap model left them for one car class. */
 export interface JumpContext {
@@ -50,6 +49,10 @@ export interface JumpAnalysisOptions {
   lookaheadS?: number;
   /** Time lost to a failed landing, s (default 3). */
   failCost?: number;
+  /** The values that decide the verdicts (defaults: DEFAULT_VERDICT_THRESHOLDS; `failCost` above wins). */
+  thresholds?: Partial<VerdictThresholds>;
+  /** Takeoff speed spread per skill level, m/s (default 0.3 / 0.15 / 0.05). */
+  speedSigmas?: SkillSigmas;
   /** Gravity, m/s^2. */
   g?: number;
   /** Monte Carlo seed of the plan's success rates. */
@@ -71,57 +74,6 @@ function memo<T>(
   return cache ? cache.memo(cacheKeyOf(kind, ...parts()), compute) : compute();
 }
 
-function flightBase(profile: JumpProfile, car: CarParams, g: number): Omit<FlightInput, "speed"> {
-  return {
-    faceAngleRad: profile.faceAngle,
-    lip: { x: profile.d[profile.lipIndex], z: profile.h[profile.lipIndex] },
-    surface: profile.d.map((x, i) => ({ x, z: profile.h[i] })),
-    g,
-    drag: car.cdA > 0 ? { massKg: car.massKg, cdA: car.cdA } : undefined,
-    landingRamp: { start: profile.d[profile.landingStartIndex], end: profile.d[profile.landingEndIndex] },
-  };
-}
-
-/**
- * Speed window and sweet-spot speed with drag. Drag only shortens a flight, so the drag-free
- * speeds (lap-jumps.ts) are lower bounds and the search starts there.
- */
-function dragWindow(
-  profile: JumpProfile,
-  car: CarParams,
-  g: number,
-): { window: SpeedWindow | null; sweetSpot: number | null } {
-  const free = ballisticJumpWindow(profile, g);
-  if (free.windowMin === null) return { window: null, sweetSpot: null };
-  const base = flightBase(profile, car, g);
-  const ramp = base.landingRamp!;
-  const window = speedWindow({ ...base, landingRamp: ramp, minSpeed: free.windowMin });
-  const sweetSpot = speedToLandAt(
-    { ...base, minSpeed: free.sweetSpotSpeed ?? free.windowMin },
-    profile.sweetSpot,
-  );
-  return { window, sweetSpot };
-}
-
-function planSummary(p: AirPlan): JumpPlan {
-  return {
-    feasible: p.feasible,
-    reason: p.reason,
-    steering: p.steering.map(([t, a]) => [t, a * DEG]),
-    rearWheelAccel: p.rearWheelAccel.map(([t, a]) => [t, a]),
-    yawDeg: p.yawRad * DEG,
-    pitchDeg: p.pitchRad * DEG,
-    rollDeg: p.rollRad * DEG,
-    targetYawDeg: p.targetYawRad * DEG,
-    pitchChangeDeg: p.pitchChangeRad * DEG,
-    pitchPulse: { ...p.pitchPulse },
-    switches: p.switches.map((s) => ({ ...s })),
-    timingWindowMs: p.timingWindowMs,
-    successRate: { ...p.successRate },
-    rollToleranceDeg: p.rollToleranceRad * DEG,
-  };
-}
-
 /**
  * Analyses one jump for one car class.
  * @returns speeds m/s, distances m, times s, angles deg, the plan and a verdict per skill level.
@@ -134,6 +86,12 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const g = options.g ?? STANDARD_GRAVITY;
   const cache = options.cache;
   const sigmas = options.skillSigmas ?? DEFAULT_SKILL_SIGMAS;
+  const speedSigmas = options.speedSigmas ?? DEFAULT_SPEED_SIGMAS;
+  const thresholds: VerdictThresholds = {
+    ...DEFAULT_VERDICT_THRESHOLDS,
+    ...options.thresholds,
+    ...(options.failCost === undefined ? {} : { failCost: options.failCost }),
+  };
   const lookaheadS = options.lookaheadS ?? DEFAULT_TURN_LOOKAHEAD_S;
   const lipD = profile.d[profile.lipIndex];
   const lipPoint = pointAt(line, lap.lipS);
@@ -158,15 +116,20 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
     turn: null,
     nextTurnDistance: null,
     plan: null,
+    whoops: null,
     verdicts: null!,
     verdict: null!,
   };
-  const w = memo(
-    cache,
-    "window",
-    () => [profileKey, car.massKg, car.cdA, g],
-    () => dragWindow(profile, car, g),
-  );
+  const whoopsRow = doc.preset === "whoops";
+  // A whoops row gets its own speeds (flight/whoops.ts), not one landing's window.
+  const w = whoopsRow
+    ? { window: null, sweetSpot: null }
+    : memo(
+        cache,
+        "window",
+        () => [profileKey, car.massKg, car.cdA, g],
+        () => dragWindow(profile, car, g),
+      );
   result.window = w.window ? { ...w.window } : null;
   result.sweetSpotSpeed = w.sweetSpot;
   // engine.md section 2 with the flight model's drag: the sweet-spot speed, or the most the approach allows.
@@ -174,14 +137,28 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const planned = w.sweetSpot === null ? approach : Math.min(w.sweetSpot, approach);
   const takeoffSpeed = Math.round(planned / TAKEOFF_SPEED_STEP) * TAKEOFF_SPEED_STEP;
   result.takeoffSpeed = lap.flownOverBy === null ? takeoffSpeed : 0;
-  result.cannotClear = lap.flownOverBy === null && (w.window === null || approach < w.window.min);
+  result.cannotClear =
+    !whoopsRow && lap.flownOverBy === null && (w.window === null || approach < w.window.min);
 
   const inputs: VerdictInputs = {
     skill: options.skill ?? "club",
-    failCost: options.failCost ?? DEFAULT_FAIL_COST_S,
+    thresholds,
+    fourWd: car.drive === "4wd",
     result,
   };
   if (lap.flownOverBy !== null || !(takeoffSpeed > 0)) return describeVerdicts(inputs);
+  if (doc.preset === "whoops") {
+    // Rolling through is always possible: a whoops row is never "cannot clear".
+    const drag = car.cdA > 0 ? { massKg: car.massKg, cdA: car.cdA } : undefined;
+    const w = memo(
+      cache,
+      "whoops",
+      () => [profileKey, doc.count, doc.spacing, doc.bumpHeight, car.massKg, car.cdA, g, approach],
+      () => analyseWhoops(doc, profile.faceAngle, approach, drag, g),
+    );
+    whoopsResult(result, w, lipD, section.startS, line);
+    return describeVerdicts(inputs);
+  }
 
   const flight: FlightResult = memo(
     cache,
@@ -228,8 +205,8 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
   const wantsPlan =
     !result.cannotClear &&
     turn !== null &&
-    turn.angleDeg / DEG >= DEFAULT_MIN_TURN_ANGLE &&
-    flight.airtime >= DEFAULT_MIN_AIRTIME_S;
+    turn.angleDeg / DEG >= thresholds.minTurnAngle &&
+    flight.airtime >= thresholds.minAirtime;
   if (wantsPlan) {
     const turnAngleRad = Math.min(turn.angleDeg / DEG, Math.PI / 4);
     const pitchChangeRad = td.surfaceSlopeRad - profile.faceAngle;
@@ -244,9 +221,16 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
         turn.side,
         turnAngleRad,
         pitchChangeRad,
+        profile.faceAngle,
         sigmas.novice,
         sigmas.club,
         sigmas.expert,
+        speedSigmas.novice,
+        speedSigmas.club,
+        speedSigmas.expert,
+        turn.radius / turn.entrySpeed,
+        thresholds.failCost,
+        thresholds.minNoseTurn,
         seed,
       ],
       () =>
@@ -258,12 +242,76 @@ export function analyseJump(ctx: JumpContext, options: JumpAnalysisOptions = {})
             turn: turn.side,
             turnAngleRad,
             pitchChangeRad,
+            takeoffPitchRad: profile.faceAngle,
+            airtimePerSpeed: airtimePerSpeed(profile, car, g, takeoffSpeed),
             skillSigmas: sigmas,
+            speedSigmas,
+            value: {
+              secondsPerRad: turn.radius / turn.entrySpeed,
+              failCost: thresholds.failCost,
+              minYawRad: thresholds.minNoseTurn,
+            },
             seed,
           }),
+          speedSigmas,
         ),
     );
     result.plan = plan;
   }
   return describeVerdicts(inputs);
+}
+
+/** Fills a whoops row's flight fields from the way through it this car's approach allows. */
+function whoopsResult(
+  r: JumpAnalysis,
+  w: ReturnType<typeof analyseWhoops>,
+  lipD: number,
+  startS: number,
+  line: CentreLine,
+): void {
+  r.cannotClear = false;
+  r.takeoffSpeed = Math.round(w.speed / TAKEOFF_SPEED_STEP) * TAKEOFF_SPEED_STEP;
+  r.airtime = w.airtime;
+  r.equivalentFallHeight = w.equivalentFallHeight;
+  const hop = w.technique === "triples" ? w.triples : w.doubles;
+  if (w.technique === "doubles" || w.technique === "triples")
+    r.window = hop?.window ? { ...hop.window, maxIsSearchLimit: false } : null;
+  if (w.flight) {
+    const f = w.flight;
+    const td = f.landing;
+    const d = lipD + td.x;
+    const s = (startS + d) % line.length;
+    const p = pointAt(line, s);
+    r.apex = { d: lipD + f.apex.x, z: f.apex.z, t: f.apex.t };
+    r.landing = {
+      d,
+      s,
+      x: p.x,
+      y: p.y,
+      z: td.z,
+      speed: td.speed,
+      rollOutSpeed: td.speed * Math.max(0, Math.cos(td.flightPathRad - td.surfaceSlopeRad)),
+      flightPathDeg: td.flightPathRad * DEG,
+      surfaceSlopeDeg: td.surfaceSlopeRad * DEG,
+      normalSpeed: td.normalSpeed,
+      landedOn: "ramp",
+    };
+  } else {
+    r.apex = null;
+    r.landing = null;
+  }
+  r.whoops = {
+    count: w.count,
+    spacing: w.spacing,
+    bumpHeight: w.bumpHeight,
+    skimSpeed: w.skimSpeed,
+    doubles: { jumps: w.doubles.jumps, window: w.doubles.window, sweetSpotSpeed: w.doubles.sweetSpotSpeed },
+    triples: w.triples
+      ? { jumps: w.triples.jumps, window: w.triples.window, sweetSpotSpeed: w.triples.sweetSpotSpeed }
+      : null,
+    technique: w.technique,
+    speed: w.speed,
+    airtime: w.airtime,
+    equivalentFallHeight: w.equivalentFallHeight,
+  };
 }

@@ -7,7 +7,7 @@
  * degrees and every angle field ends in `Deg` (docs/decisions/0400). Every number is a model
  * estimate, not a safety certification.
  */
-import type { JumpPreset, JumpReason, SkillLevel } from "../words";
+import type { ErrorSource, JumpPreset, JumpReason, SkillLevel, WhoopsTechnique } from "../words";
 import type { PlanInfeasibleReason } from "../air/air-plan";
 import type { PitchPulse } from "../air/air-plan-pulse";
 import type { SwitchWindow } from "../air/air-plan-robustness";
@@ -32,6 +32,14 @@ export interface SkillVerdict {
   timeSaved: number;
   /** successRate x timeSaved - (1 - successRate) x time lost to a failed landing, s per pass. */
   expectedGain: number;
+  /** Turn of the nose at touchdown the plan gives, deg (0 without a plan). */
+  noseTurnDeg: number;
+  /** The values that decided it: time lost to a failed landing (s), smallest worthwhile gain (s per pass) and turn of the nose (deg). */
+  failCost: number;
+  minGainPerPass: number;
+  minNoseTurnDeg: number;
+  /** The driver's error that spoils most landings at this level (null without a plan or when none does). */
+  mainError: ErrorSource | null;
 }
 
 /** The turn a jump lands into: the next turn after touchdown, within the look-ahead distance. */
@@ -52,7 +60,19 @@ export interface LandingTurn {
   entrySpeed: number;
 }
 
-/** The mid-air set-up plan for a jump that lands into a turn (shared by the skill levels). */
+/** Turning without the pitch change: what it would give and what it gives up. */
+export interface JumpUnlevelledPlan {
+  steering: [number, number][];
+  yawDeg: number;
+  /** Landing pitch, deg (same frame as `JumpPlan.pitchDeg`). */
+  pitchDeg: number;
+  rollDeg: number;
+}
+
+/**
+ * The mid-air set-up plan for a jump that lands into a turn: one plan per jump and class, shared
+ * by the skill levels (each has its own success rate and verdict).
+ */
 export interface JumpPlan {
   feasible: boolean;
   reason: PlanInfeasibleReason | null;
@@ -60,19 +80,60 @@ export interface JumpPlan {
   steering: [number, number][];
   /** Driven-wheel angular acceleration [t s, rad/s^2] (the pitch pulse). */
   rearWheelAccel: [number, number][];
-  /** Landing attitude the plan gives, deg (yaw positive = nose left, pitch positive = nose up, roll positive = right side down). */
+  /**
+   * Landing attitude the plan gives, deg, in the world (yaw about the vertical, positive = nose
+   * left; pitch above the horizontal, positive = nose up; roll positive = right side down).
+   */
   yawDeg: number;
   pitchDeg: number;
   rollDeg: number;
   targetYawDeg: number;
+  /** Pitch at takeoff (the face angle), deg. */
+  takeoffPitchDeg: number;
   /** Pitch change the flight should supply (landing slope minus face angle), deg. */
   pitchChangeDeg: number;
+  /** Pitch change the plan aims for: the one wanted, or the most the car can give, deg. */
+  pitchAimDeg: number;
   pitchPulse: PitchPulse;
   switches: SwitchWindow[];
-  /** Tightest switch's whole timing window, ms. */
+  /** The pulse's press and release with their timing windows (empty without a pulse). */
+  pulseSwitches: SwitchWindow[];
+  /** Tightest switch's whole timing window (steering and pulse), ms. */
   timingWindowMs: number;
+  /** Share of clean landings with all of the driver's errors (steering and pulse timing, takeoff speed). */
   successRate: Record<SkillLevel, number>;
+  /** The same with one source of error alone. */
+  successAlone: Record<ErrorSource, Record<SkillLevel, number>>;
+  /** The error that spoils most landings at each level. */
+  mainError: Record<SkillLevel, ErrorSource | null>;
   rollToleranceDeg: number;
+  /** Pitch tolerance of a clean landing, deg. */
+  pitchToleranceDeg: number | null;
+  /** Takeoff speed spread per skill level used for the success rate, m/s. */
+  speedSigmas: Record<SkillLevel, number>;
+  /** Turning without the pitch change, when it turns the nose clearly further (else null). */
+  withoutLevelling: JumpUnlevelledPlan | null;
+  /** Turn against pitch change supplied, deg (linear-guide estimates; empty when both can be had). */
+  tradeOff: { pitchChangeDeg: number; yawDeg: number }[];
+}
+
+/** What a whoops row asks of a car (flight/whoops.ts): speeds in m/s, times s, heights m. */
+export interface JumpWhoops {
+  count: number;
+  spacing: number;
+  bumpHeight: number;
+  skimSpeed: number;
+  doubles: { jumps: number; window: { min: number; max: number } | null; sweetSpotSpeed: number | null };
+  triples: {
+    jumps: number;
+    window: { min: number; max: number } | null;
+    sweetSpotSpeed: number | null;
+  } | null;
+  /** The fastest way the approach allows, its speed, and one hop's airtime and equivalent fall height. */
+  technique: WhoopsTechnique;
+  speed: number;
+  airtime: number;
+  equivalentFallHeight: number;
 }
 
 /** Touchdown of the flight at the planned takeoff speed. */
@@ -128,7 +189,7 @@ export interface JumpAnalysis {
   /** Highest point of the flight: along the section and height, m; time s. */
   apex: { d: number; z: number; t: number } | null;
   landing: JumpLanding | null;
-  /** Equivalent fall height of the landing, m (Levy et al. 2015 measure). */
+  /** Equivalent fall height of the landing, m (Levy et al. 2015 measure; for a whoops row, one hop of the chosen way). */
   equivalentFallHeight: number;
   /** The turn it lands into, or null. */
   turn: LandingTurn | null;
@@ -136,6 +197,8 @@ export interface JumpAnalysis {
   nextTurnDistance: number | null;
   /** The set-up plan (only for a jump that lands into a turn sharp enough, with airtime to spare). */
   plan: JumpPlan | null;
+  /** For a whoops row: the ways through it and the one this car's approach allows (else null). */
+  whoops: JumpWhoops | null;
   /** Verdict per skill level. */
   verdicts: Record<SkillLevel, SkillVerdict>;
   /** Verdict at the analysis's chosen skill level. */

@@ -8,7 +8,7 @@
  * an edited layout recomputes only the jumps whose own inputs changed.
  */
 import type { JumpSection, LayoutDocument } from "../format/layout-document";
-import { DEFAULT_SKILL_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
+import { DEFAULT_SKILL_SIGMAS, DEFAULT_SPEED_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
 import { cacheKey, cacheKeyOf, fnv1a64, hashOnce, type AnalysisCache } from "./analysis-cache";
 import { carPreset, type CarParams } from "../format/cars";
 import type { ResolvedSection } from "../track/geometry";
@@ -24,7 +24,12 @@ import { marshalRisk } from "../marshal/marshal-plan";
 import { marshalSettings, type MarshalSettings } from "../marshal/settings";
 import { checkRules, GUIDANCE_SETS, guidanceValues, type GuidanceOverrides } from "../track/rules";
 import { lapSpeed } from "../track/speed";
-import { DEFAULT_FAIL_COST_S, DEFAULT_TURN_LOOKAHEAD_S } from "../verdict/verdict";
+import {
+  DEFAULT_FAIL_COST_S,
+  DEFAULT_TURN_LOOKAHEAD_S,
+  DEFAULT_VERDICT_THRESHOLDS,
+  type VerdictThresholds,
+} from "../verdict/verdict";
 
 export interface AnalyseOptions {
   /** Car classes to analyse (default: the layout's own `carClasses`). */
@@ -41,6 +46,13 @@ export interface AnalyseOptions {
   cars?: Readonly<Record<string, CarParams>>;
   /** Timing error per skill level, s. */
   skillSigmas?: SkillSigmas;
+  /** Takeoff speed spread per skill level, m/s (default 0.3 / 0.15 / 0.05, estimates). */
+  speedSigmas?: SkillSigmas;
+  /**
+   * The values that decide the verdicts, SI units and radians (defaults:
+   * DEFAULT_VERDICT_THRESHOLDS); a club's smallest worthwhile gain and turn of the nose go here.
+   */
+  thresholds?: Partial<VerdictThresholds>;
   /** Look-ahead time for "lands into a turn", s (default 0.5). */
   lookaheadS?: number;
   /** Time lost to a failed landing, s (default 3). */
@@ -61,6 +73,23 @@ export const ANALYSIS_NOTE =
 
 /** Spacing of the downsampled centre line in the result, m. */
 export const LINE_SPACING = 0.5;
+
+interface AnalysisSettings {
+  skillSigmas: SkillSigmas;
+  speedSigmas: SkillSigmas;
+  lookaheadS: number;
+  failCost: number;
+  thresholds: VerdictThresholds;
+  seed: number;
+}
+
+/** Refuses a threshold that is not a finite number of at least 0, naming it. */
+function checkThresholds(t: VerdictThresholds): VerdictThresholds {
+  for (const [key, value] of Object.entries(t))
+    if (typeof value !== "number" || !Number.isFinite(value) || value < 0)
+      throw new RangeError(`thresholds.${key}: must be a finite number of at least 0`);
+  return t;
+}
 
 function resolveClasses(doc: LayoutDocument, options: AnalyseOptions): { id: string; car: CarParams }[] {
   const ids = options.classIds ?? doc.carClasses;
@@ -133,10 +162,13 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   if (!SKILL_LEVELS.includes(skill)) throw new RangeError(`skill: must be one of ${SKILL_LEVELS.join(", ")}`);
   const classes = resolveClasses(doc, options);
   const cache = options.cache;
-  const settings = {
+  const failCost = options.failCost ?? options.thresholds?.failCost ?? DEFAULT_FAIL_COST_S;
+  const settings: AnalysisSettings = {
     skillSigmas: options.skillSigmas ?? DEFAULT_SKILL_SIGMAS,
+    speedSigmas: options.speedSigmas ?? DEFAULT_SPEED_SIGMAS,
     lookaheadS: options.lookaheadS ?? DEFAULT_TURN_LOOKAHEAD_S,
-    failCost: options.failCost ?? DEFAULT_FAIL_COST_S,
+    failCost,
+    thresholds: checkThresholds({ ...DEFAULT_VERDICT_THRESHOLDS, ...options.thresholds, failCost }),
     seed: options.seed ?? 1,
   };
   const guidance = options.guidance ?? doc.guidance;
@@ -189,7 +221,7 @@ function computeAnalysis(
   skill: SkillLevel,
   rulesFor: (m: LayoutMeasures, classes: readonly ClassAnalysis[]) => LayoutAnalysis["rules"],
   riskFor: RiskFor,
-  settings: { skillSigmas: SkillSigmas; lookaheadS: number; failCost: number; seed: number },
+  settings: AnalysisSettings,
   cache: AnalysisCache | undefined,
 ): LayoutAnalysis {
   const m = measureLayout(doc);

@@ -2,6 +2,7 @@
  * Track length saved by a mid-air set-up, the time it saves, the expected gain at a skill level,
  * and the verdict for a jump (engine.md section 6). SI units and radians.
  */
+import type { JumpReason } from "../words";
 
 /** Default time lost to a failed landing: a roll-over that needs a marshal, s (an estimate). */
 export const DEFAULT_FAIL_COST_S = 3;
@@ -11,8 +12,39 @@ export const DEFAULT_TURN_LOOKAHEAD_S = 0.5;
 export const DEFAULT_MIN_TURN_ANGLE = (20 * Math.PI) / 180;
 /** Flights shorter than this leave no time for a counter-steer and a return, s (an estimate). */
 export const DEFAULT_MIN_AIRTIME_S = 0.3;
-/** Smallest expected gain worth the effort, s per pass (an estimate). */
-export const DEFAULT_GAIN_FLOOR_S = 0.02;
+/**
+ * Smallest expected gain per pass worth trying a set-up for, s (an estimate: about what a driver
+ * can feel on the lap timer; a club may set its own).
+ */
+export const DEFAULT_MIN_GAIN_PER_PASS_S = 0.05;
+/**
+ * Smallest turn of the nose worth setting up for, rad (10 deg, an estimate: less is within what a
+ * driver corrects on landing anyway; a club may set its own).
+ */
+export const DEFAULT_MIN_NOSE_TURN = (10 * Math.PI) / 180;
+
+/** The values that decide a verdict. SI units and radians. */
+export interface VerdictThresholds {
+  /** Turns gentler than this get no set-up, rad. */
+  minTurnAngle: number;
+  /** Flights shorter than this get no set-up, s. */
+  minAirtime: number;
+  /** Smallest expected gain worth a set-up, s per pass. */
+  minGainPerPass: number;
+  /** Smallest turn of the nose worth a set-up, rad. */
+  minNoseTurn: number;
+  /** Time lost to a failed landing, s. */
+  failCost: number;
+}
+
+/** The defaults, each an estimate (docs/decisions/0108). */
+export const DEFAULT_VERDICT_THRESHOLDS: Readonly<VerdictThresholds> = Object.freeze({
+  minTurnAngle: DEFAULT_MIN_TURN_ANGLE,
+  minAirtime: DEFAULT_MIN_AIRTIME_S,
+  minGainPerPass: DEFAULT_MIN_GAIN_PER_PASS_S,
+  minNoseTurn: DEFAULT_MIN_NOSE_TURN,
+  failCost: DEFAULT_FAIL_COST_S,
+});
 
 /**
  * Whether a jump lands into a turn: the next turn begins within the distance covered in
@@ -61,14 +93,17 @@ export function expectedGain(successRate: number, saved: number, failCost = DEFA
   return p * saved - (1 - p) * failCost;
 }
 
-import type { JumpReason } from "../words";
-
 export type JumpVerdictKind = "set-up" | "straight";
-/** The reasons this function decides; the analysis adds "cannot-clear" and "flown-over". */
-export type StraightReason = Extract<
-  JumpReason,
-  "no-turn" | "turn-too-gentle" | "not-enough-airtime" | "too-risky"
->;
+
+/**
+ * Why a jump that might be set up for is taken straight (the reasons and their words:
+ * ../words.ts; the sentences: verdict-text.ts): the first that applies, in this order: no turn,
+ * turn too gentle, not enough airtime, the plan's own outcome (no wheel spin, no useful yaw,
+ * cannot land flat, levelling costs the turn), nose turn too small, too risky (expected gain
+ * <= 0), gain too small (under the smallest worthwhile gain). The analysis adds "cannot-clear",
+ * "flown-over" and "whoops".
+ */
+export type StraightReason = Exclude<JumpReason, "cannot-clear" | "flown-over" | "whoops">;
 
 export interface JumpVerdictInput {
   landsIntoTurn: boolean;
@@ -78,11 +113,13 @@ export interface JumpVerdictInput {
   airtime: number;
   /** Expected gain at this skill level, s per pass. */
   expectedGain: number;
-  /** False when no set-up plan fits the flight (treated as not enough airtime). */
-  planFeasible?: boolean;
-  minTurnAngle?: number;
-  minAirtime?: number;
-  gainFloor?: number;
+  /** The plan's reason when it offers no plan (null or undefined when it does). */
+  planReason?: StraightReason | null;
+  /** Turn of the nose the plan gives at touchdown, rad (its sign is ignored; default: enough). */
+  noseTurn?: number;
+  /** Turn of the nose turning alone would give (without the pitch change), rad, when known. */
+  noseTurnUnlevelled?: number | null;
+  thresholds?: Partial<VerdictThresholds>;
 }
 
 export interface JumpVerdict {
@@ -91,19 +128,23 @@ export interface JumpVerdict {
 }
 
 /**
- * The verdict for one jump at one skill level: "set-up" when it lands into a turn and the
- * expected gain is above a small floor, otherwise "straight" with the first reason that applies
- * (no turn, turn too gentle, not enough airtime, too risky). The sentences drivers read, with
- * the numbers, are written from it by `describeVerdicts` (jump-verdicts.ts).
+ * The verdict for one jump at one skill level: "set-up" when it lands into a sharp enough turn,
+ * the plan turns the nose far enough and the expected gain reaches the smallest worthwhile gain;
+ * otherwise "straight" with the first reason that applies (see StraightReason).
  */
 export function jumpVerdict(input: JumpVerdictInput): JumpVerdict {
-  const minTurn = input.minTurnAngle ?? DEFAULT_MIN_TURN_ANGLE;
-  const minAir = input.minAirtime ?? DEFAULT_MIN_AIRTIME_S;
-  const floor = input.gainFloor ?? DEFAULT_GAIN_FLOOR_S;
+  const t = { ...DEFAULT_VERDICT_THRESHOLDS, ...input.thresholds };
   const straight = (reason: StraightReason): JumpVerdict => ({ verdict: "straight", reason });
   if (!input.landsIntoTurn) return straight("no-turn");
-  if (Math.abs(input.turnAngle) < minTurn) return straight("turn-too-gentle");
-  if (input.airtime < minAir || input.planFeasible === false) return straight("not-enough-airtime");
-  if (!(input.expectedGain > floor)) return straight("too-risky");
+  if (Math.abs(input.turnAngle) < t.minTurnAngle) return straight("turn-too-gentle");
+  if (input.airtime < t.minAirtime) return straight("not-enough-airtime");
+  if (input.planReason) return straight(input.planReason);
+  const nose = Math.abs(input.noseTurn ?? Infinity);
+  if (nose < t.minNoseTurn) {
+    const alone = Math.abs(input.noseTurnUnlevelled ?? 0);
+    return straight(alone >= t.minNoseTurn ? "levelling-costs-turn" : "nose-turn-too-small");
+  }
+  if (!(input.expectedGain > 0)) return straight("too-risky");
+  if (input.expectedGain < t.minGainPerPass) return straight("gain-too-small");
   return { verdict: "set-up", reason: null };
 }

@@ -1,5 +1,26 @@
-import type { JumpAnalysis } from "~/analysis";
+import { WHOOPS_WORDS, type JumpAnalysis, type JumpWhoops } from "~/analysis";
 import { degrees, metres, seconds, speed } from "./format";
+
+const range = (w: JumpWhoops["doubles"]) =>
+  w.window
+    ? `${w.window.min.toFixed(1)} to ${w.window.max.toFixed(1)} m/s, ${w.jumps} jumps a pass`
+    : "out of reach";
+
+/** A whoops row's ways through it and the speed each needs. */
+function whoopsRows(w: JumpWhoops): [string, string][] {
+  return [
+    ["Way through at this approach", `${WHOOPS_WORDS[w.technique]} (${speed(w.speed)})`],
+    ["Skimming over the tops needs", speed(w.skimSpeed)],
+    ["Jumping through in doubles", range(w.doubles)],
+    ["Jumping through in triples", w.triples ? range(w.triples) : "row too short"],
+    [
+      "One hop of the chosen way",
+      w.technique === "roll"
+        ? "no flight: the wheels follow the bumps"
+        : `${seconds(w.airtime)} in the air, equivalent fall height ${metres(w.equivalentFallHeight)}`,
+    ],
+  ];
+}
 
 const LANDED: Record<string, string> = {
   short: "short of the ramp (cases the jump)",
@@ -9,6 +30,10 @@ const LANDED: Record<string, string> = {
 
 /** The jump's numbers at the planned takeoff speed, each with its unit. */
 export function JumpFacts({ jump: j }: { jump: JumpAnalysis }) {
+  if (j.whoops)
+    return (
+      <FactList rows={[["Most the approach allows", speed(j.approachMaxSpeed)], ...whoopsRows(j.whoops)]} />
+    );
   const rows: [string, string][] = [
     [
       "Planned takeoff speed",
@@ -48,6 +73,10 @@ export function JumpFacts({ jump: j }: { jump: JumpAnalysis }) {
           : "none",
     ],
   ];
+  return <FactList rows={rows} />;
+}
+
+function FactList({ rows }: { rows: [string, string][] }) {
   return (
     <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[auto_1fr]">
       {rows.map(([term, value]) => (

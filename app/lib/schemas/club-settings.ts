@@ -1,12 +1,15 @@
 /**
- * The club settings form: which track guidance set the rule checks use, and the club's own value
- * for any rule (an empty field keeps the set's value). Both sides import it; the server also reads
- * stored overrides back through `storedOverridesSchema`.
+ * The club settings form: which track guidance set the rule checks use, the club's own value for
+ * any rule and for the set-up verdicts' thresholds (an empty field keeps the default). Both sides
+ * import it; the server also reads stored values back through `storedOverridesSchema` and
+ * `storedVerdictSchema`.
  */
 import { z } from "zod";
 import { parseNumberText } from "~/lib/number-text";
 import { carClassesField } from "./layouts";
 import {
+  DEFAULT_MIN_GAIN_PER_PASS_S,
+  DEFAULT_MIN_NOSE_TURN,
   FIELD_LIMITS,
   GUIDANCE_SET_IDS,
   GUIDANCE_SET_LABELS,
@@ -99,7 +102,44 @@ export const RULE_FIELDS: readonly {
   },
 ];
 
-function overrideField(f: (typeof RULE_FIELDS)[number]) {
+/** The club's own values for the set-up verdicts, in the form's units (s, deg). */
+export interface VerdictSettings {
+  minGainPerPass?: number;
+  minNoseTurnDeg?: number;
+}
+export type VerdictFieldId = keyof VerdictSettings;
+
+/** The set-up verdicts' values a club may set: what each asks for, its range and default (an estimate). */
+export const VERDICT_FIELDS: readonly {
+  id: VerdictFieldId;
+  label: string;
+  unit: string;
+  min: number;
+  max: number;
+  default: number;
+  hint: string;
+}[] = [
+  {
+    id: "minGainPerPass",
+    label: "Smallest worthwhile gain per pass",
+    unit: "s",
+    min: 0,
+    max: 2,
+    default: DEFAULT_MIN_GAIN_PER_PASS_S,
+    hint: "A set-up is recommended only when its expected gain a pass reaches this.",
+  },
+  {
+    id: "minNoseTurnDeg",
+    label: "Smallest turn of the nose worth a set-up",
+    unit: "deg",
+    min: 0,
+    max: 45,
+    default: Math.round((DEFAULT_MIN_NOSE_TURN * 180) / Math.PI),
+    hint: "Less turn than this is taken straight, however safe.",
+  },
+];
+
+function overrideField(f: { label: string; unit: string; min: number; max: number }) {
   const unit = f.unit === "m" ? " m" : "";
   return z
     .string({ error: `${f.label}: enter a number or leave it empty.` })
@@ -134,28 +174,47 @@ export const clubCarClassesSchema = z.object({
   carClasses: carClassesField,
 });
 
-/** The settings form: guidance set plus one optional text field per rule. */
+const verdictShape = Object.fromEntries(VERDICT_FIELDS.map((f) => [f.id, overrideField(f)])) as Record<
+  VerdictFieldId,
+  ReturnType<typeof overrideField>
+>;
+
+/** The settings form: guidance set plus one optional text field per rule and per verdict value. */
 export const clubSettingsSchema = z.object({
   guidanceSet: z.enum(GUIDANCE_SET_IDS, {
     error: `Choose a guidance set: ${wordList(GUIDANCE_SET_IDS.map((id) => GUIDANCE_SET_LABELS[id]))}.`,
   }),
   ...overrideShape,
+  ...verdictShape,
 });
 
 export type ClubSettingsInput = z.infer<typeof clubSettingsSchema>;
 
-/** The parsed form as a guidance set and the overrides that were filled in. */
+/** The parsed form as a guidance set, the overrides and the verdict values that were filled in. */
 export function settingsFromForm(input: ClubSettingsInput): {
   guidanceSet: GuidanceSetId;
   overrides: GuidanceOverrides;
+  verdict?: VerdictSettings;
 } {
   const overrides: GuidanceOverrides = {};
   for (const f of RULE_FIELDS) {
     const value = input[f.id];
     if (typeof value === "number") overrides[f.id] = value;
   }
-  return { guidanceSet: input.guidanceSet, overrides };
+  const verdict: VerdictSettings = {};
+  for (const f of VERDICT_FIELDS) {
+    const value = input[f.id];
+    if (typeof value === "number") verdict[f.id] = value;
+  }
+  return { guidanceSet: input.guidanceSet, overrides, ...(Object.keys(verdict).length ? { verdict } : {}) };
 }
+
+/** Verdict values as stored (under "verdict" in clubs.guidance_overrides), with the form's ranges. */
+export const storedVerdictSchema = z.object(
+  Object.fromEntries(
+    VERDICT_FIELDS.map((f) => [f.id, z.number().min(f.min).max(f.max).optional()]),
+  ) as Record<VerdictFieldId, z.ZodOptional<z.ZodNumber>>,
+);
 
 /**
  * Overrides as stored in clubs.guidance_overrides, checked with the same ranges as the form, so a

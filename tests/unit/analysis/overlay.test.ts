@@ -45,12 +45,15 @@ describe("buildOverlay", () => {
     }
   });
 
-  it("marks a jump the approach cannot clear, and a set-up for an expert", () => {
+  it("marks a jump the approach cannot clear, and a set-up for a steady expert", () => {
     const short = analyseLayout(ovalWithJump(BIG_DOUBLE, { approach: 1 }));
     const o = buildOverlay(short, "buggy-4wd-10");
     expect(o.jumps[0].verdict).toBe("cannot-clear");
     expect(o.jumps[0].label).toBe("Cannot clear: the approach is too short");
-    const hairpin = analyseLayout(ovalWithJump(BIG_DOUBLE, { after: 0.5 }));
+    // An expert who reaches the jump at the same speed every lap (takeoff speed spread 0.02 m/s).
+    const hairpin = analyseLayout(ovalWithJump(BIG_DOUBLE, { after: 0.5 }), {
+      speedSigmas: { novice: 0.5, club: 0.3, expert: 0.02 },
+    });
     const e = buildOverlay(hairpin, "buggy-4wd-10", "expert").jumps[0];
     expect(e.verdict).toBe("set-up");
     expect(e.label).toMatch(/^Set up in the air: land with the nose \d+° left$/);

@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
 import {
+  DEFAULT_MIN_GAIN_PER_PASS_S,
+  DEFAULT_MIN_NOSE_TURN,
+  DEFAULT_VERDICT_THRESHOLDS,
   expectedGain,
   jumpVerdict,
   landsIntoTurn,
@@ -33,21 +36,57 @@ describe("track length and time saved", () => {
 });
 
 describe("jump verdict", () => {
-  const good = { landsIntoTurn: true, turnAngle: rad(90), airtime: 0.8, expectedGain: 0.1 };
-  it("sets up when a worthwhile gain is expected", () => {
-    const v = jumpVerdict(good);
-    expect(v.verdict).toBe("set-up");
-    expect(v.reason).toBeNull();
+  const good = {
+    landsIntoTurn: true,
+    turnAngle: rad(90),
+    airtime: 0.8,
+    expectedGain: 0.1,
+    noseTurn: rad(20),
+  };
+  it("sets up when the nose turns far enough and a worthwhile gain is expected", () => {
+    expect(jumpVerdict(good)).toEqual({ verdict: "set-up", reason: null });
   });
 
   it("gives the first reason that applies for taking it straight", () => {
     expect(jumpVerdict({ ...good, landsIntoTurn: false }).reason).toBe("no-turn");
     expect(jumpVerdict({ ...good, turnAngle: rad(10) }).reason).toBe("turn-too-gentle");
     expect(jumpVerdict({ ...good, airtime: 0.2 }).reason).toBe("not-enough-airtime");
-    expect(jumpVerdict({ ...good, planFeasible: false }).reason).toBe("not-enough-airtime");
     const risky = jumpVerdict({ ...good, expectedGain: -0.4 });
-    expect(risky.reason).toBe("too-risky");
-    expect(risky.verdict).toBe("straight");
-    expect(jumpVerdict({ ...good, expectedGain: 0.01 }).reason).toBe("too-risky");
+    expect(risky).toEqual({ verdict: "straight", reason: "too-risky" });
+    expect(jumpVerdict({ ...good, expectedGain: 0.03 }).reason).toBe("gain-too-small");
+  });
+
+  it("names the plan's own outcome, not the airtime, when no plan fits", () => {
+    for (const reason of [
+      "no-wheel-spin",
+      "no-useful-yaw",
+      "cannot-land-flat",
+      "levelling-costs-turn",
+    ] as const)
+      expect(jumpVerdict({ ...good, planReason: reason }).reason).toBe(reason);
+    expect(jumpVerdict({ ...good, planReason: "not-enough-airtime" }).reason).toBe("not-enough-airtime");
+  });
+
+  it("a turn of the nose too small to be worth it is named, and blamed on levelling when turning alone would do", () => {
+    expect(jumpVerdict({ ...good, noseTurn: rad(2.5) }).reason).toBe("nose-turn-too-small");
+    expect(jumpVerdict({ ...good, noseTurn: rad(2.5), noseTurnUnlevelled: rad(6) }).reason).toBe(
+      "nose-turn-too-small",
+    );
+    expect(jumpVerdict({ ...good, noseTurn: rad(2.5), noseTurnUnlevelled: rad(17) }).reason).toBe(
+      "levelling-costs-turn",
+    );
+  });
+
+  it("the smallest worthwhile gain and turn of the nose are the club's to set", () => {
+    // Defaults (estimates, docs/decisions/0108): 0.05 s a pass, 10 deg of nose.
+    expect(DEFAULT_MIN_GAIN_PER_PASS_S).toBe(0.05);
+    expect(DEFAULT_MIN_NOSE_TURN).toBeCloseTo(rad(10), 12);
+    expect(DEFAULT_VERDICT_THRESHOLDS.minGainPerPass).toBe(DEFAULT_MIN_GAIN_PER_PASS_S);
+    const small = { ...good, expectedGain: 0.03, noseTurn: rad(8) };
+    expect(jumpVerdict(small).reason).toBe("nose-turn-too-small");
+    expect(jumpVerdict({ ...small, thresholds: { minNoseTurn: rad(5) } }).reason).toBe("gain-too-small");
+    expect(jumpVerdict({ ...small, thresholds: { minNoseTurn: rad(5), minGainPerPass: 0.02 } }).verdict).toBe(
+      "set-up",
+    );
   });
 });

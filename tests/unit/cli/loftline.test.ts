@@ -160,19 +160,24 @@ describe("loftline attitude and airplan", () => {
       airtime: 0.65,
       turn: "left",
       pitchChangeDeg: -20,
+      takeoffPitchDeg: 25,
     });
     expect(plan.code).toBe(0);
     const p = JSON.parse(plan.stdout);
     for (const k of ["steering", "yawDeg", "pitchDeg", "rollDeg", "timingWindowMs", "successRate"])
       expect(p).toHaveProperty(k);
     expect(keys(p.successRate)).toEqual(["club", "expert", "novice"]);
+    expect(keys(p.successAlone)).toEqual(["pulse", "speed", "steering"]);
+    expect(["steering", "pulse", "speed", null]).toContain(p.mainError.club);
     expect(p.yawDeg).toBeGreaterThan(3);
+    expect(p.initialPitchDeg).toBe(25);
     const replay = await loftline("attitude", {
       car: "buggy-4wd-10",
       speed: 11,
       duration: 0.65,
       steering: p.steering,
       rearWheelAccel: p.rearWheelAccel,
+      initialPitchDeg: p.initialPitchDeg,
     });
     expect(replay.code).toBe(0);
     const a = JSON.parse(replay.stdout);

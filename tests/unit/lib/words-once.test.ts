@@ -8,12 +8,14 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
 import {
+  ERROR_WORDS,
   GUIDANCE_SET_LABELS,
   JUMP_PRESET_LABELS,
   REASON_TEXT,
   SKILL_LABELS,
   SURFACE_LABELS,
   VERDICT_WORDS,
+  WHOOPS_WORDS,
 } from "~/analysis";
 import { VERDICT_MARKS } from "~/lib/verdict-marks";
 
@@ -63,6 +65,8 @@ describe("the product's words are defined once", () => {
     ["guidance sets", GUIDANCE_SET_LABELS],
     ["verdict words", VERDICT_WORDS],
     ["verdict reasons", REASON_TEXT],
+    ["driver's errors", ERROR_WORDS],
+    ["ways through a whoops row", WHOOPS_WORDS],
   ];
   it.each(labels)("%s: each label is written only in words.ts", (_name, words) => {
     for (const word of Object.values(words))
@@ -76,6 +80,7 @@ describe("the product's words are defined once", () => {
       /\[\s*"club",\s*"national"\s*\]/,
       /\[\s*"tabletop",\s*"double",/,
       /\[\s*"set-up",\s*"straight",\s*"cannot-clear"\s*\]/,
+      /\[\s*"steering",\s*"pulse",\s*"speed"\s*\]/,
     ];
     for (const list of lists) {
       const copies = sources.filter((s) => s.path !== WORDS && list.test(s.text)).map((s) => s.path);
