@@ -1,8 +1,10 @@
 /**
  * `npm run demo`: the whole product on one machine, with the invented demo club.
  * Creates the data folder, migrates the SQLite file, adds the demo data (again harmlessly when it
- * is already there), builds the app when the sources changed, starts the local fake SMTP server and
- * the built app on http://localhost:3000, prints the demo accounts, and stops both on Ctrl-C.
+ * is already there), builds the app when the sources changed, starts the local fake SMTP and S3
+ * servers (files under DATA_DIR/s3) and the built app on http://localhost:3000, prints the demo
+ * accounts, and stops them all on Ctrl-C. With S3_BUCKET or FILE_STORE set, the app uses that
+ * store instead of the fake one.
  *
  *   npm run demo               keep the existing demo database, bring the demo data back
  *   npm run demo -- --reset    delete the demo database, outbox and uploads first and start over
@@ -14,6 +16,7 @@ import { closeDb, getDb, migrateDatabase } from "~/db/client.server";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
 import { DEMO_CLUB_NAME, seedDemoData } from "~/db/demo-data.server";
 import { startFakeSmtp, type FakeSmtp } from "~/mail/fake-smtp.server";
+import { startFakeS3, type FakeS3 } from "~/storage/fake-s3.server";
 import { buildApp, buildIsStale, startAppServer } from "./lib/app-server";
 
 const USAGE = "Usage: npm run demo [-- --reset]";
@@ -43,7 +46,7 @@ if (reset) {
     console.error("--reset only deletes the local demo file; unset DATABASE_URL to use it.");
     process.exit(2);
   }
-  for (const name of ["loftline.db", "loftline.db-wal", "loftline.db-shm", "outbox", "files"]) {
+  for (const name of ["loftline.db", "loftline.db-wal", "loftline.db-shm", "outbox", "files", "s3"]) {
     fs.rmSync(path.join(dataDir, name), { recursive: true, force: true });
   }
   console.log(`Removed the demo database, outbox and uploaded files in ${dataDir}.`);
@@ -65,6 +68,8 @@ console.log(
 );
 
 const smtp = await startSmtp();
+const s3 = process.env.S3_BUCKET || process.env.FILE_STORE ? undefined : await startS3();
+const closeFakes = () => Promise.all([smtp.close(), s3?.close()]);
 const app = await startAppServer({
   port,
   env: {
@@ -73,11 +78,12 @@ const app = await startAppServer({
     LOFTLINE_INSECURE_COOKIE: "1", // plain http on localhost: a Secure cookie would never come back
     DATA_DIR: dataDir,
     SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
+    ...s3?.env,
     APP_URL: process.env.APP_URL ?? `http://localhost:${port}`,
     SESSION_SECRET: process.env.SESSION_SECRET ?? demoSessionSecret(),
   },
 }).catch(async (error: Error) => {
-  await smtp.close();
+  await closeFakes();
   console.error(`Could not start the app on port ${port}: ${error.message}. Is something else using it?`);
   process.exit(1);
 });
@@ -86,6 +92,7 @@ console.log(`
 Loftline demo is running.
   App:     ${app.url}
   Outbox:  ${app.url}/outbox   (every e-mail the app sends lands here; SMTP on port ${smtp.port})
+  Files:   ${s3 ? `fake S3 server on port ${s3.port} (bucket ${s3.bucket}, objects in ${s3.dir})` : "the configured store"}
   Data:    ${dataDir}
 
 Demo accounts (${DEMO_CLUB_NAME}):
@@ -97,7 +104,7 @@ let stopping = false;
 async function stop(code: number) {
   if (stopping) return;
   stopping = true;
-  await Promise.all([app.stop(), smtp.close()]);
+  await Promise.all([app.stop(), closeFakes()]);
   process.exit(code);
 }
 process.on("SIGINT", () => void stop(0));
@@ -113,6 +120,16 @@ async function startSmtp(): Promise<FakeSmtp> {
     return await startFakeSmtp({ port: 2525 });
   } catch {
     return startFakeSmtp({ port: 0 });
+  }
+}
+
+/** The fake S3 server on its usual port 4568, or any free one when something else holds it. */
+async function startS3(): Promise<FakeS3> {
+  const dir = path.join(dataDir, "s3");
+  try {
+    return await startFakeS3({ port: 4568, dir });
+  } catch {
+    return startFakeS3({ port: 0, dir });
   }
 }
 

@@ -4,12 +4,13 @@
  * check, the socket's address and the CSP nonce are in place. `npm run build` bundles it to
  * build/serve/index.js (esbuild; packages stay imports from node_modules), which runs with plain
  * node: no TypeScript loader in the serving process. Environment: PORT (3000), HOST (all interfaces), APP_URL, TRUSTED_PROXIES,
- * CLIENT_ADDRESS_HEADER, NODE_ENV (production); see the README's configuration table.
+ * CLIENT_ADDRESS_HEADER, NODE_ENV (production), FILE_STORE and S3_*; see the README's configuration table.
  */
 import { createServer } from "node:http";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import type { ServerBuild } from "react-router";
+import { fileStore } from "~/storage/storage.server";
 
 // Before React loads: react and react-dom each pick their production or development build from
 // NODE_ENV when first imported, and the two must agree.
@@ -63,6 +64,30 @@ server.listen(port, process.env.HOST, () => {
   const actual = typeof address === "object" && address ? address.port : port;
   console.log(`[loftline] serving the built app on http://localhost:${actual}`);
 });
+await checkFileStore();
+
+/**
+ * Says at start-up whether the file store (S3 bucket or local folder) can be used. A store that
+ * cannot is reported clearly but does not stop the server: pages without files keep working and
+ * file requests answer 503 until the store is back.
+ */
+async function checkFileStore() {
+  let store;
+  try {
+    store = fileStore();
+  } catch (error) {
+    console.error(`[loftline] ${(error as Error).message}`);
+    process.exit(2);
+  }
+  try {
+    await store.check();
+    console.log(`[loftline] uploaded files go to ${store.describe()}`);
+  } catch (error) {
+    console.error(
+      `[loftline] ${(error as Error).message} (${store.describe()}). Uploads and photos answer 503 until it is fixed.`,
+    );
+  }
+}
 
 function stop() {
   server.close(() => process.exit(0));

@@ -28,6 +28,25 @@ export const config = {
     if (!(mb > 0)) throw new Error(`LOFTLINE_CLUB_FILE_QUOTA_MB must be a number above 0 (got "${raw}")`);
     return Math.round(mb * 1024 * 1024);
   },
+  /**
+   * Where uploaded files live: "s3" (any S3-compatible store; the default when S3_BUCKET is set)
+   * or "local" (DATA_DIR/files, one machine only).
+   */
+  get fileStore(): "s3" | "local" {
+    const raw = process.env.FILE_STORE ?? (process.env.S3_BUCKET ? "s3" : "local");
+    if (raw !== "s3" && raw !== "local") throw new Error(`FILE_STORE must be "s3" or "local" (got "${raw}")`);
+    return raw;
+  },
+  /** The S3 store: bucket, endpoint (empty for AWS itself), region and credentials. */
+  get s3() {
+    return {
+      bucket: process.env.S3_BUCKET ?? "",
+      endpoint: process.env.S3_ENDPOINT || undefined,
+      region: process.env.S3_REGION ?? "us-east-1",
+      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
+      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
+    };
+  },
   get appUrl() {
     return process.env.APP_URL ?? `http://localhost:${process.env.PORT ?? 3000}`;
   },

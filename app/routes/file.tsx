@@ -1,6 +1,6 @@
 import type { Route } from "./+types/file";
 import { requireClubRole, requireUser } from "~/auth/permissions.server";
-import { readStoredFile } from "~/storage/uploads.server";
+import { findStoredFile, openStoredFile } from "~/storage/uploads.server";
 
 /**
  * A stored file (a site photo) for members of the club that uploaded it. Anyone else gets 404, so
@@ -9,7 +9,7 @@ import { readStoredFile } from "~/storage/uploads.server";
 export async function loader({ request, params }: Route.LoaderArgs) {
   await requireUser(request, { api: true });
   const notFound = () => Response.json({ error: "No such file." }, { status: 404 });
-  const file = params.fileId ? await readStoredFile(params.fileId) : null;
+  const file = params.fileId ? await findStoredFile(params.fileId) : null;
   if (!file) throw notFound();
   try {
     await requireClubRole(request, file.clubId, "member", { api: true });
@@ -17,10 +17,13 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     if (error instanceof Response && (error.status === 403 || error.status === 404)) throw notFound();
     throw error;
   }
-  return new Response(file.bytes as Uint8Array<ArrayBuffer>, {
+  // Opened only after the permission check; streamed from the store (503 when it is down).
+  const opened = await openStoredFile(file.storageKey);
+  if (!opened) throw notFound();
+  return new Response(opened.body, {
     headers: {
       "Content-Type": file.contentType,
-      "Content-Length": String(file.bytes.byteLength),
+      "Content-Length": String(opened.size),
       "Cache-Control": "private, max-age=31536000, immutable",
       "X-Content-Type-Options": "nosniff",
     },

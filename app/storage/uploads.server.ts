@@ -10,6 +10,7 @@ import { getDb } from "~/db/client.server";
 import { files } from "~/db/schema";
 import { config } from "~/lib/config.server";
 import { fileStore } from "./storage.server";
+import { StoreUnavailableError, storeUnavailableResponse } from "./store.server";
 
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 
@@ -104,7 +105,15 @@ export async function receiveUpload(
   }
   const id = crypto.randomUUID();
   const storageKey = `${owner.clubId}/${id}.${type.ext}`;
-  await fileStore().put(storageKey, upload.bytes);
+  try {
+    await fileStore().put(storageKey, upload.bytes);
+  } catch (err) {
+    if (err instanceof StoreUnavailableError) {
+      console.error(`[loftline] upload refused: ${err.message}`);
+      throw storeUnavailableResponse(kind.field);
+    }
+    throw err;
+  }
   const db = await getDb();
   const size = upload.bytes.length;
   let inserted: number;
@@ -129,13 +138,40 @@ export async function receiveUpload(
   return { fileId: id, contentType: upload.type, size, fields };
 }
 
-/** A stored file's bytes and metadata, or null. */
-export async function readStoredFile(fileId: string) {
+/** A stored file's record (club, key, type, size), or null. */
+export async function findStoredFile(fileId: string) {
   const db = await getDb();
   const [row] = await db
-    .select({ clubId: files.clubId, storageKey: files.storageKey, contentType: files.contentType })
+    .select({
+      clubId: files.clubId,
+      storageKey: files.storageKey,
+      contentType: files.contentType,
+      size: files.size,
+    })
     .from(files)
     .where(eq(files.id, fileId));
+  return row ?? null;
+}
+
+/**
+ * The file's bytes as a stream (never held whole), or null when the store has lost it. A store
+ * that cannot be reached throws a 503 JSON Response.
+ */
+export async function openStoredFile(storageKey: string) {
+  try {
+    return await fileStore().open(storageKey);
+  } catch (err) {
+    if (err instanceof StoreUnavailableError) {
+      console.error(`[loftline] file read refused: ${err.message}`);
+      throw storeUnavailableResponse();
+    }
+    throw err;
+  }
+}
+
+/** A stored file's bytes and metadata, or null (small files and tests). */
+export async function readStoredFile(fileId: string) {
+  const row = await findStoredFile(fileId);
   if (!row) return null;
   const bytes = await fileStore().get(row.storageKey);
   return bytes ? { ...row, bytes } : null;

@@ -15,8 +15,11 @@ export interface TestApp {
   base: string;
   dataDir: string;
   dbFile: string;
-  /** Starts the server (again) on the same data folder and port, with extra environment. */
-  start(env?: Record<string, string>): Promise<AppServer>;
+  /**
+   * Starts the server (again) on the same data folder and port (or another port: a second process
+   * on the same data, whose public address stays `base`), with extra environment.
+   */
+  start(env?: Record<string, string>, onPort?: number): Promise<AppServer>;
   remove(): void;
 }
 
@@ -39,9 +42,9 @@ export async function prepareApp(opts: { quiet?: boolean } = {}): Promise<TestAp
     base,
     dataDir,
     dbFile,
-    start: (env = {}) =>
+    start: (env = {}, onPort = port) =>
       startAppServer({
-        port,
+        port: onPort,
         output: "ignore",
         env: {
           NODE_ENV: "production",

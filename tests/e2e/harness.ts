@@ -1,6 +1,6 @@
 /**
  * Global set-up of the browser tests: for the whole run, a fresh temporary DATA_DIR with a migrated
- * SQLite file and the demo data, the local fake SMTP server on a free port and the built app (built
+ * SQLite file and the demo data, the local fake SMTP and S3 servers on free ports and the built app (built
  * first when its sources changed) on another free port, with the same environment as `npm run demo`.
  * Everything is stopped and the folder removed at the end.
  */
@@ -11,6 +11,7 @@ import type { TestProject } from "vitest/node";
 import { closeDb, getDb, migrateDatabase } from "~/db/client.server";
 import { seedDemoData } from "~/db/demo-data.server";
 import { startFakeSmtp } from "~/mail/fake-smtp.server";
+import { startFakeS3 } from "~/storage/fake-s3.server";
 import { buildApp, freePort, startAppServer } from "../../scripts/lib/app-server";
 
 declare module "vitest" {
@@ -32,6 +33,7 @@ export default async function setup(project: TestProject) {
   if (built !== null) console.log(`[e2e] built the app in ${built.toFixed(1)} s`);
 
   const smtp = await startFakeSmtp({ port: 0, dir: path.join(dataDir, "outbox") });
+  const s3 = await startFakeS3({ port: 0, dir: path.join(dataDir, "s3") });
   const port = await freePort();
   const app = await startAppServer({
     port,
@@ -43,11 +45,12 @@ export default async function setup(project: TestProject) {
       DATA_DIR: dataDir,
       DATABASE_URL: `file:${path.join(dataDir, "loftline.db")}`,
       SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
+      ...s3.env,
       APP_URL: `http://localhost:${port}`,
       SESSION_SECRET: "e2e-session-secret",
     },
   }).catch(async (error) => {
-    await smtp.close();
+    await Promise.all([smtp.close(), s3.close()]);
     throw error;
   });
 
@@ -56,7 +59,7 @@ export default async function setup(project: TestProject) {
 
   return async () => {
     await app.stop();
-    await smtp.close();
+    await Promise.all([smtp.close(), s3.close()]);
     fs.rmSync(dataDir, { recursive: true, force: true });
   };
 }

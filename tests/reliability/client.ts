@@ -141,9 +141,11 @@ export function fillPath(pattern: string, ids: Record<string, string>): string {
   });
 }
 
-/** Photos stored in the data folder so far. */
+/** Photos stored so far: objects in the fake S3 server's folder (s3rver's "<key>._S3rver_object"). */
 export function storedPhotos(): number {
-  const dir = path.join(inject("dataDir"), "files");
+  const dir = path.join(inject("dataDir"), "s3");
   if (!fs.existsSync(dir)) return 0;
-  return fs.readdirSync(dir, { recursive: true }).filter((f) => /\.(png|jpg)$/.test(String(f))).length;
+  return fs
+    .readdirSync(dir, { recursive: true })
+    .filter((f) => /\.(png|jpg)\._S3rver_object$/.test(String(f))).length;
 }

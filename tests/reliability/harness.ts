@@ -1,6 +1,6 @@
 /**
  * Global set-up of the reliability tests: a temporary DATA_DIR with a migrated SQLite file and the
- * demo data, the fake SMTP server, and the built app served by the project's own server entry
+ * demo data, the fake SMTP server, the fake S3 server, and the built app served by the project's own server entry
  * (built first when its sources changed), as in production (NODE_ENV=production). Everything is
  * stopped and removed at the end.
  */
@@ -11,6 +11,7 @@ import type { TestProject } from "vitest/node";
 import { closeDb, getDb, migrateDatabase } from "~/db/client.server";
 import { seedDemoData } from "~/db/demo-data.server";
 import { startFakeSmtp } from "~/mail/fake-smtp.server";
+import { startFakeS3 } from "~/storage/fake-s3.server";
 import { buildApp, freePort, startAppServer } from "../../scripts/lib/app-server";
 
 declare module "vitest" {
@@ -33,6 +34,7 @@ export default async function setup(project: TestProject) {
   if (built !== null) console.log(`[reliability] built the app in ${built.toFixed(1)} s`);
 
   const smtp = await startFakeSmtp({ port: 0, dir: path.join(dataDir, "outbox") });
+  const s3 = await startFakeS3({ port: 0, dir: path.join(dataDir, "s3") });
   const port = await freePort();
   const app = await startAppServer({
     port,
@@ -44,11 +46,12 @@ export default async function setup(project: TestProject) {
       DATA_DIR: dataDir,
       DATABASE_URL: `file:${path.join(dataDir, "loftline.db")}`,
       SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
+      ...s3.env,
       APP_URL: `http://localhost:${port}`,
       SESSION_SECRET: "reliability-session-secret",
     },
   }).catch(async (error) => {
-    await smtp.close();
+    await Promise.all([smtp.close(), s3.close()]);
     throw error;
   });
 
@@ -58,7 +61,7 @@ export default async function setup(project: TestProject) {
 
   return async () => {
     await app.stop();
-    await smtp.close();
+    await Promise.all([smtp.close(), s3.close()]);
     fs.rmSync(dataDir, { recursive: true, force: true });
   };
 }
