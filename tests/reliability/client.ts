@@ -77,13 +77,15 @@ export function send(pathname: string, opts: SendOptions = {}): Promise<Answer> 
     const chunk = Buffer.alloc(64 * 1024, opts.fill ?? 0x61);
     let sent = 0;
     if (opts.prefix) req.write(opts.prefix);
+    // One chunk a turn of the event loop, so an answer that arrives mid-body is read at once: a
+    // client that only writes can meet the server's hang-up (EPIPE) before it reads the answer.
     const pump = () => {
-      while (!answered && !req.destroyed && sent < opts.chunkedBytes!) {
-        const piece = chunk.subarray(0, Math.min(chunk.length, opts.chunkedBytes! - sent));
-        sent += piece.length;
-        if (!req.write(piece)) return void req.once("drain", pump);
-      }
-      if (!req.destroyed) req.end();
+      if (answered || req.destroyed) return;
+      if (sent >= opts.chunkedBytes!) return void req.end();
+      const piece = chunk.subarray(0, Math.min(chunk.length, opts.chunkedBytes! - sent));
+      sent += piece.length;
+      if (req.write(piece)) setImmediate(pump);
+      else req.once("drain", pump);
     };
     pump();
   });
