@@ -16,6 +16,11 @@ export default [
   route("api/layouts/:layoutId/analysis", "routes/api-layout-analysis.ts"),
   route("api/analysis", "routes/api-analysis.ts"),
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
+  route("profiles/:profileId/export", "routes/profile-export.ts"),
+
+  // A published version shared by link: signed out, read-only, not indexed, rate limited.
+  route("shared/:token", "routes/shared-layout.tsx"),
+  route("shared/:token/jumps/:sectionId", "routes/shared-jump.tsx"),
 
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
   layout("routes/signed-in-frame.tsx", [
@@ -35,6 +40,11 @@ export default [
     route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
     route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
+    route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),
+    route("layouts/:layoutId/compare", "routes/layout-compare.tsx"),
+    route("profiles", "routes/profiles.tsx"),
+    route("profiles/new", "routes/profile-new.tsx"),
+    route("profiles/:profileId", "routes/profile-edit.tsx"),
     route("files/:fileId", "routes/file.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -22,7 +22,7 @@ import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
-import type { LayoutDocument, LayoutIssue } from "~/analysis";
+import type { CarParams, LayoutDocument, LayoutIssue } from "~/analysis";
 import { loadLayoutDocument } from "./documents.server";
 
 type LayoutRow = typeof layouts.$inferSelect;
@@ -88,7 +88,14 @@ export interface AnalysisRun {
  */
 export function analyseDocument(
   document: LayoutDocument,
-  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance; fieldPrefix?: string },
+  opts: {
+    classIds?: readonly string[];
+    skill: SkillLevel;
+    guidance?: ClubGuidance;
+    fieldPrefix?: string;
+    /** Own cars by class id; their ids carry the profile's content hash, so the memo keys stay honest. */
+    cars?: Readonly<Record<string, CarParams>>;
+  },
 ): AnalysisRun {
   checkDocumentClasses(document, opts.fieldPrefix ?? "");
   const guidance = opts.guidance ?? { guidanceSet: document.guidance, overrides: {} };
@@ -102,7 +109,13 @@ export function analyseDocument(
   const { entry, hit } = memoAnalysis(inputs, () =>
     analyseLayout(
       { ...document, guidance: guidance.guidanceSet },
-      { classIds: inputs.classIds, skill: inputs.skill, overrides: guidance.overrides, cache: engineCache },
+      {
+        classIds: inputs.classIds,
+        skill: inputs.skill,
+        overrides: guidance.overrides,
+        cache: engineCache,
+        cars: opts.cars,
+      },
     ),
   );
   return { analysis: entry.value, entry, hit };
@@ -120,22 +133,37 @@ async function fullRow(layout: LayoutRef | LayoutRow): Promise<LayoutRow> {
 }
 
 /**
- * A stored layout's analysis at its current version with its club's guidance. A warm repeat is
- * answered from the memo by the layout's id and version, without reading the document.
- * @param opts.classIds undefined for the document's own classes; opts.guidance when already read.
+ * A stored layout's analysis at its current version (or, with `opts.saved`, at one saved version,
+ * e.g. the published one) with its club's guidance. A warm repeat is answered from the memo by the
+ * layout's id and version, without reading the document.
+ * @param opts.classIds undefined for the document's own classes; opts.guidance when already read;
+ *   opts.cars own cars by class id (see analyseDocument).
  */
 export async function analyseStoredLayout(
   layout: LayoutRef | LayoutRow,
-  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance },
+  opts: {
+    classIds?: readonly string[];
+    skill: SkillLevel;
+    guidance?: ClubGuidance;
+    cars?: Readonly<Record<string, CarParams>>;
+    saved?: { number: number; load: () => Promise<LayoutDocument> };
+  },
 ): Promise<AnalysisRun & { guidance: ClubGuidance }> {
   const guidance = opts.guidance ?? (await loadClubGuidance(layout.clubId));
-  const aliasOf = (version: number) =>
+  const which = opts.saved ? `saved:${opts.saved.number}` : layout.version;
+  const aliasOf = (version: number | string) =>
     canonicalJson([layout.id, version, guidance, opts.classIds ?? "*", opts.skill]);
-  const known = entryByAlias<LayoutAnalysis>(aliasOf(layout.version));
+  const known = entryByAlias<LayoutAnalysis>(aliasOf(which));
   if (known) return { analysis: known.value, entry: known, hit: true, guidance };
+  const settings = { classIds: opts.classIds, skill: opts.skill, guidance, cars: opts.cars };
+  if (opts.saved) {
+    const run = analyseDocument(await opts.saved.load(), settings);
+    setAlias(aliasOf(which), run.entry.key);
+    return { ...run, guidance };
+  }
   const row = await fullRow(layout);
   const { document } = await loadLayoutDocument(row);
-  const run = analyseDocument(document, { classIds: opts.classIds, skill: opts.skill, guidance });
+  const run = analyseDocument(document, settings);
   setAlias(aliasOf(row.version), run.entry.key);
   return { ...run, guidance };
 }

@@ -2,6 +2,7 @@
 export * from "./layout-document";
 export { crossFieldIssues } from "./layout-document-checks";
 export * from "./car-schema";
+export * from "./car-fields";
 export * from "./cars";
 export * from "./starter-layout";
 export * from "./jump-presets";
