@@ -56,7 +56,12 @@ export async function listProfiles(userId: string): Promise<ProfileListItem[]> {
     .where(eq(carProfiles.userId, userId))
     .orderBy(asc(carProfiles.createdAt));
   return rows
-    .map((r) => ({ id: r.id, presetId: r.presetId, updatedAt: r.updatedAt, label: readProfile(r.profile)?.label }))
+    .map((r) => ({
+      id: r.id,
+      presetId: r.presetId,
+      updatedAt: r.updatedAt,
+      label: readProfile(r.profile)?.label,
+    }))
     .filter((r): r is ProfileListItem => r.label !== undefined)
     .sort((a, b) => a.label.localeCompare(b.label));
 }
@@ -142,8 +147,14 @@ export function estimatedFields(presetId: string, profile: CarProfile): string[]
  * The profile as the engine's car, under a class id made from the profile's content ("own-" and
  * 16 hex digits of its SHA-256): the analysis memo then keys on what the car is, not which row.
  */
-export function ownCar(stored: Pick<StoredProfile, "presetId" | "profile">): { classId: string; car: CarParams } {
-  const hash = createHash("sha256").update(JSON.stringify([stored.presetId, stored.profile])).digest("hex").slice(0, 16);
+export function ownCar(stored: Pick<StoredProfile, "presetId" | "profile">): {
+  classId: string;
+  car: CarParams;
+} {
+  const hash = createHash("sha256")
+    .update(JSON.stringify([stored.presetId, stored.profile]))
+    .digest("hex")
+    .slice(0, 16);
   const classId = `own-${hash}`;
   const car = carFromProfile(stored.profile, classId);
   const estimates = estimatedFields(stored.presetId, stored.profile).length;

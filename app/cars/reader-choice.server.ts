@@ -84,7 +84,9 @@ export async function readerChoice(
   const car = askedResolved ?? (await resolve(stored?.car)) ?? fallback;
   if (askedCar && !askedResolved) {
     const what =
-      param === "class" ? "one of this layout's car classes" : "one of this layout's car classes or your car profiles";
+      param === "class"
+        ? "one of this layout's car classes"
+        : "one of this layout's car classes or your car profiles";
     problems.push(`${param}: "${askedCar.slice(0, 40)}" is not ${what}; showing ${car.label}.`);
   }
 
@@ -92,7 +94,8 @@ export async function readerChoice(
     typeof v === "string" && (SKILL_LEVELS as readonly string[]).includes(v);
   const askedSkill = query.get("skill") || null;
   const skill: SkillLevel = isSkill(askedSkill) ? askedSkill : isSkill(stored?.skill) ? stored.skill : "club";
-  if (askedSkill && !isSkill(askedSkill)) problems.push(`skill: must be ${wordList(SKILL_LEVELS)}; showing ${skill}.`);
+  if (askedSkill && !isSkill(askedSkill))
+    problems.push(`skill: must be ${wordList(SKILL_LEVELS)}; showing ${skill}.`);
 
   const remember = {
     car: askedResolved ? askedResolved.car : (stored?.car ?? null),
@@ -122,7 +125,10 @@ export async function carParam(
     const own = await ownCarFor(userId, value);
     if (!own)
       throw Response.json(
-        { error: "No such car profile of yours.", issues: [{ path: field, message: "is not one of your car profiles" }] },
+        {
+          error: "No such car profile of yours.",
+          issues: [{ path: field, message: "is not one of your car profiles" }],
+        },
         { status: 404 },
       );
     return { classId: own.classId, own };

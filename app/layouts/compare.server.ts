@@ -28,7 +28,11 @@ const notFound = (message: string) => new Response(message, { status: 404, statu
 const round2 = (v: number) => Math.round(v * 100) / 100;
 
 /** Each section's stretch of the analysed centre line, as a polyline in plan metres. */
-function sectionLines(a: LayoutAnalysis, doc: LayoutDocument, kindOf: (id: string) => SectionDiffKind | null) {
+function sectionLines(
+  a: LayoutAnalysis,
+  doc: LayoutDocument,
+  kindOf: (id: string) => SectionDiffKind | null,
+) {
   const out: CompareLine[] = [];
   let current: CompareLine | null = null;
   a.line.x.forEach((x, k) => {
@@ -46,7 +50,12 @@ function sectionLines(a: LayoutAnalysis, doc: LayoutDocument, kindOf: (id: strin
 }
 
 /** Compares two versions for a reader with this role; `query` holds `from`, `to` and nothing else needed. */
-export async function compareVersions(layout: LayoutRow, role: Role, query: URLSearchParams, skill: SkillLevel) {
+export async function compareVersions(
+  layout: LayoutRow,
+  role: Role,
+  query: URLSearchParams,
+  skill: SkillLevel,
+) {
   const publications = await listPublications(layout.id);
   const current = currentPublication(publications);
   const director = role === "director";
@@ -74,7 +83,10 @@ export async function compareVersions(layout: LayoutRow, role: Role, query: URLS
     }
     const doc = await loadVersionDocument(layout.id, v);
     if (!doc) throw notFound(`There is no saved version ${v} of this layout.`);
-    return { doc, run: await analyseStoredLayout(layout, { skill, saved: { number: v, load: async () => doc } }) };
+    return {
+      doc,
+      run: await analyseStoredLayout(layout, { skill, saved: { number: v, load: async () => doc } }),
+    };
   };
   const [a, b] = [await load(from), await load(to)];
   const documents = compareDocuments(a.doc, b.doc);

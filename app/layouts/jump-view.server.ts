@@ -19,11 +19,13 @@ export function jumpViewData(page: PageAnalysis, sectionId: string | undefined, 
       status: 404,
       statusText: "No such jump in this layout.",
     });
-  if (!page.result.ok) throw new Response(page.result.message, { status: 422, statusText: page.result.message });
+  if (!page.result.ok)
+    throw new Response(page.result.message, { status: 422, statusText: page.result.message });
   const jumps = page.result.chosen.jumps;
   const index = jumps.findIndex((j) => j.sectionId === section.id);
   const jump = jumps[index];
-  const neighbour = (i: number) => (jumps[i] ? { sectionId: jumps[i].sectionId, name: jumpName(jumps[i]) } : null);
+  const neighbour = (i: number) =>
+    jumps[i] ? { sectionId: jumps[i].sectionId, name: jumpName(jumps[i]) } : null;
   return {
     classId: page.classId,
     classLabel: page.result.chosen.label,

@@ -29,14 +29,20 @@ export type Reading = {
 };
 
 const refuse = (status: number, message: string, api: boolean) =>
-  api ? Response.json({ error: message }, { status }) : new Response(message, { status, statusText: message });
+  api
+    ? Response.json({ error: message }, { status })
+    : new Response(message, { status, statusText: message });
 
 /** `version` of the query: a saved version's number, "draft", or absent; anything else is 400. */
 export function parseVersionParam(value: string | null, api = false): number | "draft" | null {
   if (value === null || value === "") return null;
   if (value === "draft") return "draft";
   if (/^\d{1,9}$/.test(value)) return Number(value);
-  throw refuse(400, `version: must be a saved version's number or "draft" (got "${value.slice(0, 20)}").`, api);
+  throw refuse(
+    400,
+    `version: must be a saved version's number or "draft" (got "${value.slice(0, 20)}").`,
+    api,
+  );
 }
 
 /**
@@ -51,13 +57,21 @@ export async function readingNumber(
   opts: { api?: boolean } = {},
 ): Promise<
   | { kind: "draft"; publications: Publication[]; current: Publication | null }
-  | { kind: "published" | "saved"; number: number; publication: Publication | null; publications: Publication[]; current: Publication | null; asked: boolean }
+  | {
+      kind: "published" | "saved";
+      number: number;
+      publication: Publication | null;
+      publications: Publication[];
+      current: Publication | null;
+      asked: boolean;
+    }
 > {
   const api = opts.api ?? false;
   const asked = parseVersionParam(query.get("version"), api);
   const publications = await listPublications(layoutId);
   const current = currentPublication(publications);
-  if (role === "director" && (asked === null || asked === "draft")) return { kind: "draft", publications, current };
+  if (role === "director" && (asked === null || asked === "draft"))
+    return { kind: "draft", publications, current };
   if (asked === "draft") throw refuse(404, "No such version of this layout.", api);
   const number = asked ?? current?.versionNumber;
   if (number === undefined) throw refuse(404, "This layout has no published version.", api);
@@ -89,7 +103,15 @@ export async function readingFor(
   const { publications, current } = which;
   if (which.kind === "draft") {
     const { document, versionNumber } = await loadLayoutDocument(layout);
-    return { kind: "draft", number: versionNumber, document, publication: null, publications, current, query: {} };
+    return {
+      kind: "draft",
+      number: versionNumber,
+      document,
+      publication: null,
+      publications,
+      current,
+      query: {},
+    };
   }
   const document = await loadVersionDocument(layout.id, which.number);
   if (!document) throw refuse(404, "No such version of this layout.", api);

@@ -54,7 +54,8 @@ export function sharedChoice(query: URLSearchParams, classes: readonly string[])
   const problems: string[] = [];
   const asked = query.get("car") || query.get("class");
   const car = asked && classes.includes(asked) ? asked : classes[0];
-  if (asked && asked !== car) problems.push(`car: "${asked.slice(0, 40)}" is not one of this layout's car classes.`);
+  if (asked && asked !== car)
+    problems.push(`car: "${asked.slice(0, 40)}" is not one of this layout's car classes.`);
   const askedSkill = query.get("skill");
   const skill: SkillLevel = (SKILL_LEVELS as readonly string[]).includes(askedSkill ?? "")
     ? (askedSkill as SkillLevel)

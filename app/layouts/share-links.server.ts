@@ -57,7 +57,11 @@ export async function createShareLink(
     .where(and(eq(publishedVersions.id, publicationId), eq(publishedVersions.layoutId, layoutId)));
   if (!publication) throw new RuleError(404, "No such published version of this layout.", "publication");
   if (publication.withdrawnAt)
-    throw new RuleError(409, `Version ${publication.versionNumber} is withdrawn: it cannot be shared.`, "publication");
+    throw new RuleError(
+      409,
+      `Version ${publication.versionNumber} is withdrawn: it cannot be shared.`,
+      "publication",
+    );
   const { token, hash } = newLinkToken();
   const [row] = await db
     .insert(shareLinks)

@@ -38,7 +38,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
               number: which.number,
               load: async () => {
                 const document = await loadVersionDocument(layout.id, which.number);
-                if (!document) throw Response.json({ error: "No such version of this layout." }, { status: 404 });
+                if (!document)
+                  throw Response.json({ error: "No such version of this layout." }, { status: 404 });
                 return document;
               },
             },

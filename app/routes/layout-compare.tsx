@@ -5,7 +5,11 @@ import { requireLayoutAccess } from "~/auth/permissions.server";
 import { readerSkill } from "~/cars/reader-choice.server";
 import { Cautions } from "~/components/cautions";
 import { CompareDrawing } from "~/components/publishing/compare-drawing";
-import { ClassComparisonTable, LayoutChangesList, SectionChangesList } from "~/components/publishing/compare-tables";
+import {
+  ClassComparisonTable,
+  LayoutChangesList,
+  SectionChangesList,
+} from "~/components/publishing/compare-tables";
 import { compareVersions } from "~/layouts/compare.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
@@ -25,7 +29,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { result } = data;
   // Numbers for the changed, added and removed sections: the list and the drawing share them.
   const numbers: Record<string, number> = {};
-  result?.documents.sections.filter((s) => s.kind !== "same").forEach((s, i) => (numbers[s.sectionId] = i + 1));
+  result?.documents.sections
+    .filter((s) => s.kind !== "same")
+    .forEach((s, i) => (numbers[s.sectionId] = i + 1));
   return { club, layout: { id: layout.id, name: layout.name }, skill, numbers, ...data };
 }
 
@@ -82,7 +88,10 @@ export default function LayoutCompare({ loaderData: d }: Route.ComponentProps) {
               ))}
             </select>
           </div>
-          <button type="submit" className="rounded-md border border-ink-300 bg-white px-3 py-2 text-sm hover:bg-sand-100">
+          <button
+            type="submit"
+            className="rounded-md border border-ink-300 bg-white px-3 py-2 text-sm hover:bg-sand-100"
+          >
             Compare
           </button>
         </Form>
@@ -93,8 +102,8 @@ export default function LayoutCompare({ loaderData: d }: Route.ComponentProps) {
         <>
           <section aria-labelledby="sections-heading" className="space-y-3">
             <h2 id="sections-heading" className="text-lg font-semibold">
-              From {label(d.from)} to {label(d.to)}: {r.documents.counts.added} added, {r.documents.counts.removed}{" "}
-              removed, {r.documents.counts.changed} changed
+              From {label(d.from)} to {label(d.to)}: {r.documents.counts.added} added,{" "}
+              {r.documents.counts.removed} removed, {r.documents.counts.changed} changed
             </h2>
             <div className="grid gap-6 lg:grid-cols-[1.3fr_1fr]">
               <CompareDrawing lines={r.lines} numbers={d.numbers} title={d.layout.name} />

@@ -91,7 +91,8 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function LayoutPublishing({ loaderData: d, actionData }: Route.ComponentProps) {
-  const errors: FieldErrors | undefined = actionData && "errors" in actionData ? actionData.errors : undefined;
+  const errors: FieldErrors | undefined =
+    actionData && "errors" in actionData ? actionData.errors : undefined;
   const values = actionData && "values" in actionData ? actionData.values : undefined;
   const shared = actionData && "shared" in actionData ? actionData.shared : undefined;
   return (
@@ -113,7 +114,12 @@ export default function LayoutPublishing({ loaderData: d, actionData }: Route.Co
         </p>
       </header>
       <FormMessage>
-        {[...(errors?.form ?? []), ...(errors?.intent ?? []), ...(errors?.publication ?? []), ...(errors?.link ?? [])].join(" ")}
+        {[
+          ...(errors?.form ?? []),
+          ...(errors?.intent ?? []),
+          ...(errors?.publication ?? []),
+          ...(errors?.link ?? []),
+        ].join(" ")}
       </FormMessage>
       {shared ? (
         <section aria-labelledby="new-link" className="rounded-lg border border-pine-600 bg-pine-50 p-4">
@@ -144,7 +150,12 @@ export default function LayoutPublishing({ loaderData: d, actionData }: Route.Co
         errors={errors}
         values={values}
       />
-      <PublicationsTable layoutId={d.layout.id} publications={d.publications} errors={errors} values={values} />
+      <PublicationsTable
+        layoutId={d.layout.id}
+        publications={d.publications}
+        errors={errors}
+        values={values}
+      />
       <ShareLinksTable links={d.links} />
     </article>
   );

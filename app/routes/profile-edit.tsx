@@ -10,9 +10,12 @@ import { ProfileForm } from "~/components/cars/profile-form";
 import { Button } from "~/components/ui/button";
 import { parseProfileForm, profileFormValues } from "~/lib/schemas/car-profiles";
 
-export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.label ?? "Car profile"} · Loftline` }];
+export const meta: Route.MetaFunction = ({ data }) => [
+  { title: `${data?.label ?? "Car profile"} · Loftline` },
+];
 
-const notFound = () => new Response("No such car profile of yours.", { status: 404, statusText: "Not found" });
+const notFound = () =>
+  new Response("No such car profile of yours.", { status: 404, statusText: "Not found" });
 
 /** The owner's profile; anyone else's (or an unknown id) is 404. */
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -41,7 +44,11 @@ export async function action({ request, params }: Route.ActionArgs) {
     const parsed = parseProfileForm(formData);
     if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
     await updateProfile(user.id, params.profileId, parsed.profile);
-    throw await redirectWithNotice(request, `/profiles/${params.profileId}`, `${parsed.profile.label} is saved.`);
+    throw await redirectWithNotice(
+      request,
+      `/profiles/${params.profileId}`,
+      `${parsed.profile.label} is saved.`,
+    );
   } catch (error) {
     if (error instanceof Response) throw error;
     return refusal(error, formValues(formData));

@@ -53,8 +53,8 @@ export default function ProfileNew({ loaderData: d, actionData }: Route.Componen
         </p>
         <h1 className="mt-1 text-2xl font-semibold">New car profile</h1>
         <p className="mt-1 max-w-prose text-ink-700">
-          Filled in from the {d.presetLabel.toLowerCase()}: every value is an estimate until you put in your own
-          measurement. Each field says how to measure it at home.
+          Filled in from the {d.presetLabel.toLowerCase()}: every value is an estimate until you put in your
+          own measurement. Each field says how to measure it at home.
         </p>
       </header>
       <ProfileForm

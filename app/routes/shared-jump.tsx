@@ -7,7 +7,9 @@ import { jumpViewData } from "~/layouts/jump-view.server";
 import { SHARE_HEADERS, sharedChoice, sharedVersionFor } from "~/layouts/share-access.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
-  { title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Shared layout"} · Loftline` },
+  {
+    title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Shared layout"} · Loftline`,
+  },
   { name: "robots", content: "noindex, nofollow" },
 ];
 

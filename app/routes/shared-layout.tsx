@@ -53,7 +53,11 @@ export default function SharedLayout({ loaderData: d, params }: Route.ComponentP
   return (
     <article className="space-y-8">
       <SharedHeader layoutName={d.layoutName} clubName={d.clubName} publication={d.publication} />
-      <LayoutAnalysisSection data={d.analysis} layoutName={d.layoutName} shared={{ base: `/shared/${params.token}` }} />
+      <LayoutAnalysisSection
+        data={d.analysis}
+        layoutName={d.layoutName}
+        shared={{ base: `/shared/${params.token}` }}
+      />
     </article>
   );
 }

@@ -197,8 +197,7 @@ export function carProfileFile(p: CarProfile) {
 }
 
 export type ParseCarResult =
-  | { ok: true; profile: CarProfile }
-  | { ok: false; issues: { path: string; message: string }[] };
+  { ok: true; profile: CarProfile } | { ok: false; issues: { path: string; message: string }[] };
 
 /**
  * Reads a car profile from parsed JSON (a file or a request body). A `format` marker, when
@@ -216,7 +215,11 @@ export function parseCarProfile(json: unknown): ParseCarResult {
   return {
     ok: false,
     issues: result.error.issues.map((i) => ({
-      path: i.path.map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`)).join("").replace(/^\./, "") || "(car)",
+      path:
+        i.path
+          .map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`))
+          .join("")
+          .replace(/^\./, "") || "(car)",
       message: i.message,
     })),
   };

@@ -52,7 +52,15 @@ export function compareDocuments(a: LayoutDocument, b: LayoutDocument): Document
   b.sections.forEach((s, i) => {
     const old = inA.get(s.id);
     if (!old) {
-      sections.push({ sectionId: s.id, kind: "added", from: null, to: s, fromIndex: null, toIndex: i, fields: [] });
+      sections.push({
+        sectionId: s.id,
+        kind: "added",
+        from: null,
+        to: s,
+        fromIndex: null,
+        toIndex: i,
+        fields: [],
+      });
       return;
     }
     const fields = fieldChanges(old.s, s, ["id"]);
@@ -68,7 +76,15 @@ export function compareDocuments(a: LayoutDocument, b: LayoutDocument): Document
   });
   a.sections.forEach((s, i) => {
     if (!inB.has(s.id))
-      sections.push({ sectionId: s.id, kind: "removed", from: s, to: null, fromIndex: i, toIndex: null, fields: [] });
+      sections.push({
+        sectionId: s.id,
+        kind: "removed",
+        from: s,
+        to: null,
+        fromIndex: i,
+        toIndex: null,
+        fields: [],
+      });
   });
   const counts = { added: 0, removed: 0, changed: 0 };
   for (const c of sections) if (c.kind !== "same") counts[c.kind] += 1;
@@ -90,7 +106,10 @@ export interface ClassComparison {
   label: string;
   /** Lap time, s, and speeds, m/s, in each version (null where the class is not analysed). */
   lapTime: { from: number | null; to: number | null };
-  speed: { from: { min: number; max: number; mean: number } | null; to: { min: number; max: number; mean: number } | null };
+  speed: {
+    from: { min: number; max: number; mean: number } | null;
+    to: { min: number; max: number; mean: number } | null;
+  };
   jumps: JumpVerdictMove[];
 }
 

@@ -40,7 +40,15 @@ export type JumpViewData = {
  * @param base the layout's address (its jump pages are under `${base}/jumps/`); `clubLink` false
  *   on a share link's page, which does not link into the club.
  */
-export function JumpView({ d, base, clubLink = true }: { d: JumpViewData; base: string; clubLink?: boolean }) {
+export function JumpView({
+  d,
+  base,
+  clubLink = true,
+}: {
+  d: JumpViewData;
+  base: string;
+  clubLink?: boolean;
+}) {
   const j = d.jump;
   const kind = verdictKind(j.verdicts[d.skill]);
   const q = `?${new URLSearchParams({ car: d.car, skill: d.skill, ...d.version })}`;
@@ -70,7 +78,13 @@ export function JumpView({ d, base, clubLink = true }: { d: JumpViewData; base: 
               estimates
             </p>
           </div>
-          <AnalysisPickers key={`${d.car}-${d.skill}`} cars={d.cars} car={d.car} skill={d.skill} keep={d.version} />
+          <AnalysisPickers
+            key={`${d.car}-${d.skill}`}
+            cars={d.cars}
+            car={d.car}
+            skill={d.skill}
+            keep={d.version}
+          />
         </div>
         {d.problems.length ? (
           <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">

@@ -1,5 +1,11 @@
 import { Form, useNavigation } from "react-router";
-import { CAR_FIELD_GROUPS, CAR_LABEL_MAX, CAR_NUMBER_FIELDS, DRIVE_LABELS, type CarFieldGroup } from "~/analysis";
+import {
+  CAR_FIELD_GROUPS,
+  CAR_LABEL_MAX,
+  CAR_NUMBER_FIELDS,
+  DRIVE_LABELS,
+  type CarFieldGroup,
+} from "~/analysis";
 import { Button } from "~/components/ui/button";
 import { Field, FieldError, FormMessage, SelectField, type FieldErrors } from "~/components/ui/form";
 
@@ -63,7 +69,10 @@ export function ProfileForm({
               const id = `car-${f.name.replace(/\./g, "-")}`;
               return (
                 <div key={f.name} className="space-y-1">
-                  <label htmlFor={id} className="flex flex-wrap items-baseline gap-x-2 text-sm font-medium text-ink-700">
+                  <label
+                    htmlFor={id}
+                    className="flex flex-wrap items-baseline gap-x-2 text-sm font-medium text-ink-700"
+                  >
                     {f.label}
                     {f.unit ? <span className="font-normal text-ink-500">({f.unit})</span> : null}
                     {estimate ? (

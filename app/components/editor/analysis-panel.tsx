@@ -80,8 +80,7 @@ export function AnalysisPanel(p: Props) {
       {o ? (
         <div className={p.stale ? "opacity-70" : ""}>
           <p className="tabular-nums">
-            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for the{" "}
-            {carLabel ?? o.classId}
+            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for the {carLabel ?? o.classId}
           </p>
           <h3 className="mt-2 font-semibold">Jumps ({o.jumps.length})</h3>
           {o.jumps.length ? (

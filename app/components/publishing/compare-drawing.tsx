@@ -56,7 +56,10 @@ export function CompareDrawing({
                 fill="none"
                 stroke={STYLE[kind].stroke}
                 strokeWidth={STYLE[kind].width * unit}
-                strokeDasharray={STYLE[kind].dash?.split(" ").map((d) => Number(d) * unit).join(" ")}
+                strokeDasharray={STYLE[kind].dash
+                  ?.split(" ")
+                  .map((d) => Number(d) * unit)
+                  .join(" ")}
                 strokeLinecap="round"
               />
             )),
@@ -67,8 +70,22 @@ export function CompareDrawing({
             const [x, y] = l.points[Math.floor(l.points.length / 2)];
             return (
               <g key={`n-${l.kind}-${l.sectionId}`}>
-                <circle cx={x} cy={-y} r={3.2 * unit} fill="white" stroke={STYLE[l.kind].stroke} strokeWidth={0.6 * unit} />
-                <text x={x} y={-y} fontSize={3.4 * unit} textAnchor="middle" dominantBaseline="central" fill="var(--color-ink-900)">
+                <circle
+                  cx={x}
+                  cy={-y}
+                  r={3.2 * unit}
+                  fill="white"
+                  stroke={STYLE[l.kind].stroke}
+                  strokeWidth={0.6 * unit}
+                />
+                <text
+                  x={x}
+                  y={-y}
+                  fontSize={3.4 * unit}
+                  textAnchor="middle"
+                  dominantBaseline="central"
+                  fill="var(--color-ink-900)"
+                >
                   {numbers[l.sectionId]}
                 </text>
               </g>
@@ -87,7 +104,10 @@ export function CompareDrawing({
                   y2="4"
                   stroke={STYLE[kind].stroke}
                   strokeWidth={STYLE[kind].width * 1.5}
-                  strokeDasharray={STYLE[kind].dash?.split(" ").map((d) => Number(d) * 1.5).join(" ")}
+                  strokeDasharray={STYLE[kind].dash
+                    ?.split(" ")
+                    .map((d) => Number(d) * 1.5)
+                    .join(" ")}
                 />
               </svg>
               {STYLE[kind].word}

@@ -23,7 +23,8 @@ const METRES = new Set([
 /** A field's value in plain words: metres and degrees with their unit, lists and shapes as "…". */
 export function valueText(field: string, v: unknown): string {
   if (v === undefined || v === null) return "none";
-  if (typeof v === "number") return field.endsWith("Deg") ? `${v}°` : METRES.has(field) ? `${v} m` : String(v);
+  if (typeof v === "number")
+    return field.endsWith("Deg") ? `${v}°` : METRES.has(field) ? `${v} m` : String(v);
   if (typeof v === "string" || typeof v === "boolean") return String(v);
   if (Array.isArray(v) && v.every((x) => typeof x === "string")) return v.join(", ");
   return "its shape";
@@ -46,7 +47,13 @@ function changeText(f: FieldDiff): string {
 }
 
 /** The numbered list of added, removed and changed sections (numbers as on the drawing). */
-export function SectionChangesList({ changes, numbers }: { changes: SectionDiff[]; numbers: Record<string, number> }) {
+export function SectionChangesList({
+  changes,
+  numbers,
+}: {
+  changes: SectionDiff[];
+  numbers: Record<string, number>;
+}) {
   const shown = changes.filter((c) => c.kind !== "same");
   if (!shown.length) return <p className="text-sm text-ink-700">No section was added, removed or changed.</p>;
   return (
@@ -56,7 +63,9 @@ export function SectionChangesList({ changes, numbers }: { changes: SectionDiff[
         const where = c.toIndex !== null ? `section ${c.toIndex + 1}` : `was section ${c.fromIndex! + 1}`;
         return (
           <li key={`${c.kind}-${c.sectionId}`} className="flex gap-2">
-            <span className="w-6 shrink-0 text-right font-semibold tabular-nums">{numbers[c.sectionId]}.</span>
+            <span className="w-6 shrink-0 text-right font-semibold tabular-nums">
+              {numbers[c.sectionId]}.
+            </span>
             <span>
               <strong>{KIND_WORDS[c.kind as keyof typeof KIND_WORDS]}</strong>: {sectionWords(s)} ({where})
               {c.fields.length ? ` · ${c.fields.map(changeText).join("; ")}` : ""}
@@ -90,7 +99,13 @@ function moved(from: number | null, to: number | null, digits: number, unit: str
 }
 
 /** One car class: lap time and speeds in both versions, and each jump's verdict moving. */
-export function ClassComparisonTable({ c, numbers }: { c: ClassComparison; numbers: Record<string, number> }) {
+export function ClassComparisonTable({
+  c,
+  numbers,
+}: {
+  c: ClassComparison;
+  numbers: Record<string, number>;
+}) {
   return (
     <section aria-labelledby={`cmp-${c.classId}`} className="space-y-2">
       <h3 id={`cmp-${c.classId}`} className="font-semibold">
@@ -105,24 +120,42 @@ export function ClassComparisonTable({ c, numbers }: { c: ClassComparison; numbe
         <table className="w-full min-w-[40rem] text-sm">
           <thead className="bg-sand-100 text-left text-ink-700">
             <tr>
-              <th scope="col" className="px-3 py-2 font-medium">Jump</th>
-              <th scope="col" className="px-3 py-2 font-medium">Older version</th>
-              <th scope="col" className="px-3 py-2 font-medium">Newer version</th>
-              <th scope="col" className="px-3 py-2 font-medium">Takeoff m/s</th>
-              <th scope="col" className="px-3 py-2 font-medium">Airtime s</th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Jump
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Older version
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Newer version
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Takeoff m/s
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Airtime s
+              </th>
             </tr>
           </thead>
           <tbody>
             {c.jumps.map((j) => (
-              <tr key={j.sectionId} className="border-t border-sand-200" data-testid={`verdict-move-${j.sectionId}`}>
+              <tr
+                key={j.sectionId}
+                className="border-t border-sand-200"
+                data-testid={`verdict-move-${j.sectionId}`}
+              >
                 <th scope="row" className="px-3 py-2 text-left font-normal">
                   {numbers[j.sectionId] ? `J${numbers[j.sectionId]} ` : ""}
                   {j.name ?? j.sectionId}
                   {j.from !== j.to ? <strong className="ml-2">moved</strong> : null}
                 </th>
-                <td className="px-3 py-2">{j.from ? <VerdictMark kind={j.from} size={14} /> : "not there"}</td>
+                <td className="px-3 py-2">
+                  {j.from ? <VerdictMark kind={j.from} size={14} /> : "not there"}
+                </td>
                 <td className="px-3 py-2">{j.to ? <VerdictMark kind={j.to} size={14} /> : "not there"}</td>
-                <td className="px-3 py-2 tabular-nums">{moved(j.takeoffSpeed.from, j.takeoffSpeed.to, 1, "")}</td>
+                <td className="px-3 py-2 tabular-nums">
+                  {moved(j.takeoffSpeed.from, j.takeoffSpeed.to, 1, "")}
+                </td>
                 <td className="px-3 py-2 tabular-nums">{moved(j.airtime.from, j.airtime.to, 2, "")}</td>
               </tr>
             ))}

@@ -43,20 +43,27 @@ export function PublishForm({
         Publish the draft for race day
       </h2>
       <p className="mt-1 text-sm text-ink-700">
-        {saved ? `The working draft is saved version ${saved.number} (${dayText(saved.savedAt)}). ` : "Nothing is drawn yet: the starter loop would be published. "}
+        {saved
+          ? `The working draft is saved version ${saved.number} (${dayText(saved.savedAt)}). `
+          : "Nothing is drawn yet: the starter loop would be published. "}
         {current
           ? unchanged
             ? `It is the race-day version already.`
             : `The race-day version is ${current.versionNumber}; `
           : "Nothing is published yet. "}
         {current && !unchanged ? (
-          <Link to={`/layouts/${layout.id}/compare?from=${current.versionNumber}&to=draft`} className={linkClass}>
+          <Link
+            to={`/layouts/${layout.id}/compare?from=${current.versionNumber}&to=draft`}
+            className={linkClass}
+          >
             see what changed since
           </Link>
         ) : null}
       </p>
       {layout.status === "archived" ? (
-        <p className="mt-2 text-sm text-ink-700">This layout is archived: take it out of the archive first.</p>
+        <p className="mt-2 text-sm text-ink-700">
+          This layout is archived: take it out of the archive first.
+        </p>
       ) : (
         <Form method="post" className="mt-3 space-y-4" noValidate>
           <input type="hidden" name="intent" value="publish" />
@@ -124,15 +131,26 @@ export function PublicationsTable({
           {publications.map((p) => {
             const withdrawing = values?.intent === "withdraw" && values.publication === p.id;
             return (
-              <li key={p.id} className="space-y-2 py-3 text-sm" data-testid={`publication-${p.versionNumber}`}>
+              <li
+                key={p.id}
+                className="space-y-2 py-3 text-sm"
+                data-testid={`publication-${p.versionNumber}`}
+              >
                 <p>
-                  <Link to={`/layouts/${layoutId}?version=${p.versionNumber}`} className={`font-medium ${linkClass}`}>
+                  <Link
+                    to={`/layouts/${layoutId}?version=${p.versionNumber}`}
+                    className={`font-medium ${linkClass}`}
+                  >
                     Version {p.versionNumber}
                   </Link>{" "}
                   · race day {raceDateText(p.raceDate)} · published {dayText(p.publishedAt)}
                   {p.publishedByName ? ` by ${p.publishedByName}` : ""} ·{" "}
                   <strong>
-                    {p.withdrawnAt ? "withdrawn" : p.id === current?.id ? "race-day version" : "earlier version"}
+                    {p.withdrawnAt
+                      ? "withdrawn"
+                      : p.id === current?.id
+                        ? "race-day version"
+                        : "earlier version"}
                   </strong>
                 </p>
                 {p.note ? <p className="whitespace-pre-line text-ink-700">{p.note}</p> : null}

@@ -18,7 +18,9 @@ export function SharedHeader({
         Version {publication.versionNumber}, published for race day {raceDateText(publication.raceDate)}. The
         numbers are model estimates, not measurements and not a safety certification.
       </p>
-      {publication.note ? <p className="whitespace-pre-line text-sm text-ink-700">{publication.note}</p> : null}
+      {publication.note ? (
+        <p className="whitespace-pre-line text-sm text-ink-700">{publication.note}</p>
+      ) : null}
     </header>
   );
 }

@@ -107,7 +107,9 @@ export function VersionBanner({
       </nav>
       {r.publications.length > 1 ? (
         <details>
-          <summary className="cursor-pointer text-ink-700">Published versions ({r.publications.length})</summary>
+          <summary className="cursor-pointer text-ink-700">
+            Published versions ({r.publications.length})
+          </summary>
           <ul className="mt-2 space-y-1">
             {r.publications.map((v) => (
               <li key={v.id}>

@@ -68,7 +68,10 @@ export const withdrawSchema = z.object({
     .max(REASON_MAX, { error: `Keep the reason to ${REASON_MAX} characters or fewer.` }),
 });
 
-export const shareSchema = z.object({ intent: z.literal("share"), publication: idField("published version") });
+export const shareSchema = z.object({
+  intent: z.literal("share"),
+  publication: idField("published version"),
+});
 export const revokeShareSchema = z.object({ intent: z.literal("revoke-share"), link: idField("share link") });
 
 export const publishingActionSchema = z.discriminatedUnion(

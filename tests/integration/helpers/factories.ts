@@ -49,7 +49,9 @@ export async function makeLayout(clubId: string, fields: { name?: string; status
       number: 1,
       document: JSON.stringify(starterDocument(name, layout.trackWidth)),
     });
-    await db.insert(publishedVersions).values({ layoutId: layout.id, versionNumber: 1, raceDate: "2030-06-01" });
+    await db
+      .insert(publishedVersions)
+      .values({ layoutId: layout.id, versionNumber: 1, raceDate: "2030-06-01" });
   }
   return layout;
 }

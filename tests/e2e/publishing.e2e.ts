@@ -1,0 +1,114 @@
+/**
+ * Race day in the browser: a director publishes a layout version with a race date; while the
+ * director saves new draft versions in the editor, the driver's page (on a phone) keeps showing
+ * the published version; publishing again moves the driver on, and the earlier version stays
+ * readable at its address. A share link opens the plan signed out.
+ */
+import { randomUUID } from "node:crypto";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { DEMO_CLUB, demoAccount, login, queryDb, screenshot, url, useBrowser } from "./fixtures";
+
+const browser = useBrowser();
+
+async function createLayout(name: string): Promise<string> {
+  const [club] = await queryDb<{ id: string }>("select id from clubs where name = ?", [DEMO_CLUB]);
+  const [user] = await queryDb<{ id: string }>("select id from users where email = ?", [
+    demoAccount("director").email,
+  ]);
+  const id = randomUUID();
+  await queryDb(
+    "insert into layouts (id, club_id, name, surface, track_width, status, version, created_by) values (?, ?, ?, 'dirt', ?, 'draft', 1, ?)",
+    [id, club.id, name, SUMMER_LAYOUT.trackWidth, user.id],
+  );
+  await queryDb(
+    "insert into layout_versions (id, layout_id, number, document, created_by) values (?, ?, 1, ?, ?)",
+    [randomUUID(), id, JSON.stringify({ ...SUMMER_LAYOUT, name }), user.id],
+  );
+  return id;
+}
+
+/** Saves the editor after setting the first straight's length; waits for "Saved as version n". */
+async function saveLongerStart(page: Page, id: string, length: number, version: number) {
+  await page.goto(url(`/layouts/${id}/edit`));
+  await page.waitForFunction(
+    () => (window as unknown as { Konva?: { stages: unknown[] } }).Konva?.stages.length === 1,
+  );
+  await page.getByRole("list", { name: "Sections in lap order" }).getByRole("button").first().click();
+  const field = page.getByLabel("Length (m)", { exact: false }).first();
+  await field.fill(String(length));
+  await field.blur();
+  await page.getByRole("button", { name: "Save", exact: true }).click();
+  await expect
+    .poll(() => page.getByTestId("save-status").textContent())
+    .toMatch(new RegExp(`version ${version}`, "i"));
+}
+
+async function publish(page: Page, id: string, raceDate: string, note: string) {
+  await page.goto(url(`/layouts/${id}/publishing`));
+  await page.getByLabel("Race date").fill(raceDate);
+  await page.getByLabel("Note for the members (optional)").fill(note);
+  await page.getByRole("button", { name: /^Publish version \d+ for race day$/ }).click();
+  await page.getByText(/is published for race day .* E-mailed \d+ member\(s\)\./).waitFor();
+}
+
+const banner = (page: Page) => page.getByTestId("version-banner");
+
+describe("publishing for race day", () => {
+  it("keeps the published version fixed for a driver while the director saves new drafts", async () => {
+    const name = `Race day ${Date.now()}`;
+    const id = await createLayout(name);
+    const raceDate = new Date(Date.now() + 14 * 86400_000).toISOString().slice(0, 10);
+    const director = await browser.newPage();
+    await login(director, demoAccount("director"));
+    await publish(director, id, raceDate, "Practice from 09:00.");
+    await screenshot(director, "30-publishing-director");
+
+    const driver = await browser.newPage({ width: 390, height: 844 });
+    await login(driver, demoAccount("driver"));
+    await driver.goto(url(`/layouts/${id}`));
+    await expect.poll(() => banner(driver).textContent()).toMatch(/Race-day version 1/);
+    expect(await banner(driver).textContent()).toContain("Practice from 09:00.");
+    const lap = async () =>
+      (await (await driver.request.get(url(`/api/layouts/${id}/analysis?class=buggy-2wd-10`))).json()) as {
+        readVersion: number;
+        analysis: { lapLength: number };
+      };
+    const published = await lap();
+    expect(published.readVersion).toBe(1);
+
+    // The director saves twice in the editor: the driver still reads version 1.
+    await saveLongerStart(director, id, 34, 2);
+    await saveLongerStart(director, id, 44, 3);
+    await driver.reload();
+    await expect.poll(() => banner(driver).textContent()).toMatch(/Race-day version 1/);
+    expect(await lap()).toEqual(published);
+    expect((await driver.goto(url(`/layouts/${id}?version=3`)))?.status()).toBe(404);
+    await driver.goto(url(`/layouts/${id}`));
+    await screenshot(driver, "31-driver-published-version-phone");
+    await director.goto(url(`/layouts/${id}`));
+    await expect.poll(() => banner(director).textContent()).toMatch(/Working draft \(saved version 3\)/);
+
+    // Publishing again moves the driver on; version 1 stays readable at its address.
+    await publish(director, id, raceDate, "Longer start straight.");
+    await driver.goto(url(`/layouts/${id}`));
+    await expect.poll(() => banner(driver).textContent()).toMatch(/Race-day version 3/);
+    expect((await lap()).analysis.lapLength).toBeCloseTo(published.analysis.lapLength + 20, 1);
+    await driver.goto(url(`/layouts/${id}?version=1`));
+    await expect
+      .poll(() => banner(driver).textContent())
+      .toMatch(/Published version 1.*race-day version is now\s*version 3/);
+
+    // A share link opens the race-day version signed out.
+    await director.goto(url(`/layouts/${id}/publishing`));
+    await director.getByTestId("publication-3").getByRole("button", { name: "Create a share link" }).click();
+    const link = await director.getByLabel("Link").inputValue();
+    const visitor = await browser.newPage({ width: 390, height: 844 });
+    await visitor.goto(link);
+    await visitor.getByRole("heading", { level: 1, name }).waitFor();
+    expect(await visitor.locator('meta[name="robots"]').getAttribute("content")).toBe("noindex, nofollow");
+    expect(await visitor.getByRole("link", { name: "Sign out" }).count()).toBe(0);
+    await screenshot(visitor, "32-share-link-signed-out");
+  });
+});
