@@ -200,3 +200,23 @@ export async function draftFacts(layoutId: string, clubId: string) {
     .where(eq(memberships.clubId, clubId));
   return { saved: saved ?? null, memberCount: members.n };
 }
+
+/** The race-day version of each of the club's layouts that has one, by layout id. */
+export async function raceDayVersions(
+  clubId: string,
+): Promise<Record<string, { versionNumber: number; raceDate: string | null }>> {
+  const db = await getDb();
+  const rows = await db
+    .select({
+      layoutId: publishedVersions.layoutId,
+      versionNumber: publishedVersions.versionNumber,
+      raceDate: publishedVersions.raceDate,
+    })
+    .from(publishedVersions)
+    .innerJoin(layouts, eq(layouts.id, publishedVersions.layoutId))
+    .where(and(eq(layouts.clubId, clubId), isNull(publishedVersions.withdrawnAt)))
+    .orderBy(desc(publishedVersions.versionNumber));
+  const out: Record<string, { versionNumber: number; raceDate: string | null }> = {};
+  for (const r of rows) out[r.layoutId] ??= { versionNumber: r.versionNumber, raceDate: r.raceDate };
+  return out;
+}

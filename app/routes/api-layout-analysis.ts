@@ -45,7 +45,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
             },
     });
     const readVersion = which.kind === "draft" ? null : which.number;
-    const etag = `"${run.entry.key.slice(0, 32)}.${layout.version}"`;
+    // A published version's answer does not change when the draft is saved: its tag names the version read.
+    const etag = `"${run.entry.key.slice(0, 32)}.${readVersion === null ? layout.version : `v${readVersion}`}"`;
     if (request.headers.get("If-None-Match") === etag)
       return new Response(null, {
         status: 304,

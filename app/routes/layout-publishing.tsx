@@ -131,7 +131,7 @@ export default function LayoutPublishing({ loaderData: d, actionData }: Route.Co
             verdicts, signed out, until you revoke it. It shows nothing about the club&apos;s members.
           </p>
           <label htmlFor="share-url" className="mt-2 block text-sm font-medium">
-            Link
+            Address to share
           </label>
           <input
             id="share-url"

@@ -19,8 +19,8 @@ async function createLayout(name: string): Promise<string> {
   ]);
   const id = randomUUID();
   await queryDb(
-    "insert into layouts (id, club_id, name, surface, track_width, status, version, created_by) values (?, ?, ?, 'dirt', ?, 'draft', 1, ?)",
-    [id, club.id, name, SUMMER_LAYOUT.trackWidth, user.id],
+    "insert into layouts (id, club_id, name, surface, track_width, status, version, created_by) values (?, ?, ?, ?, ?, 'draft', 1, ?)",
+    [id, club.id, name, SUMMER_LAYOUT.surface, SUMMER_LAYOUT.trackWidth, user.id],
   );
   await queryDb(
     "insert into layout_versions (id, layout_id, number, document, created_by) values (?, ?, 1, ?, ?)",
@@ -83,7 +83,8 @@ describe("publishing for race day", () => {
     await saveLongerStart(director, id, 44, 3);
     await driver.reload();
     await expect.poll(() => banner(driver).textContent()).toMatch(/Race-day version 1/);
-    expect(await lap()).toEqual(published);
+    const after = await lap();
+    expect([after.readVersion, after.analysis]).toEqual([1, published.analysis]);
     expect((await driver.goto(url(`/layouts/${id}?version=3`)))?.status()).toBe(404);
     await driver.goto(url(`/layouts/${id}`));
     await screenshot(driver, "31-driver-published-version-phone");
@@ -103,12 +104,16 @@ describe("publishing for race day", () => {
     // A share link opens the race-day version signed out.
     await director.goto(url(`/layouts/${id}/publishing`));
     await director.getByTestId("publication-3").getByRole("button", { name: "Create a share link" }).click();
-    const link = await director.getByLabel("Link").inputValue();
+    const link = await director.getByLabel("Address to share").inputValue();
     const visitor = await browser.newPage({ width: 390, height: 844 });
     await visitor.goto(link);
     await visitor.getByRole("heading", { level: 1, name }).waitFor();
     expect(await visitor.locator('meta[name="robots"]').getAttribute("content")).toBe("noindex, nofollow");
-    expect(await visitor.getByRole("link", { name: "Sign out" }).count()).toBe(0);
+    expect(await visitor.getByRole("button", { name: "Sign out" }).count()).toBe(0);
+    const jumps = visitor
+      .getByRole("table")
+      .filter({ has: visitor.getByRole("columnheader", { name: /Airtime/ }) });
+    expect(await jumps.getByText(/^(Set up in the air|Take it straight|Cannot clear)$/).count()).toBe(9);
     await screenshot(visitor, "32-share-link-signed-out");
   });
 });

@@ -65,7 +65,7 @@ export function PublishForm({
           This layout is archived: take it out of the archive first.
         </p>
       ) : (
-        <Form method="post" className="mt-3 space-y-4" noValidate>
+        <Form key={current?.id ?? "none"} method="post" className="mt-3 space-y-4" noValidate>
           <input type="hidden" name="intent" value="publish" />
           <input type="hidden" name="version" value={layout.version} />
           <FieldError errors={errors?.version} />
