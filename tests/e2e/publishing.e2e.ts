@@ -116,4 +116,41 @@ describe("publishing for race day", () => {
     expect(await jumps.getByText(/^(Set up in the air|Take it straight|Cannot clear)$/).count()).toBe(9);
     await screenshot(visitor, "32-share-link-signed-out");
   });
+
+  it("lets a driver keep an own car profile and read the layout, a jump and the plan for it, switching without a reload", async () => {
+    const [summer] = await queryDb<{ id: string }>("select id from layouts where name = ?", [
+      "Summer layout",
+    ]);
+    const page = await browser.newPage({ width: 390, height: 844 });
+    await login(page, demoAccount("driver"));
+    await page.goto(url("/profiles"));
+    await page.getByRole("button", { name: "Start a profile" }).click();
+    await page.getByLabel("Name").fill("Dee's buggy");
+    await page.getByLabel(/^Mass/).fill("1.75");
+    await page.getByRole("button", { name: "Save the profile" }).click();
+    await page.getByText("Dee's buggy is saved.").waitFor();
+    expect(await page.getByText("estimate", { exact: true }).count()).toBe(21);
+    // A bad value is named beside its field and nothing typed is lost.
+    await page.getByLabel(/^Mass/).fill("heavy");
+    await page.getByRole("button", { name: "Save changes" }).click();
+    await page.getByText("Mass must be a number (kg).").waitFor();
+    expect(await page.getByLabel(/^Mass/).inputValue()).toBe("heavy");
+    await screenshot(page, "33-car-profile-phone");
+
+    await page.goto(url(`/layouts/${summer.id}`));
+    await page.evaluate(() => ((window as unknown as { stayed: boolean }).stayed = true));
+    await page.getByLabel("Car", { exact: true }).selectOption({ label: "Dee's buggy" });
+    await page.waitForURL(/car=profile%3A/);
+    await page.getByText(/For your car\s*Dee's buggy/).waitFor();
+    expect(await page.evaluate(() => (window as unknown as { stayed?: boolean }).stayed)).toBe(true);
+    // The choice is remembered: the jump page and the plan open with it.
+    await page.goto(url(`/layouts/${summer.id}/jumps/first-double`));
+    await page.getByText(/Dee's buggy · verdicts for/).waitFor();
+    await page.goto(url(`/layouts/${summer.id}/plan`));
+    const car = page.locator("label", { hasText: /^Car/ }).locator("select");
+    await expect.poll(() => car.inputValue()).toMatch(/^profile:/);
+    await page.getByText("Speed (your car)").waitFor();
+    // Back to the class, so other tests see the demo driver as before.
+    await page.goto(url(`/layouts/${summer.id}?car=buggy-2wd-10&skill=club`));
+  });
 });
