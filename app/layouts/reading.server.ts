@@ -50,7 +50,7 @@ export function parseVersionParam(value: string | null, api = false): number | "
  * "draft" for a director's default, else the version's number and its publication.
  * @throws the 404 or 400 Response of readingFor.
  */
-export async function readingNumber(
+async function readingNumber(
   layoutId: string,
   role: Role,
   query: URLSearchParams,

@@ -5,7 +5,7 @@ import { analyseStoredLayout, overlayFor, parseSkill } from "~/layouts/analysis.
 import { analysisRefusal, jsonText } from "~/layouts/analysis-response.server";
 import { apiLayoutAccess } from "~/layouts/api-access.server";
 import { loadVersionDocument } from "~/layouts/documents.server";
-import { readingNumber } from "~/layouts/reading.server";
+import { apiReading } from "~/layouts/api-reading.server";
 
 /**
  * GET /api/layouts/:layoutId/analysis?car=ID|profile:ID&skill=novice|club|expert&version=N: a
@@ -22,7 +22,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { layout, guidance, role, userId } = await apiLayoutAccess(request, params.layoutId);
   const query = new URL(request.url).searchParams;
   try {
-    const which = await readingNumber(layout.id, role, query, { api: true });
+    const which = await apiReading(layout.id, role, query);
     const field = query.get("car") !== null ? "car" : "class";
     const { classId, own } = await carParam(userId, query.get(field), field);
     const skill = parseSkill(query.get("skill"), "skill");
@@ -58,14 +58,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         layoutId: layout.id,
         version: layout.version,
         readVersion,
-        published:
-          which.kind === "published" && which.publication
-            ? {
-                versionNumber: which.publication.versionNumber,
-                raceDate: which.publication.raceDate,
-                withdrawn: which.publication.withdrawnAt !== null,
-              }
-            : null,
+        published: which.kind === "draft" ? null : which.publication,
         status: layout.status,
         classId: overlay.classId,
         skill,
