@@ -17,7 +17,7 @@ import type { Role } from "~/lib/roles";
 import { raceDateText } from "~/lib/race-date";
 import { analyseStoredLayout } from "./analysis.server";
 import { loadLayoutDocument, loadVersionDocument } from "./documents.server";
-import { currentPublication, listPublications } from "./publishing.server";
+import { currentPublication, listPublications } from "./publications.server";
 import { parseVersionParam } from "./reading.server";
 
 type LayoutRow = typeof layouts.$inferSelect;

@@ -10,7 +10,7 @@ import { layouts, users } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
-import { hasLivePublication } from "./publishing.server";
+import { hasLivePublication } from "./publications.server";
 
 export type LayoutFields = { name: string; surface: Surface; trackWidth: number };
 

@@ -8,7 +8,7 @@ import type { LayoutDocument } from "~/analysis";
 import type { layouts } from "~/db/schema";
 import type { Role } from "~/lib/roles";
 import { loadLayoutDocument, loadVersionDocument } from "./documents.server";
-import { currentPublication, listPublications, type Publication } from "./publishing.server";
+import { currentPublication, listPublications, type Publication } from "./publications.server";
 
 type LayoutRow = typeof layouts.$inferSelect;
 

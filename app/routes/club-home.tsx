@@ -5,7 +5,7 @@ import { ImportForm } from "~/components/analysis/import-form";
 import { StatusBadge, surfaceLabel } from "~/components/layout-meta";
 import { buttonClass } from "~/components/ui/button";
 import { listClubLayouts } from "~/layouts/layouts.server";
-import { raceDayVersions } from "~/layouts/publishing.server";
+import { raceDayVersions } from "~/layouts/publications.server";
 import { raceDateText } from "~/lib/race-date";
 
 export const meta: Route.MetaFunction = () => [{ title: "Layouts · Loftline" }];
