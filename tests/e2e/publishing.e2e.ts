@@ -101,6 +101,16 @@ describe("publishing for race day", () => {
       .poll(() => banner(driver).textContent())
       .toMatch(/Published version 1.*race-day version is now\s*version 3/);
 
+    // Comparing the two published versions: one section changed, drawn and listed.
+    await driver.goto(url(`/layouts/${id}/compare?from=1&to=3`));
+    await driver
+      .getByRole("heading", { name: /From version 1 to version 3: 0 added, 0 removed, 1 changed/ })
+      .waitFor();
+    expect(await driver.getByRole("list", { name: "Changed sections" }).textContent()).toMatch(
+      /length 24 m → 44 m/,
+    );
+    await screenshot(driver, "34-compare-versions-phone");
+
     // A share link opens the race-day version signed out.
     await director.goto(url(`/layouts/${id}/publishing`));
     await director.getByTestId("publication-3").getByRole("button", { name: "Create a share link" }).click();
