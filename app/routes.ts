@@ -19,6 +19,11 @@ export default [
   route("layouts/:layoutId/build/marking.pdf", "routes/build-pack-marking-pdf.ts"),
   route("layouts/:layoutId/build/marking.csv", "routes/build-pack-marking-csv.ts"),
   route("layouts/:layoutId/build/earthworks.pdf", "routes/build-pack-earthworks-pdf.ts"),
+  route("profiles/:profileId/export", "routes/profile-export.ts"),
+
+  // A published version shared by link: signed out, read-only, not indexed, rate limited.
+  route("shared/:token", "routes/shared-layout.tsx"),
+  route("shared/:token/jumps/:sectionId", "routes/shared-jump.tsx"),
 
   // Signed-in areas: the layout route's loader requires a user; each child checks its club role.
   layout("routes/signed-in-frame.tsx", [
@@ -39,6 +44,11 @@ export default [
     route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
     route("layouts/:layoutId/build", "routes/build-pack.tsx"),
+    route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),
+    route("layouts/:layoutId/compare", "routes/layout-compare.tsx"),
+    route("profiles", "routes/profiles.tsx"),
+    route("profiles/new", "routes/profile-new.tsx"),
+    route("profiles/:profileId", "routes/profile-edit.tsx"),
     route("files/:fileId", "routes/file.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -12,7 +12,7 @@ import { compactJsonBytes } from "./analysis-json";
 
 export interface AnalysisTask {
   document: LayoutDocument;
-  options: Pick<AnalyseOptions, "classIds" | "skill" | "guidance" | "overrides" | "thresholds">;
+  options: Pick<AnalyseOptions, "classIds" | "skill" | "guidance" | "overrides" | "thresholds" | "cars">;
   /** Told when the work starts, so the time limit counts running time, not time in the queue. */
   port?: MessagePort;
 }

@@ -19,6 +19,9 @@ export function SiteHeader({ user, showDevTools }: Props) {
             <NavLink to="/clubs" className={navClass}>
               Clubs and layouts
             </NavLink>
+            <NavLink to="/profiles" className={navClass}>
+              Your cars
+            </NavLink>
           </nav>
         ) : null}
         <div className="ml-auto flex items-center gap-3 text-sm">

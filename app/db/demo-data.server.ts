@@ -4,14 +4,14 @@
  * the second time (users, club, memberships and layouts are looked up before they are created).
  */
 import bcrypt from "bcryptjs";
-import { and, eq } from "drizzle-orm";
+import { and, desc, eq } from "drizzle-orm";
 import { DEMO_LAYOUTS as DEMO_LAYOUT_DOCUMENTS } from "~/db/demo-layouts";
 import { hashPassword, normaliseEmail } from "~/auth/users.server";
 import type { LayoutDocument } from "~/analysis";
 import type { Database } from "./client.server";
 import { DEMO_ACCOUNTS, DEMO_CLUB_NAME } from "./demo-accounts";
 import type { LayoutStatus, Role } from "~/lib/roles";
-import { clubs, layouts, layoutVersions, memberships, users } from "./schema";
+import { clubs, layouts, layoutVersions, memberships, publishedVersions, users } from "./schema";
 
 export { DEMO_CLUB_NAME };
 
@@ -157,18 +157,51 @@ export async function seedDemoLayouts(tx: Tx, clubId: string, createdBy: string)
       .from(layoutVersions)
       .where(eq(layoutVersions.layoutId, found.id))
       .limit(1);
-    if (stored) continue;
-    await tx
-      .update(layouts)
-      .set({ surface: document.surface, trackWidth: document.trackWidth })
-      .where(eq(layouts.id, found.id));
-    await tx.insert(layoutVersions).values({
-      layoutId: found.id,
-      number: found.version,
-      document: JSON.stringify(document),
-      note: "Demo layout",
-      createdBy,
-    });
+    if (!stored) {
+      await tx
+        .update(layouts)
+        .set({ surface: document.surface, trackWidth: document.trackWidth })
+        .where(eq(layouts.id, found.id));
+      await tx.insert(layoutVersions).values({
+        layoutId: found.id,
+        number: found.version,
+        document: JSON.stringify(document),
+        note: "Demo layout",
+        createdBy,
+      });
+    }
+    if (demo.status === "published") await publishDemoLayout(tx, found.id, createdBy);
   }
   return count;
+}
+
+/** The demo's race day: the first Saturday at least a week after `now`, "YYYY-MM-DD". */
+export function demoRaceDate(now = Date.now()): string {
+  const day = new Date(now + 7 * 24 * 60 * 60 * 1000);
+  day.setUTCDate(day.getUTCDate() + ((6 - day.getUTCDay() + 7) % 7));
+  return day.toISOString().slice(0, 10);
+}
+
+/** Publishes a demo layout's newest saved version for the demo's race day, unless one is published. */
+async function publishDemoLayout(tx: Tx, layoutId: string, publishedBy: string) {
+  const [live] = await tx
+    .select({ id: publishedVersions.id })
+    .from(publishedVersions)
+    .where(eq(publishedVersions.layoutId, layoutId))
+    .limit(1);
+  if (live) return;
+  const [latest] = await tx
+    .select({ number: layoutVersions.number })
+    .from(layoutVersions)
+    .where(eq(layoutVersions.layoutId, layoutId))
+    .orderBy(desc(layoutVersions.number))
+    .limit(1);
+  await tx.insert(publishedVersions).values({
+    layoutId,
+    versionNumber: latest.number,
+    raceDate: demoRaceDate(),
+    note: "Club round 4 on the summer layout. Practice from 09:00, first heat 11:00. Marshals report to the driver stand by 10:30.",
+    publishedBy,
+  });
+  await tx.update(layouts).set({ status: "published" }).where(eq(layouts.id, layoutId));
 }

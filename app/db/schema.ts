@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { foreignKey, index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { LAYOUT_STATUSES, ROLES } from "~/lib/roles";
 
 /** Shared column helpers: a text UUID primary key and millisecond timestamps. */
@@ -136,7 +136,7 @@ export const layouts = sqliteTable(
     status: text("status", { enum: LAYOUT_STATUSES }).notNull().default("draft"),
     /** Optimistic concurrency: every save must name the version it started from. */
     version: integer("version").notNull().default(1),
-    /** Random token of a read-only link a director chose to share; null when not shared. */
+    /** Unused since share links got their own table (share_links, hashed tokens); kept for old rows. */
     shareToken: text("share_token").unique(),
     createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
@@ -175,4 +175,85 @@ export const files = sqliteTable("files", {
   originalName: text("original_name").notNull(),
   createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
   createdAt: createdAt(),
+});
+
+/**
+ * A saved version a director published for race day (docs/decisions/0800-publishing-model.md).
+ * Marshals and drivers read the latest one not withdrawn; every one keeps its own address.
+ */
+export const publishedVersions = sqliteTable(
+  "published_versions",
+  {
+    id: id(),
+    layoutId: text("layout_id")
+      .notNull()
+      .references(() => layouts.id, { onDelete: "cascade" }),
+    /** The layout_versions number that was published. */
+    versionNumber: integer("version_number").notNull(),
+    /** Race day, "YYYY-MM-DD"; null for layouts published before race dates were kept. */
+    raceDate: text("race_date"),
+    note: text("note").notNull().default(""),
+    publishedBy: text("published_by").references(() => users.id, { onDelete: "set null" }),
+    publishedAt: integer("published_at", { mode: "timestamp_ms" })
+      .notNull()
+      .default(sql`(unixepoch() * 1000)`),
+    withdrawnAt: integer("withdrawn_at", { mode: "timestamp_ms" }),
+    withdrawnReason: text("withdrawn_reason"),
+    withdrawnBy: text("withdrawn_by").references(() => users.id, { onDelete: "set null" }),
+  },
+  (t) => [
+    index("published_versions_layout").on(t.layoutId, t.versionNumber),
+    foreignKey({
+      columns: [t.layoutId, t.versionNumber],
+      foreignColumns: [layoutVersions.layoutId, layoutVersions.number],
+      name: "published_versions_version_fk",
+    }).onDelete("cascade"),
+  ],
+);
+
+/** A read-only link to a published version that works signed out; only the token's SHA-256 is kept. */
+export const shareLinks = sqliteTable(
+  "share_links",
+  {
+    id: id(),
+    layoutId: text("layout_id")
+      .notNull()
+      .references(() => layouts.id, { onDelete: "cascade" }),
+    publicationId: text("publication_id")
+      .notNull()
+      .references(() => publishedVersions.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull().unique(),
+    createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+  },
+  (t) => [index("share_links_layout").on(t.layoutId)],
+);
+
+/** A member's own car: a car profile (JSON, degrees for angles) started from a class preset. */
+export const carProfiles = sqliteTable(
+  "car_profiles",
+  {
+    id: id(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    /** The class preset it started from: its values count as estimates until changed. */
+    presetId: text("preset_id").notNull(),
+    /** The profile as JSON in the car profile format (app/analysis/format/car-schema.ts). */
+    profile: text("profile").notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("car_profiles_user").on(t.userId)],
+);
+
+/** The car (a class id or "profile:<id>") and skill a member last chose on a layout, jump or plan page. */
+export const readerChoices = sqliteTable("reader_choices", {
+  userId: text("user_id")
+    .primaryKey()
+    .references(() => users.id, { onDelete: "cascade" }),
+  car: text("car"),
+  skill: text("skill"),
+  updatedAt: updatedAt(),
 });

@@ -11,8 +11,16 @@ import type { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
-import { AnalysisInputError, analyseStoredLayout, overlayFor, parseSkill } from "./analysis.server";
+import type { CarOption, ReaderChoice } from "~/cars/reader-choice.server";
+import {
+  AnalysisInputError,
+  analyseStoredLayout,
+  overlayFor,
+  parseSkill,
+  type LayoutRef,
+} from "./analysis.server";
 import { loadLayoutDocument } from "./documents.server";
+import { savedSource, type Reading } from "./reading.server";
 
 type LayoutRow = typeof layouts.$inferSelect;
 
@@ -21,6 +29,9 @@ export interface PageAnalysis {
   classId: string;
   skill: SkillLevel;
   classes: { classId: string; label: string }[];
+  /** The car picker's value (a class id or "profile:<id>") and what it offers. */
+  car: string;
+  cars: CarOption[];
   /** Plain-words notes about query parameters that were not understood. */
   problems: string[];
   /** The analysis, or why it could not be made. */
@@ -39,8 +50,17 @@ function compactOverlay(o: AnalysisOverlay): AnalysisOverlay {
   };
 }
 
-/** Reads class and skill from the page's query and runs (or recalls) the analysis. */
-export async function pageAnalysis(layout: LayoutRow, query: URLSearchParams): Promise<PageAnalysis> {
+/**
+ * Runs (or recalls) the analysis of the version read with the reader's car and skill
+ * (app/layouts/reading.server.ts, app/cars/reader-choice.server.ts); an own car is analysed beside
+ * the layout's classes. Without `ctx`, the draft with class and skill read from the query.
+ */
+export async function pageAnalysis(
+  layout: LayoutRow,
+  query: URLSearchParams,
+  ctx?: { reading: Reading; choice: ReaderChoice },
+): Promise<PageAnalysis> {
+  if (ctx) return versionAnalysis(layout, ctx.reading, ctx.choice);
   const { document } = await loadLayoutDocument(layout);
   const problems: string[] = [];
   const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
@@ -60,9 +80,47 @@ export async function pageAnalysis(layout: LayoutRow, query: URLSearchParams): P
     if (!(error instanceof AnalysisInputError)) throw error;
     problems.push(`skill: must be ${wordList(SKILL_LEVELS)}; showing ${skill}.`);
   }
-  const base = { document, classId, skill, classes, problems };
+  const cars = classes.map((c) => ({ value: c.classId, label: c.label, own: false }));
+  const base = { document, classId, skill, classes, problems, car: classId, cars };
+  return withResult(base, () => analyseStoredLayout(layout, { skill }));
+}
+
+/** The analysis of the version read with the reader's choice (also the share link's pages). */
+export async function versionAnalysis(
+  layout: LayoutRef,
+  reading: Pick<Reading, "kind" | "number" | "document">,
+  choice: Omit<ReaderChoice, "label">,
+): Promise<PageAnalysis> {
+  const { document } = reading;
+  const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
+  if (choice.own) classes.push({ classId: choice.own.classId, label: choice.own.car.label });
+  const base = {
+    document,
+    classId: choice.classId,
+    skill: choice.skill,
+    classes,
+    problems: choice.problems,
+    car: choice.car,
+    cars: choice.options,
+  };
+  const own = choice.own;
+  return withResult(base, () =>
+    analyseStoredLayout(layout, {
+      skill: choice.skill,
+      classIds: own ? [...document.carClasses, own.classId] : undefined,
+      cars: own ? { [own.classId]: own.car } : undefined,
+      saved: savedSource(reading),
+    }),
+  );
+}
+
+async function withResult(
+  base: Omit<PageAnalysis, "result">,
+  analyse: () => ReturnType<typeof analyseStoredLayout>,
+): Promise<PageAnalysis> {
+  const { classId, skill } = base;
   try {
-    const run = await analyseStoredLayout(layout, { skill });
+    const run = await analyse();
     const a = run.analysis;
     const chosen = a.classes.find((c) => c.classId === classId) ?? a.classes[0];
     const summary: SummaryData = {

@@ -22,7 +22,7 @@ import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
 import type { AnalysisOverlay } from "~/analysis";
-import type { LayoutDocument, LayoutIssue } from "~/analysis";
+import type { CarParams, LayoutDocument, LayoutIssue } from "~/analysis";
 import { analysisInputIssues, KNOWN_CLASSES } from "./document-checks.server";
 import { loadLayoutDocument } from "./documents.server";
 
@@ -77,6 +77,8 @@ export async function analyseDocument(
     guidance?: ClubGuidance;
     fieldPrefix?: string;
     owner?: string;
+    /** Own cars by class id; their ids carry the profile's content hash, so the memo keys stay honest. */
+    cars?: Readonly<Record<string, CarParams>>;
   },
 ): Promise<AnalysisRun> {
   const issues = analysisInputIssues(document, opts.fieldPrefix ?? "");
@@ -99,6 +101,7 @@ export async function analyseDocument(
         overrides: guidance.overrides,
         thresholds: verdictThresholds(guidance),
         owner: opts.owner,
+        cars: opts.cars,
       },
     ),
   );
@@ -117,28 +120,44 @@ async function fullRow(layout: LayoutRef | LayoutRow): Promise<LayoutRow> {
 }
 
 /**
- * A stored layout's analysis at its current version with its club's guidance. A warm repeat is
- * answered from the memo by the layout's id and version, without reading the document.
+ * A stored layout's analysis at its current version (or, with `opts.saved`, at one saved version,
+ * e.g. the published one) with its club's guidance. A warm repeat is answered from the memo by the
+ * layout's id and version, without reading the document.
  * @param opts.classIds undefined for the document's own classes; opts.guidance when already read;
- * opts.owner the account asking (see analyseDocument).
+ *   opts.cars own cars by class id; opts.owner the account asking (see analyseDocument).
  */
 export async function analyseStoredLayout(
   layout: LayoutRef | LayoutRow,
-  opts: { classIds?: readonly string[]; skill: SkillLevel; guidance?: ClubGuidance; owner?: string },
+  opts: {
+    classIds?: readonly string[];
+    skill: SkillLevel;
+    guidance?: ClubGuidance;
+    cars?: Readonly<Record<string, CarParams>>;
+    owner?: string;
+    saved?: { number: number; load: () => Promise<LayoutDocument> };
+  },
 ): Promise<AnalysisRun & { guidance: ClubGuidance }> {
   const guidance = opts.guidance ?? (await loadClubGuidance(layout.clubId));
-  const aliasOf = (version: number) =>
+  const which = opts.saved ? `saved:${opts.saved.number}` : layout.version;
+  const aliasOf = (version: number | string) =>
     canonicalJson([layout.id, version, guidance, opts.classIds ?? "*", opts.skill]);
-  const known = entryByAlias<LayoutAnalysis>(aliasOf(layout.version));
+  const known = entryByAlias<LayoutAnalysis>(aliasOf(which));
   if (known) return { analysis: known.value, entry: known, hit: true, guidance };
-  const row = await fullRow(layout);
-  const { document } = await loadLayoutDocument(row);
-  const run = await analyseDocument(document, {
+  const settings = {
     classIds: opts.classIds,
     skill: opts.skill,
     guidance,
+    cars: opts.cars,
     owner: opts.owner,
-  });
+  };
+  if (opts.saved) {
+    const run = await analyseDocument(await opts.saved.load(), settings);
+    setAlias(aliasOf(which), run.entry.key);
+    return { ...run, guidance };
+  }
+  const row = await fullRow(layout);
+  const { document } = await loadLayoutDocument(row);
+  const run = await analyseDocument(document, settings);
   setAlias(aliasOf(row.version), run.entry.key);
   return { ...run, guidance };
 }

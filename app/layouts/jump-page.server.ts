@@ -5,7 +5,7 @@
 import { compileServo, evaluate } from "~/analysis";
 import { carPreset } from "~/analysis";
 import { jumpProfile } from "~/analysis";
-import type { JumpAnalysis, JumpPlan } from "~/analysis";
+import type { CarParams, JumpAnalysis, JumpPlan } from "~/analysis";
 import type { ElevationData } from "~/components/analysis/jump-elevation";
 import type { SteeringSeries } from "~/components/analysis/steering-chart";
 import type { JumpSection } from "~/analysis";
@@ -31,13 +31,15 @@ export function elevationData(section: JumpSection, jump: JumpAnalysis): Elevati
 /**
  * Where the front wheels are while the servo follows the plan's targets (the engine's own servo
  * model), as the corners of a polyline in degrees; null without a plan or a known car.
+ * @param ownCar the reader's own car when `classId` is not a class preset.
  */
 export function steeringSeries(
   plan: JumpPlan | null,
   classId: string,
   airtime: number,
+  ownCar?: CarParams,
 ): SteeringSeries | null {
-  const car = carPreset(classId);
+  const car = ownCar ?? carPreset(classId);
   if (!plan || !car || plan.steering.length === 0 || !(airtime > 0)) return null;
   const rate = Math.PI / 3 / car.servoSecondsPer60;
   const servo = compileServo(

@@ -10,6 +10,7 @@ import { layouts, users } from "~/db/schema";
 import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
+import { hasLivePublication } from "./publications.server";
 
 export type LayoutFields = { name: string; surface: Surface; trackWidth: number; carClasses: string[] };
 
@@ -103,19 +104,24 @@ export async function updateLayoutMeta(layoutId: string, expectedVersion: number
   return changeAt(layoutId, expectedVersion, rowFields(fields));
 }
 
-/** Which status each status change moves from and to. */
+/**
+ * Which status each status change moves from and to. Publishing and withdrawing are not status
+ * changes: they go through app/layouts/publishing.server.ts, which keeps `status` in step.
+ */
 export const STATUS_CHANGES = {
-  publish: { from: ["draft"], to: "published" },
-  unpublish: { from: ["published"], to: "draft" },
   archive: { from: ["draft", "published"], to: "archived" },
   unarchive: { from: ["archived"], to: "draft" },
 } as const satisfies Record<string, { from: LayoutStatus[]; to: LayoutStatus }>;
 export type StatusChange = keyof typeof STATUS_CHANGES;
 
-/** Moves the layout to another status (409 when it is not in a status the change starts from). */
+/**
+ * Moves the layout to another status (409 when it is not in a status the change starts from). A
+ * layout taken out of the archive is "published" again while one of its versions is still live.
+ */
 export async function changeLayoutStatus(layoutId: string, expectedVersion: number, change: StatusChange) {
   const { from, to } = STATUS_CHANGES[change];
-  return changeAt(layoutId, expectedVersion, { status: to }, [...from]);
+  const status = change === "unarchive" && (await hasLivePublication(layoutId)) ? "published" : to;
+  return changeAt(layoutId, expectedVersion, { status }, [...from]);
 }
 
 /** Deletes the layout; its saved versions go with it (ON DELETE CASCADE). */

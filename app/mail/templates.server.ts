@@ -79,3 +79,33 @@ export function invitationMail(input: {
     html: htmlMessage(intro, { href: input.link, label: `Join ${input.clubName}` }, footer),
   };
 }
+
+/**
+ * The message every member of the club gets when a director publishes a layout version for race
+ * day: the race date, the director's note, a link to the version, and the safety cautions.
+ */
+export function layoutPublishedMail(input: {
+  clubName: string;
+  layoutName: string;
+  versionNumber: number;
+  raceDateText: string;
+  note: string;
+  link: string;
+  cautions: readonly string[];
+}): MailContent {
+  const intro = [
+    "Hello,",
+    `${input.clubName} has published ${input.layoutName} (version ${input.versionNumber}) for race day ${input.raceDateText}.`,
+    ...(input.note ? [`Note from the race director: ${input.note}`] : []),
+    "Open it to see the plan, each jump's speed, airtime and landing, and the verdicts for your car and skill level.",
+  ];
+  const footer = [
+    ...input.cautions,
+    "You get this because you are a member of the club on Loftline. Sign in to see the layout.",
+  ];
+  return {
+    subject: `${input.layoutName}: race day ${input.raceDateText}`,
+    text: [...intro, "", input.link, "", ...footer].join("\n"),
+    html: htmlMessage(intro, { href: input.link, label: `Open ${input.layoutName}` }, footer),
+  };
+}

@@ -3,7 +3,8 @@ import { requireLayoutAccess, requireUser } from "~/auth/permissions.server";
 import { cachedBody } from "~/analysis-cache.server";
 import type { ClubGuidance } from "~/clubs/guidance.server";
 import { loadClubGuidance } from "~/clubs/guidance.server";
-import { analyseDocument, overlayFor, parseClassId, parseSkill } from "~/layouts/analysis.server";
+import { carParam } from "~/cars/reader-choice.server";
+import { analyseDocument, overlayFor, parseSkill } from "~/layouts/analysis.server";
 import { countAnalysisRequest } from "~/layouts/analysis-rate.server";
 import { analysisRefusal, badRequest, jsonText } from "~/layouts/analysis-response.server";
 import { ONE_MEGABYTE, readJsonBody } from "~/lib/json-body.server";
@@ -12,15 +13,16 @@ import { parseLayoutDocument } from "~/analysis";
 /** Only POST has a meaning here. */
 export function loader(_: Route.LoaderArgs) {
   return Response.json(
-    { error: "Send a layout document with POST: { document, classId?, skill?, layoutId? }." },
+    { error: "Send a layout document with POST: { document, classId? or car?, skill?, layoutId? }." },
     { status: 405, headers: { Allow: "POST" } },
   );
 }
 
 /**
  * POST /api/analysis: the analysis of a draft layout document, nothing saved (the editor calls it
- * while a director drags). Body `{ document, classId?, skill?, layoutId? }`, at most 1 MB (413
- * beyond). Answers `{ analysis, overlay }`: every class of the document, or only `classId`; the
+ * while a director drags). Body `{ document, classId?, car?, skill?, layoutId? }`, at most 1 MB
+ * (413 beyond); `car` is a class id or "profile:<id>" of the caller's own car profile (404 for
+ * anyone else's). Answers `{ analysis, overlay }`: every class of the document, or only that car; the
  * overlay for `classId` or the first class. With `layoutId` (a layout the user may open) the
  * club's track guidance applies, otherwise the document's own set. Signed-in users only (401);
  * a bad document or field answers 400 with `{ error, issues: [{ path, message }] }`; over the
@@ -44,7 +46,8 @@ export async function action({ request }: Route.ActionArgs) {
     return badRequest(issues, `The layout document is not complete: ${issues.length} problem(s) found.`);
   }
   try {
-    const classId = parseClassId(input.classId, "classId");
+    const field = input.car !== undefined ? "car" : "classId";
+    const { classId, own } = await carParam(user.id, input[field], field);
     const skill = parseSkill(input.skill, "skill");
     let guidance: ClubGuidance | undefined;
     if (input.layoutId !== undefined) {
@@ -59,6 +62,7 @@ export async function action({ request }: Route.ActionArgs) {
       guidance,
       fieldPrefix: "document.",
       owner: user.id,
+      cars: own ? { [own.classId]: own.car } : undefined,
     });
     const text = cachedBody(run.entry, "post", () => ({
       analysis: run.analysis,

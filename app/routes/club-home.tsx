@@ -5,17 +5,20 @@ import { ImportForm } from "~/components/analysis/import-form";
 import { StatusBadge, surfaceLabel } from "~/components/layout-meta";
 import { buttonClass } from "~/components/ui/button";
 import { listClubLayouts } from "~/layouts/layouts.server";
+import { raceDayVersions } from "~/layouts/publications.server";
+import { raceDateText } from "~/lib/race-date";
 
 export const meta: Route.MetaFunction = () => [{ title: "Layouts · Loftline" }];
 
 /** The club's layouts: directors see every one with its status, marshals and drivers the published ones. */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { club, role } = await requireClubRole(request, params.clubId);
-  return { club, isDirector: role === "director", layouts: await listClubLayouts(club.id, role) };
+  const [layouts, raceDay] = await Promise.all([listClubLayouts(club.id, role), raceDayVersions(club.id)]);
+  return { club, isDirector: role === "director", layouts, raceDay };
 }
 
 export default function ClubHome({ loaderData }: Route.ComponentProps) {
-  const { club, isDirector, layouts } = loaderData;
+  const { club, isDirector, layouts, raceDay } = loaderData;
   return (
     <section aria-labelledby="layouts-heading">
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -50,8 +53,15 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
                 {isDirector ? <StatusBadge status={layout.status} /> : null}
               </div>
               <p className="mt-1 text-sm text-ink-500">
-                {surfaceLabel(layout.surface)} · {layout.trackWidth} m wide · version {layout.version}
+                {surfaceLabel(layout.surface)} · {layout.trackWidth} m wide
+                {isDirector ? ` · draft version ${layout.version}` : ""}
               </p>
+              {raceDay[layout.id] ? (
+                <p className="mt-1 text-sm text-ink-700">
+                  Race day {raceDateText(raceDay[layout.id].raceDate)} · version{" "}
+                  {raceDay[layout.id].versionNumber}
+                </p>
+              ) : null}
             </li>
           ))}
         </ul>

@@ -25,14 +25,15 @@ const ROLES = [
     points: [
       "Draw the layout from straights, turns and jumps, to scale, over a photo of the site.",
       "See the lap length, the lap time for each class and a verdict on every jump before the volunteers start digging.",
-      "Publish a version for race day and invite the club's members by e-mail.",
+      "Publish a version for race day with its date and a note: every member gets an e-mail, and later edits stay in your draft until you publish again.",
+      "Share a read-only link to a published version, and compare two versions section by section.",
     ],
   },
   {
     title: "For the drivers",
     points: [
-      "Read the published layout before practice and know which jumps lead into turns.",
-      "For each jump and each class of car: takeoff speed, time in the air and where you land.",
+      "Read the race-day version before practice and know which jumps lead into turns.",
+      "For each jump, for a class of car or your own car's measured numbers: takeoff speed, time in the air and where you land.",
       "Whether to take it straight, or how to set the car up in the air for the turn, and how much timing slack you have.",
     ],
   },
@@ -61,7 +62,7 @@ const STEPS = [
   },
   {
     title: "Share it for race day",
-    text: "Publish a version, e-mail the members, hand the marshals their sheet. Everyone sees the same layout, each with what their role needs.",
+    text: "Publish a version with its race date and every member gets an e-mail with a link; a read-only link can go to anyone else. Everyone sees the same fixed version, each with what their role needs.",
   },
 ] as const;
 

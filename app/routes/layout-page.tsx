@@ -11,6 +11,9 @@ import { Button } from "~/components/ui/button";
 import { FieldError, FormMessage, type FieldErrors } from "~/components/ui/form";
 import type { LayoutStatus } from "~/lib/roles";
 import { pageAnalysis } from "~/layouts/analysis-page.server";
+import { readerChoice } from "~/cars/reader-choice.server";
+import { readingFor, readingView } from "~/layouts/reading.server";
+import { VersionBanner } from "~/components/publishing/version-banner";
 import {
   changeLayoutStatus,
   deleteLayout,
@@ -26,15 +29,19 @@ export const meta: Route.MetaFunction = ({ data }) => [
 ];
 
 /**
- * Members see a published layout; only directors see drafts and archived ones (others get 404).
- * The analysis follows the query: `class`, `skill`, and the jumps table's `sort` and `dir`; a
- * parameter that is not understood is named on the page (status 400) and the defaults are shown.
+ * Members see the race-day version of a published layout (or an earlier published one with
+ * `?version=n`); only directors see drafts and archived ones (others get 404). The analysis
+ * follows the query: `car` (a class id or `profile:<id>`; `class` from older links), `skill`, and
+ * the jumps table's `sort` and `dir`; car and skill are remembered for the member. A parameter that
+ * is not understood is named on the page (status 400) and the defaults are shown.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role } = await requireLayoutAccess(request, params.layoutId);
+  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId);
   const query = new URL(request.url).searchParams;
   const isDirector = role === "director";
-  const page = await pageAnalysis(layout, query);
+  const reading = await readingFor(layout, role, query);
+  const choice = await readerChoice(user.id, query, reading.document.carClasses);
+  const page = await pageAnalysis(layout, query, { reading, choice });
   const sort = parseJumpSort(query);
   const problems = sort.problem ? [...page.problems, sort.problem] : page.problems;
   const { driverStand, marshalPoints, siteBoundary, trackWidth } = page.document;
@@ -46,6 +53,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     classId: page.classId,
     skill: page.skill,
     classes: page.classes,
+    car: page.car,
+    cars: page.cars,
+    version: reading.query,
     problems,
     sort,
     result: page.result,
@@ -58,20 +68,19 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     trackWidth: layout.trackWidth,
     carClasses: page.document.carClasses,
     status: layout.status,
-    version: layout.version,
+    // Marshals and drivers read a published version: its number and date, not the draft's.
+    version: isDirector ? layout.version : (reading.number ?? layout.version),
     createdAt: layout.createdAt,
-    updatedAt: layout.updatedAt,
+    updatedAt: isDirector ? layout.updatedAt : (reading.publication?.publishedAt ?? layout.updatedAt),
   };
   return data(
-    { analysis, club, isDirector, layout: facts, createdByName },
+    { analysis, club, isDirector, layout: facts, createdByName, reading: readingView(reading) },
     { status: problems.length ? 400 : 200 },
   );
 }
 
 const DONE: Record<string, string> = {
   update: "Saved.",
-  publish: "Published: every member of the club can now see it.",
-  unpublish: "Back to draft: only race directors see it now.",
   archive: "Archived.",
   unarchive: "Taken out of the archive as a draft.",
 };
@@ -103,7 +112,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function LayoutPage({ loaderData, actionData }: Route.ComponentProps) {
-  const { club, layout, isDirector, createdByName, analysis } = loaderData;
+  const { club, layout, isDirector, createdByName, analysis, reading } = loaderData;
   const errors: FieldErrors | undefined = actionData?.errors;
   const values = actionData?.values;
   return (
@@ -122,6 +131,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
       <FormMessage>
         {[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}
       </FormMessage>
+      <VersionBanner layoutId={layout.id} reading={reading} isDirector={isDirector} />
       <LayoutAnalysisSection data={analysis} layoutName={layout.name} />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <section
@@ -146,6 +156,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
 
 type Tools = {
   layout: {
+    id: string;
     name: string;
     surface: string;
     trackWidth: number;
@@ -161,14 +172,8 @@ function DirectorTools({ layout, errors, values }: Tools) {
   const busy = useNavigation().state === "submitting";
   const version = <input type="hidden" name="version" value={layout.version} />;
   const statusButtons: Record<LayoutStatus, [string, string][]> = {
-    draft: [
-      ["publish", "Publish for the club"],
-      ["archive", "Archive"],
-    ],
-    published: [
-      ["unpublish", "Back to draft"],
-      ["archive", "Archive"],
-    ],
+    draft: [["archive", "Archive"]],
+    published: [["archive", "Archive"]],
     archived: [["unarchive", "Take out of the archive"]],
   };
   return (
@@ -190,7 +195,11 @@ function DirectorTools({ layout, errors, values }: Tools) {
           Status
         </h2>
         <p className="mt-1 text-sm text-ink-500">
-          Marshals and drivers see a layout only while it is published.
+          Marshals and drivers see only published versions, never the draft.{" "}
+          <Link to={`/layouts/${layout.id}/publishing`} className="text-pine-700 hover:underline">
+            Publish for race day, withdraw or share
+          </Link>
+          . An archived layout is hidden from them.
         </p>
         <Form method="post" className="mt-3 flex flex-wrap gap-2">
           {version}
@@ -200,7 +209,7 @@ function DirectorTools({ layout, errors, values }: Tools) {
               type="submit"
               name="intent"
               value={intent}
-              variant={intent === "publish" ? "primary" : "secondary"}
+              variant="secondary"
               disabled={busy}
             >
               {label}

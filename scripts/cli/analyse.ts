@@ -1,10 +1,12 @@
 /**
- * `loftline analyse FILE [--class ID] [--skill novice|club|expert]`: the whole analysis of a
+ * `loftline analyse FILE [--class ID] [--car CAR_FILE] [--skill novice|club|expert]`: the whole analysis of a
  * layout file (the product's own format, docs/layout-format.md) as JSON: lap length and time,
  * closure, rule checks, and per car class and jump: takeoff speed, speed window, airtime,
  * landing, equivalent fall height, the turn it lands into and the distance to it, the verdict
- * with its reason and numbers, and for a whoops row the ways through it. `--class` may be given more than once (default: the
- * layout's own classes); `--skill` picks the level of each jump's `verdict` (default club; every
+ * with its reason and numbers, and for a whoops row the ways through it. `--class` may be given
+ * more than once (default: the layout's own classes); `--car` names a car profile file (the profile
+ * page's download, format in app/analysis/format/car-schema.ts) analysed in place of a class, as
+ * "own-1", "own-2", ...; `--skill` picks the level of each jump's `verdict` (default club; every
  * level is in `verdicts`). Bad input names the field on stderr, exit code 2, nothing on stdout.
  */
 import { analyseLayout } from "~/analysis";
@@ -17,13 +19,32 @@ import {
 } from "~/analysis";
 import { CAR_PRESET_IDS, carPreset } from "~/analysis";
 import { parseLayoutDocument } from "~/analysis";
-import { InputError, type CliCommand } from "./io";
+import { carFromProfile, parseCarProfile, type CarParams } from "~/analysis";
+import { InputError, parseJson, readInput, type CliCommand } from "./io";
 
 const SKILL_OPTION = `--skill ${SKILL_LEVELS.join("|")}`;
 
 export interface AnalyseArgs {
   classIds?: string[];
+  /** Own cars from `--car` files, by their id in the output ("own-1", ...). */
+  cars?: Record<string, CarParams>;
   skill?: SkillLevel;
+}
+
+/** Reads a `--car` file: a car profile; a bad one names the file and the field. */
+function readCarFile(path: string, id: string): CarParams {
+  let json: unknown;
+  try {
+    json = parseJson(readInput(path));
+  } catch (error) {
+    throw new InputError(`--car ${path}`, (error as InputError).message.replace(/^FILE: /, ""));
+  }
+  const parsed = parseCarProfile(json);
+  if (!parsed.ok) {
+    const [first] = parsed.issues;
+    throw new InputError(`--car ${path}: ${first.path}`, first.message);
+  }
+  return carFromProfile(parsed.profile, id);
 }
 
 /** Reads the options after FILE; unknown options and missing values are InputErrors. */
@@ -38,13 +59,18 @@ export function parseAnalyseArgs(args: readonly string[]): AnalyseArgs {
       if (!carPreset(value))
         throw new InputError("--class", `unknown car class "${value}" (known: ${CAR_PRESET_IDS.join(", ")})`);
       (out.classIds ??= []).push(value);
+    } else if (flag === "--car") {
+      if (!value) throw new InputError("--car", "needs a car profile file");
+      const id = `own-${Object.keys(out.cars ?? {}).length + 1}`;
+      (out.cars ??= {})[id] = readCarFile(value, id);
+      (out.classIds ??= []).push(id);
     } else if (flag === "--skill") {
       if (!value) throw new InputError("--skill", `needs a level: ${quotedList(SKILL_LEVELS)}`);
       if (!SKILL_LEVELS.includes(value as SkillLevel))
         throw new InputError("--skill", `must be ${quotedList(SKILL_LEVELS)} (got "${value}")`);
       out.skill = value as SkillLevel;
     } else {
-      throw new InputError(flag, `unknown option (known: --class ID, ${SKILL_OPTION})`);
+      throw new InputError(flag, `unknown option (known: --class ID, --car CAR_FILE, ${SKILL_OPTION})`);
     }
   }
   return out;
@@ -107,7 +133,7 @@ export function analyseOutput(a: LayoutAnalysis) {
 /** The `analyse` command with the options given after FILE (`process.argv.slice(4)` from the registry). */
 export function analyseCommand(args: readonly string[]): CliCommand {
   return {
-    summary: `analyse FILE [--class ID] [${SKILL_OPTION}]   whole analysis of a layout file`,
+    summary: `analyse FILE [--class ID] [--car CAR_FILE] [${SKILL_OPTION}]   whole analysis of a layout file`,
     run(input) {
       const options = parseAnalyseArgs(args);
       const parsed = parseLayoutDocument(input);
@@ -125,7 +151,9 @@ export function analyseCommand(args: readonly string[]): CliCommand {
           );
         }
       });
-      return analyseOutput(analyseLayout(doc, { classIds: options.classIds, skill: options.skill }));
+      return analyseOutput(
+        analyseLayout(doc, { classIds: options.classIds, skill: options.skill, cars: options.cars }),
+      );
     },
   };
 }

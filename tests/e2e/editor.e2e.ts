@@ -345,6 +345,10 @@ describe("layout editor", () => {
     };
     const id = await createLayout(`Race day ${Date.now()}`, doc);
     await queryDb("update layouts set status = 'published' where id = ?", [id]);
+    await queryDb(
+      "insert into published_versions (id, layout_id, version_number, race_date, note) values (?, ?, 1, '2030-06-01', '')",
+      [randomUUID(), id],
+    );
     const page = await browser.newPage();
     await login(page, demoAccount("marshal"));
     expect((await page.goto(url(`/layouts/${id}/edit`)))?.status()).toBe(403);

@@ -59,7 +59,7 @@ describe("what each demo role sees", () => {
     const { wet } = await layoutIds();
     await page.goto(url(`/layouts/${wet}`));
     expect(await page.getByRole("heading", { level: 1, name: "Wet-weather layout" }).count()).toBe(1);
-    expect(await page.getByRole("button", { name: "Publish for the club" }).count()).toBe(1);
+    expect(await page.getByRole("link", { name: "Publish for race day, withdraw or share" }).count()).toBe(1);
     expect(await page.getByRole("button", { name: "Delete the layout" }).count()).toBe(1);
     await screenshot(page, "06-layout-director");
   });

@@ -136,7 +136,7 @@ describe("GET /api/layouts/:layoutId/analysis", () => {
     expect((skill.data as Issues).issues[0].path).toBe("skill");
   });
 
-  it("serves the demo summer layout's analysis to a driver, from the memo on a repeat, fresh after a save", async () => {
+  it("serves the demo summer layout's published analysis to a driver, from the memo on a repeat, unchanged by a draft save", async () => {
     const summary = await seedDemoData(await getDb());
     const db = await getDb();
     const [summer] = await db.select().from(layouts).where(eq(layouts.name, "Summer layout"));
@@ -196,13 +196,17 @@ describe("GET /api/layouts/:layoutId/analysis", () => {
     const unzipped = JSON.parse(gunzipSync(new Uint8Array(await zipped.arrayBuffer())).toString("utf8"));
     expect(unzipped).toEqual(body);
 
-    // A saved change is a new version: analysed afresh, with the new lap length.
+    // A saved change goes to the draft: the director's answer is analysed afresh with the new lap
+    // length, while the driver keeps the published version's answer.
     const longer = structuredClone(SUMMER_LAYOUT);
     (longer.sections[0] as { length: number }).length += 10;
     await saveLayoutDocument(summer.id, summer.version, longer, director.id);
+    const draft = await get(summer.id, "?class=buggy-2wd-10&skill=expert", director.cookie);
+    expect(draft.headers.get("X-Analysis-Cache")).toBe("miss");
+    expect((draft.data as Answer).analysis.lapLength).toBeCloseTo(body.analysis.lapLength + 10, 1);
     const after = await get(summer.id, "?class=buggy-2wd-10&skill=expert", driver.cookie);
-    expect(after.headers.get("X-Analysis-Cache")).toBe("miss");
-    expect((after.data as Answer).analysis.lapLength).toBeCloseTo(body.analysis.lapLength + 10, 1);
+    expect(after.headers.get("X-Analysis-Cache")).toBe("hit");
+    expect((after.data as Answer).analysis.lapLength).toBe(body.analysis.lapLength);
   });
 });
 

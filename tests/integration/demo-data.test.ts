@@ -2,8 +2,8 @@ import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { verifyLogin } from "~/auth/users.server";
 import { DEMO_ACCOUNTS } from "~/db/demo-accounts";
-import { DEMO_CLUB_NAME, DEMO_EXTRA_MEMBERS, seedDemoData } from "~/db/demo-data.server";
-import { clubs, layouts, memberships, users } from "~/db/schema";
+import { DEMO_CLUB_NAME, DEMO_EXTRA_MEMBERS, demoRaceDate, seedDemoData } from "~/db/demo-data.server";
+import { clubs, layouts, memberships, publishedVersions, users } from "~/db/schema";
 import { useTestDatabase } from "./helpers/db";
 
 const { db: getDb } = useTestDatabase();
@@ -15,6 +15,7 @@ async function counts() {
     clubs: (await db.select({ id: clubs.id }).from(clubs)).length,
     memberships: (await db.select({ id: memberships.id }).from(memberships)).length,
     layouts: (await db.select({ id: layouts.id }).from(layouts)).length,
+    published: (await db.select({ id: publishedVersions.id }).from(publishedVersions)).length,
   };
 }
 
@@ -44,6 +45,17 @@ describe("demo data", () => {
       { name: "Summer layout", status: "published" },
       { name: "Wet-weather layout", status: "draft" },
     ]);
+    // The summer layout is published for a race day: a Saturday at least a week ahead, with a note.
+    const published = await db
+      .select({ name: layouts.name, raceDate: publishedVersions.raceDate, note: publishedVersions.note })
+      .from(publishedVersions)
+      .innerJoin(layouts, eq(layouts.id, publishedVersions.layoutId));
+    expect(published).toHaveLength(1);
+    expect(published[0]).toMatchObject({ name: "Summer layout", raceDate: demoRaceDate() });
+    expect(published[0].note).toMatch(/Practice from/);
+    const day = new Date(`${published[0].raceDate}T00:00:00Z`);
+    expect(day.getUTCDay()).toBe(6);
+    expect(day.getTime() - Date.now()).toBeGreaterThan(6 * 86400_000);
   });
 
   it("changes nothing when run again", async () => {

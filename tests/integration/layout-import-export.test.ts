@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
+import { publishDraft } from "~/layouts/publishing.server";
 import { createLayoutFromDocument, loadLayoutDocument } from "~/layouts/documents.server";
 import { parseLayoutDocument } from "~/analysis";
 import { action as importAction } from "~/routes/layout-import";
@@ -72,8 +73,7 @@ describe("layout export and import", () => {
       exportLoader(args(getRequest(`/layouts/${draft.id}/export`, marshal.cookie), { layoutId: draft.id })),
     );
     expect(asMarshal.status).toBe(404);
-    const db = await getDb();
-    await db.update(layouts).set({ status: "published" }).where(eq(layouts.id, draft.id));
+    await publishDraft(draft.id, draft.version, { raceDate: "2030-06-01", note: "" }, director.id);
     const published = await run(() =>
       exportLoader(args(getRequest(`/layouts/${draft.id}/export`, marshal.cookie), { layoutId: draft.id })),
     );

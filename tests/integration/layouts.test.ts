@@ -176,7 +176,7 @@ describe("changing a layout", () => {
     );
     expect(stale.status).toBe(409);
     expect(errorsOf(stale).version[0]).toMatch(/changed this layout after you opened it/);
-    const staleStatus = await change(layout.id, { intent: "publish", version: "1" }, director.cookie);
+    const staleStatus = await change(layout.id, { intent: "archive", version: "1" }, director.cookie);
     expect(staleStatus.status).toBe(409);
     expect(await row(layout.id)).toMatchObject({
       name: "Newer",
@@ -186,22 +186,29 @@ describe("changing a layout", () => {
     });
   });
 
-  it("publishes, unpublishes, archives and takes out of the archive, refusing changes that do not apply", async () => {
+  it("archives and takes out of the archive, refusing changes that do not apply; publishing has its own page", async () => {
     const { club, director } = await makeClubWithRoles();
     const layout = await makeLayout(club.id);
     const step = async (intent: string, version: number) =>
       (await change(layout.id, { intent, version: String(version) }, director.cookie)).status;
-    expect(await step("publish", 1)).toBe(302);
-    expect(await row(layout.id)).toMatchObject({ status: "published", version: 2 });
-    expect(await step("publish", 2)).toBe(409); // already published
-    expect(await step("unarchive", 2)).toBe(409);
-    expect(await step("unpublish", 2)).toBe(302);
-    expect((await row(layout.id)).status).toBe("draft");
-    expect(await step("archive", 3)).toBe(302);
+    expect(await step("publish", 1)).toBe(400); // not an intent of this page any more
+    expect(await step("unarchive", 1)).toBe(409);
+    expect(await step("archive", 1)).toBe(302);
     expect((await row(layout.id)).status).toBe("archived");
-    expect(await step("publish", 4)).toBe(409); // an archived layout comes back as a draft first
-    expect(await step("unarchive", 4)).toBe(302);
-    expect(await row(layout.id)).toMatchObject({ status: "draft", version: 5 });
+    expect(await step("archive", 2)).toBe(409);
+    expect(await step("unarchive", 2)).toBe(302);
+    expect(await row(layout.id)).toMatchObject({ status: "draft", version: 3 });
+  });
+
+  it("takes a layout with a live published version out of the archive as published", async () => {
+    const { club, director } = await makeClubWithRoles();
+    const layout = await makeLayout(club.id, { status: "published" });
+    const step = async (intent: string, version: number) =>
+      (await change(layout.id, { intent, version: String(version) }, director.cookie)).status;
+    expect(await step("archive", 1)).toBe(302);
+    expect((await row(layout.id)).status).toBe("archived");
+    expect(await step("unarchive", 2)).toBe(302);
+    expect((await row(layout.id)).status).toBe("published");
   });
 
   it("deletes only with the confirmation ticked, and its saved versions go with it", async () => {
@@ -238,7 +245,7 @@ describe("changing a layout", () => {
     );
     expect(r.status).toBe(400);
     expect(errorsOf(r).trackWidth).toEqual(["Enter the track width as a number of metres, like 3.5."]);
-    const noVersion = await change(layout.id, { intent: "publish" }, director.cookie);
+    const noVersion = await change(layout.id, { intent: "archive" }, director.cookie);
     expect(noVersion.status).toBe(400);
     expect(Object.keys(errorsOf(noVersion))).toEqual(["version"]);
     expect(await row(layout.id)).toMatchObject({ status: "draft", version: 1 });
@@ -265,8 +272,6 @@ describe("director-only layout actions", () => {
             carClasses: "buggy-2wd-10",
           },
         ],
-        [target.id, { intent: "publish", version: "1" }],
-        [target.id, { intent: "unpublish", version: "1" }],
         [target.id, { intent: "archive", version: "1" }],
         [target.id, { intent: "delete", confirm: "yes" }],
       );

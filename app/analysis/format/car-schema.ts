@@ -5,6 +5,7 @@
 import { z } from "zod";
 import type { AttitudeCar } from "../air/attitude";
 import type { PulseLimits } from "../air/air-plan-pulse";
+import { CAR_LABEL_MAX, CAR_NUMBER_FIELDS } from "./car-fields";
 import { CAR_PRESET_IDS, carPreset, type CarParams } from "./cars";
 
 const positive = (what: string) =>
@@ -40,22 +41,58 @@ export const attitudeCarSchema = z.object({
 });
 export type AttitudeCarInput = z.infer<typeof attitudeCarSchema>;
 
-/** A complete car profile: every number the flight, attitude, plan and lap models use. */
-export const carProfileSchema = attitudeCarSchema.extend({
-  label: z.string().trim().min(1, "label must not be empty").max(80, "label must be at most 80 characters"),
-  massKg: positive("massKg").max(20, "massKg must be at most 20 kg"),
-  wheelbase: positive("wheelbase").max(1, "wheelbase must be at most 1 m"),
-  track: positive("track").max(1, "track must be at most 1 m"),
-  frontWheel: wheelSchema.extend({ massKg: positive("massKg") }),
-  rearWheel: wheelSchema.extend({ massKg: positive("massKg") }),
-  drive: z.enum(["2wd", "4wd"], { error: 'drive must be "2wd" or "4wd"' }),
-  topSpeed: positive("topSpeed").max(60, "topSpeed must be at most 60 m/s"),
-  accel0: positive("accel0"),
-  brakeDecel: positive("brakeDecel"),
-  mu: positive("mu").max(3, "mu must be at most 3"),
-  cdA: z.number({ error: "cdA must be a number" }).min(0, "cdA must be 0 or more"),
-  maxWheelAccel: positive("maxWheelAccel"),
-  maxWheelBrake: positive("maxWheelBrake"),
+const FIELD_BY_NAME = new Map(CAR_NUMBER_FIELDS.map((f) => [f.name, f]));
+
+/** A profile number with the bounds, unit and label of its field (car-fields.ts). */
+function bounded(name: string) {
+  const f = FIELD_BY_NAME.get(name);
+  if (!f) throw new Error(`no car field ${name}`);
+  const u = f.unit ? ` ${f.unit}` : "";
+  return z
+    .number({ error: `${f.label} must be a number${f.unit ? ` (${f.unit})` : ""}` })
+    .min(f.min, `${f.label} must be at least ${f.min}${u}`)
+    .max(f.max, `${f.label} must be at most ${f.max}${u}`);
+}
+
+const profileWheel = (end: "front" | "rear") =>
+  z.object(
+    {
+      radius: bounded(`${end}Wheel.radius`),
+      spinInertia: bounded(`${end}Wheel.spinInertia`),
+      massKg: bounded(`${end}Wheel.massKg`),
+    },
+    { error: `${end}Wheel must be an object { radius, spinInertia, massKg }` },
+  );
+
+/**
+ * A complete car profile: every number the flight, attitude, plan and lap models use, each within
+ * the bounds of its field in car-fields.ts (messages name the field in plain words).
+ */
+export const carProfileSchema = z.object({
+  label: z
+    .string({ error: "Name must be text" })
+    .trim()
+    .min(1, "Name must not be empty")
+    .max(CAR_LABEL_MAX, `Name must be at most ${CAR_LABEL_MAX} characters`),
+  massKg: bounded("massKg"),
+  inertia: z.tuple([bounded("inertia.0"), bounded("inertia.1"), bounded("inertia.2")], {
+    error: "inertia must be [roll, pitch, yaw] in kg m²",
+  }),
+  wheelbase: bounded("wheelbase"),
+  track: bounded("track"),
+  frontWheel: profileWheel("front"),
+  rearWheel: profileWheel("rear"),
+  casterDeg: bounded("casterDeg"),
+  steeringLockDeg: bounded("steeringLockDeg"),
+  servoSecondsPer60: bounded("servoSecondsPer60"),
+  drive: z.enum(["2wd", "4wd"], { error: 'Drive must be "2wd" or "4wd"' }),
+  topSpeed: bounded("topSpeed"),
+  accel0: bounded("accel0"),
+  brakeDecel: bounded("brakeDecel"),
+  mu: bounded("mu"),
+  cdA: bounded("cdA"),
+  maxWheelAccel: bounded("maxWheelAccel"),
+  maxWheelBrake: bounded("maxWheelBrake"),
 });
 export type CarProfile = z.infer<typeof carProfileSchema>;
 
@@ -148,5 +185,42 @@ export function profileFromCar(c: CarParams): CarProfile {
     cdA: c.cdA,
     maxWheelAccel: c.maxWheelAccel,
     maxWheelBrake: c.maxWheelBrake,
+  };
+}
+
+/** Marks a car profile file (the profile page's download, the command line's `--car FILE`). */
+export const CAR_FILE_FORMAT = "loftline-car";
+
+/** A profile as a file: the format marker, then the profile's fields. */
+export function carProfileFile(p: CarProfile) {
+  return { format: CAR_FILE_FORMAT, formatVersion: 1, ...p };
+}
+
+export type ParseCarResult =
+  { ok: true; profile: CarProfile } | { ok: false; issues: { path: string; message: string }[] };
+
+/**
+ * Reads a car profile from parsed JSON (a file or a request body). A `format` marker, when
+ * present, must be "loftline-car".
+ * @returns the profile, or every issue with the path of its field ("frontWheel.radius").
+ */
+export function parseCarProfile(json: unknown): ParseCarResult {
+  if (typeof json !== "object" || json === null || Array.isArray(json))
+    return { ok: false, issues: [{ path: "(car)", message: "must be a JSON object" }] };
+  const format = (json as { format?: unknown }).format;
+  if (format !== undefined && format !== CAR_FILE_FORMAT)
+    return { ok: false, issues: [{ path: "format", message: `must be "${CAR_FILE_FORMAT}"` }] };
+  const result = carProfileSchema.safeParse(json);
+  if (result.success) return { ok: true, profile: result.data };
+  return {
+    ok: false,
+    issues: result.error.issues.map((i) => ({
+      path:
+        i.path
+          .map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`))
+          .join("")
+          .replace(/^\./, "") || "(car)",
+      message: i.message,
+    })),
   };
 }

@@ -5,3 +5,4 @@ export { analyseJump, TAKEOFF_SPEED_STEP, type JumpContext, type JumpAnalysisOpt
 export * from "./layout-analysis";
 export { buildOverlay, jumpLabel, linePolyline } from "./overlay";
 export type * from "./overlay-types";
+export * from "./compare";

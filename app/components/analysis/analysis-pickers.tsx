@@ -1,22 +1,29 @@
 import { Form } from "react-router";
 import { SKILL_LABELS, SKILL_LEVELS, type SkillLevel } from "~/analysis";
 
+export type CarChoiceOption = { value: string; label: string; own: boolean };
+
 /**
- * Car class and skill level pickers as a plain GET form (works without JavaScript: the Show button
- * submits; with JavaScript a change submits at once). Keeps the table's sort order.
+ * Car and skill level pickers as a plain GET form (works without JavaScript: the Show button
+ * submits; with JavaScript a change submits at once and the router fetches the page's loader, no
+ * reload). The car is one of the layout's classes or one of the reader's own car profiles
+ * (`car=profile:<id>`). Keeps the table's sort order and the version read.
  */
 export function AnalysisPickers({
-  classes,
-  classId,
+  cars,
+  car,
   skill,
   keep = {},
 }: {
-  classes: { classId: string; label: string }[];
-  classId: string;
+  cars: CarChoiceOption[];
+  /** The chosen car: a class id or "profile:<id>". */
+  car: string;
   skill: SkillLevel;
-  /** Other query parameters to keep (sort order), by name. */
+  /** Other query parameters to keep (sort order, version), by name. */
   keep?: Record<string, string>;
 }) {
+  const classes = cars.filter((c) => !c.own);
+  const own = cars.filter((c) => c.own);
   return (
     <Form method="get" className="flex flex-wrap items-end gap-3" preventScrollReset>
       {Object.entries(keep).map(([name, value]) => (
@@ -24,20 +31,31 @@ export function AnalysisPickers({
       ))}
       <div className="space-y-1">
         <label htmlFor="pick-class" className="block text-sm font-medium text-ink-700">
-          Car class
+          Car
         </label>
         <select
           id="pick-class"
-          name="class"
-          defaultValue={classId}
-          className="rounded-md border border-ink-300 bg-white px-3 py-2 text-sm"
+          name="car"
+          defaultValue={car}
+          className="max-w-[16rem] rounded-md border border-ink-300 bg-white px-3 py-2 text-sm"
           onChange={(e) => e.currentTarget.form?.requestSubmit()}
         >
-          {classes.map((c) => (
-            <option key={c.classId} value={c.classId}>
-              {c.label}
-            </option>
-          ))}
+          <optgroup label="Car classes (estimates)">
+            {classes.map((c) => (
+              <option key={c.value} value={c.value}>
+                {c.label}
+              </option>
+            ))}
+          </optgroup>
+          {own.length ? (
+            <optgroup label="Your cars">
+              {own.map((c) => (
+                <option key={c.value} value={c.value}>
+                  {c.label}
+                </option>
+              ))}
+            </optgroup>
+          ) : null}
         </select>
       </div>
       <div className="space-y-1">

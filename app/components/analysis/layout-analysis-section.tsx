@@ -3,7 +3,7 @@ import { skillPhrase, type ClassAnalysis, type SkillLevel } from "~/analysis";
 import { Cautions } from "~/components/cautions";
 import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
-import { AnalysisPickers } from "./analysis-pickers";
+import { AnalysisPickers, type CarChoiceOption } from "./analysis-pickers";
 import { AnalysisSummary } from "./analysis-summary";
 import { jumpName } from "./format";
 import { sortJumps, type JumpSort, type JumpSortKey } from "./jump-sort";
@@ -20,6 +20,11 @@ export type LayoutAnalysisData = {
   classId: string;
   skill: SkillLevel;
   classes: { classId: string; label: string }[];
+  /** The chosen car (a class id or "profile:<id>") and the picker's choices. */
+  car: string;
+  cars: CarChoiceOption[];
+  /** The query parameter naming the version read ({} for the reader's default). */
+  version: Record<string, string>;
   problems: string[];
   sort: JumpSort;
   result:
@@ -34,18 +39,23 @@ export type LayoutAnalysisData = {
 export function LayoutAnalysisSection({
   data: d,
   layoutName,
+  shared,
 }: {
   data: LayoutAnalysisData;
   layoutName: string;
+  /** A share link's page: jump pages under its own address, and no member tools. */
+  shared?: { base: string };
 }) {
   const query = (extra: Record<string, string>) => {
-    const p = new URLSearchParams({ class: d.classId, skill: d.skill, ...extra });
+    const p = new URLSearchParams({ car: d.car, skill: d.skill, ...d.version, ...extra });
     return `?${p.toString()}`;
   };
-  const keep: Record<string, string> =
-    d.sort.key === "order" && d.sort.dir === "asc" ? {} : { sort: d.sort.key, dir: d.sort.dir };
+  const keep: Record<string, string> = {
+    ...d.version,
+    ...(d.sort.key === "order" && d.sort.dir === "asc" ? {} : { sort: d.sort.key, dir: d.sort.dir }),
+  };
   const jumpHref = (sectionId: string) =>
-    `/layouts/${d.layoutId}/jumps/${encodeURIComponent(sectionId)}${query({})}`;
+    `${shared?.base ?? `/layouts/${d.layoutId}`}/jumps/${encodeURIComponent(sectionId)}${query({})}`;
   const sortHref = (key: JumpSortKey, dir: "asc" | "desc") => `${query({ sort: key, dir })}#jumps-heading`;
   return (
     <section aria-labelledby="analysis-heading" className="space-y-8">
@@ -55,34 +65,38 @@ export function LayoutAnalysisSection({
             Analysis
           </h2>
           <p className="text-sm text-ink-500">
-            For the {d.classes.find((c) => c.classId === d.classId)?.label ?? d.classId}, verdicts for{" "}
+            {d.cars.find((c) => c.value === d.car)?.own ? "For your car " : "For the "}
+            {d.classes.find((c) => c.classId === d.classId)?.label ?? d.classId}, verdicts for{" "}
             {skillPhrase(d.skill)}. Model estimates.
           </p>
         </div>
-        <AnalysisPickers
-          key={`${d.classId}-${d.skill}`}
-          classes={d.classes}
-          classId={d.classId}
-          skill={d.skill}
-          keep={keep}
-        />
+        <AnalysisPickers key={`${d.car}-${d.skill}`} cars={d.cars} car={d.car} skill={d.skill} keep={keep} />
       </div>
-      <nav aria-label="Layout tools" className="flex flex-wrap gap-x-5 gap-y-2 text-sm">
-        <Link to={`/layouts/${d.layoutId}/plan`} className="text-pine-700 hover:underline">
-          Open the plan
-        </Link>
-        {d.isDirector ? (
-          <Link to={`/layouts/${d.layoutId}/edit`} className="text-pine-700 hover:underline">
-            Edit the drawing
+      {shared ? null : (
+        <nav aria-label="Layout tools" className="flex flex-wrap gap-x-5 gap-y-2 text-sm">
+          <Link to={`/layouts/${d.layoutId}/plan${query({})}`} className="text-pine-700 hover:underline">
+            Open the plan
           </Link>
-        ) : null}
-        <a href={`/layouts/${d.layoutId}/export`} download className="text-pine-700 hover:underline">
-          Export the layout file (.json)
-        </a>
-        <a href={`/api/layouts/${d.layoutId}/analysis${query({})}`} className="text-pine-700 hover:underline">
-          This analysis as JSON
-        </a>
-      </nav>
+          {d.isDirector ? (
+            <Link to={`/layouts/${d.layoutId}/edit`} className="text-pine-700 hover:underline">
+              Edit the drawing
+            </Link>
+          ) : null}
+          <a
+            href={`/layouts/${d.layoutId}/export${d.version.version ? `?version=${d.version.version}` : ""}`}
+            download
+            className="text-pine-700 hover:underline"
+          >
+            Export the layout file (.json)
+          </a>
+          <a
+            href={`/api/layouts/${d.layoutId}/analysis${query({})}`}
+            className="text-pine-700 hover:underline"
+          >
+            This analysis as JSON
+          </a>
+        </nav>
+      )}
       {d.problems.length ? (
         <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
           {d.problems.join(" ")}

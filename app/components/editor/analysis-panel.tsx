@@ -10,6 +10,8 @@ interface Props {
   stale: boolean;
   sections: LayoutSection[];
   classIds: string[];
+  /** Cars to offer instead of `classIds` (the plan offers the reader's own car profiles too). */
+  carOptions?: { value: string; label: string }[];
   classId: string | undefined;
   skill: Skill;
   selected: number | null;
@@ -22,19 +24,21 @@ interface Props {
 export function AnalysisPanel(p: Props) {
   const index = new Map(p.sections.map((s, i) => [s.id, i] as const));
   const o = p.overlay;
+  const cars = p.carOptions ?? p.classIds.map((c) => ({ value: c, label: CAR_PRESETS[c]?.label ?? c }));
+  const carLabel = o ? (CAR_PRESETS[o.classId]?.label ?? cars.find((c) => c.value === p.classId)?.label) : "";
   return (
     <div className="space-y-3 text-sm">
       <div className="grid grid-cols-2 gap-2">
         <label className="space-y-1 text-xs font-medium text-ink-700">
-          Car class
+          {p.carOptions ? "Car" : "Car class"}
           <select
             className="block w-full rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
             value={p.classId}
             onChange={(e) => p.onClass(e.target.value)}
           >
-            {p.classIds.map((c) => (
-              <option key={c} value={c}>
-                {CAR_PRESETS[c]?.label ?? c}
+            {cars.map((c) => (
+              <option key={c.value} value={c.value}>
+                {c.label}
               </option>
             ))}
           </select>
@@ -76,8 +80,7 @@ export function AnalysisPanel(p: Props) {
       {o ? (
         <div className={p.stale ? "opacity-70" : ""}>
           <p className="tabular-nums">
-            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for the{" "}
-            {CAR_PRESETS[o.classId]?.label ?? o.classId}
+            Lap {o.lapLength.toFixed(1)} m · about {o.lapTime.toFixed(1)} s for the {carLabel ?? o.classId}
           </p>
           <h3 className="mt-2 font-semibold">Jumps ({o.jumps.length})</h3>
           {o.jumps.length ? (

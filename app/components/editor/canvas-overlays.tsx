@@ -33,7 +33,10 @@ export function SpeedLegend({ overlay, stale }: { overlay: AnalysisOverlay; stal
       className={`pointer-events-none absolute right-2 bottom-2 rounded bg-white/90 px-2 py-1.5 text-xs text-ink-700 shadow-sm ${stale ? "opacity-60" : ""}`}
     >
       <figcaption className="font-semibold">
-        Speed ({CAR_PRESETS[overlay.classId]?.label ?? overlay.classId})
+        Speed (
+        {CAR_PRESETS[overlay.classId]?.label ??
+          (overlay.classId.startsWith("own-") ? "your car" : overlay.classId)}
+        )
       </figcaption>
       <svg width="150" height="14" aria-hidden="true" className="mt-1 block">
         {Array.from({ length: SPEED_BINS }, (_, b) => {

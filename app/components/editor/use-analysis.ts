@@ -24,6 +24,7 @@ export const ANALYSIS_DELAY_MS = 400;
 const UNAVAILABLE_RETRY_MS = 30_000;
 
 /**
+ * @param classId a car class id, or "profile:<id>" of the reader's own car profile (sent as `car`).
  * @param layoutId the saved layout the draft belongs to: the club's own track guidance then applies.
  */
 export function useAnalysis(
@@ -46,7 +47,12 @@ export function useAnalysis(
         const response = await fetch(endpoint, {
           method: "POST",
           headers: { "Content-Type": "application/json", Accept: "application/json" },
-          body: JSON.stringify({ document: doc, classId, skill, layoutId }),
+          body: JSON.stringify({
+            document: doc,
+            ...(classId?.startsWith("profile:") ? { car: classId } : { classId }),
+            skill,
+            layoutId,
+          }),
           credentials: "same-origin",
           signal: controller.signal,
         });

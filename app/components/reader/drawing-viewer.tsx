@@ -24,15 +24,17 @@ export interface DrawingViewerProps {
   layout: { id: string; name: string; status: string };
   document: LayoutDocument;
   canEdit: boolean;
+  /** The reader's car (a class id or "profile:<id>") and skill to open with, and the cars offered. */
+  choice?: { car: string; skill: Skill; cars: { value: string; label: string; own: boolean }[] };
 }
 
-export function DrawingViewer({ club, layout, document: doc, canEdit }: DrawingViewerProps) {
+export function DrawingViewer({ club, layout, document: doc, canEdit, choice }: DrawingViewerProps) {
   const sections = useMemo(() => resolveSections(doc), [doc]);
   const closure = useMemo(() => closureError(sections, startPose(doc)), [sections, doc]);
   const [selection, setSelection] = useState<Selection>(null);
   const [units, setUnits] = useState<LengthUnit>("m");
-  const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
-  const [skill, setSkill] = useState<Skill>("club");
+  const [classId, setClassId] = useState<string | undefined>(choice?.car ?? doc.carClasses[0]);
+  const [skill, setSkill] = useState<Skill>(choice?.skill ?? "club");
   const [fitRequest, setFitRequest] = useState(0);
   const analysis = useAnalysis(doc, classId, skill, layout.id);
   const selected = selection?.kind === "section" ? selection.index : null;
@@ -103,6 +105,7 @@ export function DrawingViewer({ club, layout, document: doc, canEdit }: DrawingV
               stale={false}
               sections={doc.sections}
               classIds={doc.carClasses}
+              carOptions={choice?.cars}
               classId={classId}
               skill={skill}
               selected={selected}

@@ -81,7 +81,7 @@ export const updateLayoutSchema = createLayoutSchema.extend({
   version: versionField,
 });
 export const statusChangeSchema = z.object({
-  intent: z.enum(["publish", "unpublish", "archive", "unarchive"]),
+  intent: z.enum(["archive", "unarchive"]),
   version: versionField,
 });
 export const deleteLayoutSchema = z.object({
@@ -96,7 +96,7 @@ export const layoutActionSchema = z.discriminatedUnion(
   [updateLayoutSchema, statusChangeSchema, deleteLayoutSchema],
   {
     error:
-      "This form does not say what to do (intent): update, publish, unpublish, archive, unarchive or delete.",
+      "This form does not say what to do (intent): update, archive, unarchive or delete. Publishing has its own page.",
   },
 );
 export type LayoutAction = z.infer<typeof layoutActionSchema>;

@@ -1,6 +1,7 @@
 import { getDb } from "~/db/client.server";
 import { type LayoutStatus, type Role } from "~/lib/roles";
-import { clubs, layouts, memberships } from "~/db/schema";
+import { clubs, layouts, layoutVersions, memberships, publishedVersions } from "~/db/schema";
+import { starterDocument } from "~/analysis";
 import { createUser } from "~/auth/users.server";
 import { sessionCookie } from "./requests";
 
@@ -31,12 +32,27 @@ export async function addMember(clubId: string, userId: string, role: Role) {
   await db.insert(memberships).values({ clubId, userId, role });
 }
 
+/**
+ * A layout row. A "published" one also gets what publishing makes: a stored version 1 (the
+ * starter loop) published for a race day, so marshals and drivers have a version to read.
+ */
 export async function makeLayout(clubId: string, fields: { name?: string; status?: LayoutStatus } = {}) {
   const db = await getDb();
+  const name = fields.name ?? "Test layout";
   const [layout] = await db
     .insert(layouts)
-    .values({ clubId, name: fields.name ?? "Test layout", status: fields.status ?? "draft" })
+    .values({ clubId, name, status: fields.status ?? "draft" })
     .returning();
+  if (layout.status === "published") {
+    await db.insert(layoutVersions).values({
+      layoutId: layout.id,
+      number: 1,
+      document: JSON.stringify(starterDocument(name, layout.trackWidth)),
+    });
+    await db
+      .insert(publishedVersions)
+      .values({ layoutId: layout.id, versionNumber: 1, raceDate: "2030-06-01" });
+  }
   return layout;
 }
 

@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
-import { analyseLayout } from "~/analysis";
+import { analyseLayout, carFromProfile, carProfileFile, CAR_PRESETS, profileFromCar } from "~/analysis";
 import { BIG_DOUBLE, ovalWithJump } from "../analysis/analysis-fixtures";
 
 const dir = mkdtempSync(join(tmpdir(), "loftline-analyse-"));
@@ -157,4 +157,34 @@ describe("loftline analyse", () => {
       expect(r.stderr).toMatch(fields[k]);
     });
   });
+
+  it(
+    "analyses an own car from a profile file with --car, and names the field of a bad one",
+    SLOW,
+    async () => {
+      const profile = {
+        ...profileFromCar(CAR_PRESETS["buggy-2wd-10"]),
+        label: "Measured buggy",
+        massKg: 1.9,
+      };
+      const good = file("car.json", carProfileFile(profile));
+      const bad = file("bad-car.json", carProfileFile({ ...profile, servoSecondsPer60: 5 }));
+      const [r, refused] = await Promise.all([analyse(summer, "--car", good), analyse(summer, "--car", bad)]);
+      expect(r.stderr).toBe("");
+      const out = JSON.parse(r.stdout);
+      expect(out.classes.map((c: { classId: string; label: string }) => [c.classId, c.label])).toEqual([
+        ["own-1", "Measured buggy"],
+      ]);
+      const expected = analyseLayout(SUMMER_LAYOUT, {
+        classIds: ["own-1"],
+        cars: { "own-1": carFromProfile(profile, "own-1") },
+      });
+      expect(out.classes[0].lapTime).toBeCloseTo(expected.classes[0].lapTime, 9);
+      expect(refused.code).toBe(2);
+      expect(refused.stdout).toBe("");
+      expect(refused.stderr).toMatch(
+        /--car .*bad-car\.json: servoSecondsPer60: Servo speed \(time per 60°\) must be at most 1 s/,
+      );
+    },
+  );
 });

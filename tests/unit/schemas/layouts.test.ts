@@ -90,7 +90,7 @@ describe("layoutActionSchema", () => {
       ok: true,
       data: { intent: "archive", version: 7 },
     });
-    const bad = parseForm(layoutActionSchema, form({ intent: "publish", version: "7.5" }));
+    const bad = parseForm(layoutActionSchema, form({ intent: "unarchive", version: "7.5" }));
     expect(bad).toEqual({
       ok: false,
       errors: { version: ["The form's layout version is not valid; reload the page."] },
