@@ -2,3 +2,4 @@
 export * from "./model-times";
 export * from "./laps";
 export * from "./fit";
+export * from "./pace";
