@@ -7,7 +7,7 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { calibrationTrack, carPreset, modelTimes } from "~/analysis";
 import { createProfile, presetProfile } from "~/cars/profiles.server";
-import { SUMMER_LAYOUT } from "~/db/demo-layouts";
+import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
 import { carProfiles } from "~/db/schema";
 import { createLayoutFromDocument } from "~/layouts/documents.server";
 import { publishDraft } from "~/layouts/publishing.server";
@@ -37,10 +37,17 @@ function lapFile(n: number, sectors = false): string {
   return [head, ...rows].join("\n") + "\n";
 }
 
-function upload(layoutId: string, cookie: string, fields: Record<string, string>, file: string | Uint8Array) {
+function upload(
+  layoutId: string,
+  cookie: string,
+  fields: Record<string, string>,
+  file: string | Uint8Array,
+  file2?: string,
+) {
   const body = new FormData();
   for (const [k, v] of Object.entries(fields)) body.set(k, v);
   body.set("file", new File([file as BlobPart], "laps.csv", { type: "text/csv" }));
+  if (file2 !== undefined) body.set("file2", new File([file2], "laps-2.csv", { type: "text/csv" }));
   const request = new Request(`http://localhost/layouts/${layoutId}/calibrate`, {
     method: "POST",
     headers: { Cookie: cookie },
@@ -61,7 +68,7 @@ async function setUp() {
     ...presetProfile("buggy-2wd-10")!,
     label: "Mo's buggy",
   });
-  return { layout, driver, marshal, outsider, own: own.id, theirs: theirs.id };
+  return { club, director, layout, driver, marshal, outsider, own: own.id, theirs: theirs.id };
 }
 
 const profileRow = async (id: string) =>
@@ -233,5 +240,40 @@ describe("calibration from measured laps", () => {
     const r = await upload(s.layout.id, s.driver.cookie, { version: "2", car: "sct-10" }, lapFile(5));
     expect(r.status).toBe(400);
     expect((r.data as { refusal: { field: string } }).refusal.field).toBe("version");
+  });
+
+  it("takes a second file for another published layout, and says when the two cannot tell top speed from grip", async () => {
+    const s = await setUp();
+    const wet = await createLayoutFromDocument(s.club.id, WET_WEATHER_LAYOUT, s.director.id);
+    await publishDraft(wet.id, 1, { raceDate: "2030-06-08", note: "" }, s.director.id);
+    const wetTrack = calibrationTrack(WET_WEATHER_LAYOUT);
+    const wetLap = modelTimes(wetTrack, truth).lapTime;
+    const wetFile = [
+      "lap,time",
+      ...[1, 2, 3, 4].map((i) => `${i},${(wetLap * (1 + 0.002 * i)).toFixed(3)}`),
+    ].join("\n");
+    const r = await upload(
+      s.layout.id,
+      s.driver.cookie,
+      { version: "1", car: "buggy-2wd-10", other: `${wet.id}:1` },
+      lapFile(6),
+      wetFile,
+    );
+    expect(r.status).toBe(200);
+    const result = (r.data as { result: CalibrationResult }).result;
+    expect(result.runs.map((x) => x.layoutName)).toEqual(["Summer layout", "Wet-weather layout"]);
+    expect(result.mode).toBe("pace");
+    expect(result.notSeparated).toMatch(/two layouts .* cannot be told apart/);
+    const missing = await upload(
+      s.layout.id,
+      s.driver.cookie,
+      { version: "1", car: "buggy-2wd-10" },
+      lapFile(6),
+      wetFile,
+    );
+    expect([missing.status, (missing.data as { refusal: { field: string } }).refusal.field]).toEqual([
+      400,
+      "other",
+    ]);
   });
 });
