@@ -202,7 +202,7 @@ const measuredLap = modelTimes(summerTrack, measuredCar).lapTime;
 const measuredSectors = modelTimes(summerTrack, measuredCar, 3).sectorTimes;
 const paceMs = time(() => fitPace(summerTrack, car, measuredLap), 9, 1, 2);
 const gripMs = time(() => fitSpeedGrip([{ track: summerTrack, measured: measuredSectors }], car), 9, 1, 2);
-const under250 = (ms: number) => `target < 250 ms: ${ms < 250 ? "met" : "NOT MET"}`;
+const under250 = (ms: number) => `target < 250 ms: ${ms < 250 ? "met" : "MISSED"}`;
 report("calibration: pace factor (summer layout)", `${paceMs.toFixed(1)} ms`, under250(paceMs));
 report("calibration: top speed and grip from 3 sectors", `${gripMs.toFixed(1)} ms`, under250(gripMs));
 
