@@ -64,8 +64,9 @@ export function fitPace(track: CalibrationTrack, car: LapCar, measuredMean: numb
   const paceFactor = Math.min(PACE_BOUNDS.max, Math.max(PACE_BOUNDS.min, raw));
   // The lap time falls as q grows: bisection for T(q) = measured mean within the bounds.
   const range = scaleRange(car);
-  let lo = range.min;
-  let hi = range.max;
+  // A car already at a bound on both sides (no room to scale) keeps its values.
+  let lo = range.min <= range.max ? range.min : 1;
+  let hi = range.min <= range.max ? range.max : 1;
   const lapAt = (q: number) => modelTimes(track, scaleCar(car, q)).lapTime;
   for (let k = 0; k < 40 && hi - lo > 1e-6; k++) {
     const mid = 0.5 * (lo + hi);

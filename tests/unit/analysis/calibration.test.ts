@@ -153,3 +153,13 @@ describe("top speed and grip", () => {
     expect(fit.atBound.topSpeed || fit.atBound.mu).toBe(true);
   });
 });
+
+describe("pace factor at the edges of the profile's bounds", () => {
+  it("keeps the scaled values inside the profile form's bounds", () => {
+    const fast = { ...car, topSpeed: 39, mu: 2.9 };
+    const fit = fitPace(summer, fast, modelTimes(summer, fast).lapTime * 0.7);
+    expect(fit.fitted.topSpeed).toBeLessThanOrEqual(40);
+    expect(fit.fitted.mu).toBeLessThanOrEqual(3 + 1e-9);
+    expect(fit.scale).toBeGreaterThanOrEqual(1);
+  });
+});
