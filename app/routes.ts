@@ -46,6 +46,7 @@ export default [
     route("layouts/:layoutId/build", "routes/build-pack.tsx"),
     route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),
     route("layouts/:layoutId/compare", "routes/layout-compare.tsx"),
+    route("layouts/:layoutId/calibrate", "routes/layout-calibrate.tsx"),
     route("profiles", "routes/profiles.tsx"),
     route("profiles/new", "routes/profile-new.tsx"),
     route("profiles/:profileId", "routes/profile-edit.tsx"),

@@ -7,7 +7,9 @@
  * - a complete joint plan as the layout analysis asks for it: the brake pulse searched with the
  *   steering, world-frame angles from the face angle, what a turn is worth, the driver's steering,
  *   pulse and takeoff-speed errors, and what turning alone would give (target: under 15 ms),
- * - for information: one jump flight and one speed window.
+ * - for information: one jump flight and one speed window,
+ * - calibration on the summer layout: the pace factor and the top speed and grip fit from three
+ *   sector times (target: under 250 ms each, as they run on the request thread; decision 0122).
  */
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
@@ -16,6 +18,8 @@ import { simulateAttitude, type AttitudeInput } from "~/analysis";
 import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis";
 import { flyJump } from "~/analysis";
 import { speedWindow } from "~/analysis";
+import { calibrationTrack, fitPace, fitSpeedGrip, modelTimes } from "~/analysis";
+import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -190,5 +194,16 @@ report(
   "speed window with drag",
   `${time(() => speedWindow({ ...jump, drag: { massKg: 1.6, cdA: 0.03 } }), 15, 3).toFixed(3)} ms`,
 );
+
+// 5. Calibration from measured laps, as the calibration page runs it.
+const summerTrack = calibrationTrack(SUMMER_LAYOUT);
+const measuredCar = { ...car, topSpeed: 13.5, mu: 1.25 };
+const measuredLap = modelTimes(summerTrack, measuredCar).lapTime;
+const measuredSectors = modelTimes(summerTrack, measuredCar, 3).sectorTimes;
+const paceMs = time(() => fitPace(summerTrack, car, measuredLap), 9, 1, 2);
+const gripMs = time(() => fitSpeedGrip([{ track: summerTrack, measured: measuredSectors }], car), 9, 1, 2);
+const under250 = (ms: number) => `target < 250 ms: ${ms < 250 ? "met" : "MISSED"}`;
+report("calibration: pace factor (summer layout)", `${paceMs.toFixed(1)} ms`, under250(paceMs));
+report("calibration: top speed and grip from 3 sectors", `${gripMs.toFixed(1)} ms`, under250(gripMs));
 
 console.log(`Loftline engine benchmark (Node ${process.version}, medians)\n${lines.join("\n")}`);

@@ -31,6 +31,8 @@ export const BODY_RULES: Readonly<Record<string, BodyRule>> = {
   "routes/layout-import": { maxBytes: MB + 128 * KB, accepts: ["urlencoded", "multipart"] },
   // Site photo upload: at most 10 MB (MAX_PHOTO_BYTES), parsed by the route as it arrives.
   "routes/layout-photo": { maxBytes: 10 * MB + 128 * KB, accepts: ["multipart"], streamMultipart: true },
+  // Calibration: two lap files of at most 256 KB each and the fields (MAX_CALIBRATION_BODY_BYTES).
+  "routes/layout-calibrate": { maxBytes: 576 * KB + 64 * KB, accepts: ["urlencoded", "multipart"] },
   // The analysis API: a layout document as JSON, at most 1 MB (api-analysis.ts).
   "routes/api-analysis": { maxBytes: MB + 64 * KB, accepts: ["json"] },
 };

@@ -114,3 +114,18 @@ export * from "./build";
  *   `keepOutArea(zones)` merges the zones into one area (polygons of rings, m) for drawing.
  */
 export * from "./marshal";
+
+/*
+ * Calibration from measured laps (calibration/; docs/decisions/0120-0122)
+ * - `calibrationTrack(doc)` samples a layout once; `modelTimes(track, car, sectors = 1)` ->
+ *   `{ lapTime, sectorTimes }` s, sectors being equal parts of the lap by distance from the start.
+ * - `dropSlowLaps(laps, ratio = SLOW_LAP_RATIO)` -> `{ kept, dropped, limit }`: laps slower than
+ *   1.3 × the median (crashes, stops) are left out; `median(values)`.
+ * - `fitPace(track, car, measuredMean s)` -> `{ paceFactor, atBound, modelled s, fittedLap s, scale,
+ *   fitted }`: lap times on one layout give one factor (bounded 0.5 to 1.5); `fitted` scales the
+ *   car's speeds evenly (`scaleCar`) so the model matches the measured mean.
+ * - `fitSpeedGrip([{ track, measured: [s...] }], car)` -> `{ separable, cos, topSpeed m/s, mu,
+ *   atBound, rms, fitted, before, after }`: top speed and grip by bounded least squares on sector
+ *   times or on laps of two layouts; `separable` false when the data cannot tell them apart.
+ */
+export * from "./calibration";

@@ -75,6 +75,13 @@ export default function ProfileEdit({ loaderData: d, actionData }: Route.Compone
           </a>{" "}
           (for <code>loftline analyse FILE --car CAR_FILE</code>).
         </p>
+        <p className="mt-1 max-w-prose text-sm text-ink-700">
+          Timed laps of this car? Open a published layout from{" "}
+          <Link to="/clubs" className="text-pine-700 hover:underline">
+            your clubs
+          </Link>{" "}
+          and choose “Calibrate a car from your laps” to fit its top speed and grip to them.
+        </p>
       </header>
       <ProfileForm
         values={actionData?.values ?? d.values}

@@ -99,6 +99,11 @@ export function VersionBanner({
             Compare versions
           </Link>
         ) : null}
+        {r.current ? (
+          <Link to={`/layouts/${layoutId}/calibrate`} className={linkClass}>
+            Calibrate a car from your laps
+          </Link>
+        ) : null}
         {isDirector ? (
           <Link to={`/layouts/${layoutId}/publishing`} className={linkClass}>
             Publishing and sharing
