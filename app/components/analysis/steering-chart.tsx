@@ -63,13 +63,11 @@ function ChartSvg({
   const pulse = plan.pitchPulse;
   const laneY = plotBottom + 36;
   // A window's label only where it does not run into the previous one (the steps list says all).
-  let lastLabel = -Infinity;
-  const labelled = plan.switches.map((s) => {
+  const labelled = plan.switches.reduce<(number | null)[]>((out, s) => {
     const x = Math.min(W - M.right - 40, Math.max(M.left + 40, X(s.t)));
-    if (x - lastLabel < 84) return null;
-    lastLabel = x;
-    return x;
-  });
+    const last = out.reduce<number>((m, v) => (v === null ? m : v), -Infinity);
+    return [...out, x - last < 84 ? null : x];
+  }, []);
   return (
     <svg
       viewBox={`0 0 ${W} ${H}`}
