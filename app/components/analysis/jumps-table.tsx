@@ -65,7 +65,7 @@ export function JumpsTable({ jumps, numbers, skill, sort, sortHref, jumpHref }: 
                   {c.key && sortHref ? (
                     <Link to={sortHref(c.key, next)} preventScrollReset className="hover:underline">
                       {c.label}
-                      <span aria-hidden="true" className="ml-1 text-ink-500">
+                      <span aria-hidden="true" className="ml-1 text-ink-500 print:hidden">
                         {active ? (sort.dir === "asc" ? "\u25b2" : "\u25bc") : "\u21c5"}
                       </span>
                     </Link>

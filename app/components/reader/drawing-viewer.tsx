@@ -10,6 +10,7 @@ import { skillPhrase } from "~/analysis";
 import { AnalysisPickers } from "~/components/analysis/analysis-pickers";
 import { jumpName } from "~/components/analysis/format";
 import { JumpCards } from "~/components/analysis/jump-card";
+import { JumpsTable } from "~/components/analysis/jumps-table";
 import { jumpNumbers, type LayoutAnalysisData } from "~/components/analysis/layout-analysis-section";
 import { Cautions } from "~/components/cautions";
 import { DrawingTitle } from "~/components/drawing/drawing-title";
@@ -108,9 +109,20 @@ function Plan({
             Jumps in lap order ({jumps.length})
           </h2>
           {jumps.length ? (
-            <div className="lg:[&_ol]:grid-cols-1">
-              <JumpCards jumps={jumps} numbers={numbers} skill={d.skill} jumpHref={jumpHref} />
-            </div>
+            <>
+              <div className="lg:[&_ol]:grid-cols-1 print:hidden">
+                <JumpCards jumps={jumps} numbers={numbers} skill={d.skill} jumpHref={jumpHref} />
+              </div>
+              <div className="hidden print:block">
+                <JumpsTable
+                  jumps={jumps}
+                  numbers={numbers}
+                  skill={d.skill}
+                  sort={d.sort}
+                  jumpHref={jumpHref}
+                />
+              </div>
+            </>
           ) : (
             <p className="text-sm text-ink-700">This layout has no jumps.</p>
           )}

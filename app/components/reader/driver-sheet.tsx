@@ -57,6 +57,7 @@ export function DriverSheet({ club, layout, reading, analysis: d }: DriverSheetP
         />
         <p className="text-sm text-ink-500">Print this page from your browser (A4 portrait, one page).</p>
       </div>
+      <Cautions compact />
       {d.problems.length ? (
         <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
           {d.problems.join(" ")}
@@ -69,7 +70,6 @@ export function DriverSheet({ club, layout, reading, analysis: d }: DriverSheetP
           {d.result.message}
         </p>
       )}
-      <Cautions compact />
     </article>
   );
 }
