@@ -31,9 +31,10 @@ export function JumpElevation({ e, name }: { e: ElevationData; name: string }) {
       <ElevationSvg e={e} name={name} W={WIDE} id="elevation" className="hidden sm:block print:block" />
       <ElevationSvg e={e} name={name} W={PHONE} id="elevation-phone" className="sm:hidden print:hidden" />
       <figcaption className="mt-2 text-xs text-ink-500">
-        To scale, heights not stretched. Dashed: the flight path at the planned takeoff speed (the model's
-        point mass, with air drag), drawn through the computed lip, apex and touchdown. Upright tick on the
-        ramp: the planned touchdown, a third of the way down.
+        To scale, heights not stretched. Thick line: the landing ramp; hatched: the overshoot zone (the
+        hardest landing). Dashed: the flight path at the planned takeoff speed (the model's point mass, with
+        air drag), drawn through the computed lip, apex and touchdown. Upright tick on the ramp: the planned
+        touchdown, a third of the way down.
       </figcaption>
     </figure>
   );
@@ -52,6 +53,8 @@ function ElevationSvg({
   id: string;
   className: string;
 }) {
+  // A phone's drawing leaves out the two labels the caption names, and keeps the rest inside.
+  const narrow = W < 500;
   const end = Math.max(e.d[e.d.length - 1], e.landing?.d ?? 0) + 1.5;
   const x0 = -0.5;
   const zMin = Math.min(0, ...e.h) - 0.1;
@@ -71,6 +74,9 @@ function ElevationSvg({
     .map(([d, z]) => `${X(d).toFixed(1)},${Z(z).toFixed(1)}`)
     .join(" ");
   const sweetZ = interp(e.d, e.h, e.sweetSpot);
+  const touchdown = e.landing ? `touchdown ${e.landing.speed.toFixed(1)} m/s` : "";
+  // Inter's characters are about 0.6 of the text size wide.
+  const fitsRight = e.landing ? X(e.landing.d) + 8 + touchdown.length * 12 * 0.6 < W - 4 : true;
   const label = {
     fontSize: 12,
     fill: PLAN.text,
@@ -110,9 +116,11 @@ function ElevationSvg({
           <line x1="0" y1="0" x2="0" y2="8" stroke={PLAN.conflict} strokeOpacity="0.25" strokeWidth="3" />
         </pattern>
       </defs>
-      <text x={X(end) - 6} y={M.top + 14} textAnchor="end" {...label} fill={PLAN.conflict}>
-        overshoot zone: hardest landing
-      </text>
+      {narrow ? null : (
+        <text x={X(end) - 6} y={M.top + 14} textAnchor="end" {...label} fill={PLAN.conflict}>
+          overshoot zone: hardest landing
+        </text>
+      )}
       {ticks(x0, end).map((t) => (
         <g key={`x${t}`}>
           <line x1={X(t)} x2={X(t)} y1={M.top} y2={Z(zMin)} stroke={PLAN.gridMinor} />
@@ -144,15 +152,17 @@ function ElevationSvg({
       </text>
       <path d={groundArea} fill={PLAN.band} stroke={PLAN.bandEdge} strokeWidth={1.5} />
       <polyline points={ramp} fill="none" stroke={PLAN.landing} strokeWidth={6} strokeLinecap="round" />
-      <text
-        x={(X(e.d[e.landingStartIndex]) + X(rampEnd)) / 2}
-        y={Z(0) - 4}
-        textAnchor="middle"
-        {...label}
-        fontSize={11}
-      >
-        landing ramp
-      </text>
+      {narrow ? null : (
+        <text
+          x={(X(e.d[e.landingStartIndex]) + X(rampEnd)) / 2}
+          y={Z(0) - 4}
+          textAnchor="middle"
+          {...label}
+          fontSize={11}
+        >
+          landing ramp
+        </text>
+      )}
       <line
         x1={X(e.sweetSpot)}
         x2={X(e.sweetSpot)}
@@ -183,8 +193,13 @@ function ElevationSvg({
             stroke={PLAN.selected}
             strokeWidth={2.5}
           />
-          <text x={X(e.landing.d) + 8} y={Z(e.landing.z) - 8} {...label}>
-            touchdown {e.landing.speed.toFixed(1)} m/s
+          <text
+            x={X(e.landing.d) + (fitsRight ? 8 : -8)}
+            y={Z(e.landing.z) - 8}
+            textAnchor={fitsRight ? "start" : "end"}
+            {...label}
+          >
+            {touchdown}
           </text>
         </g>
       ) : null}

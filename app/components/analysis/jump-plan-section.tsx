@@ -127,7 +127,7 @@ export function JumpPlanSection({
           </div>
           {steering ? <SteeringChart plan={plan} series={steering} /> : null}
           <div className="overflow-x-auto">
-            <table className="min-w-[24rem] text-sm">
+            <table className="w-full text-sm">
               <caption className="text-left text-sm font-medium text-ink-700">
                 Steering and pulse steps (what to command)
               </caption>

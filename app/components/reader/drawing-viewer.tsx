@@ -32,7 +32,7 @@ export function DrawingViewer({ club, layout, isDirector, reading, analysis: d }
   const carLabel = d.classes.find((c) => c.classId === d.classId)?.label ?? d.classId;
   const links = [{ to: `/layouts/${layout.id}/driver-sheet${query}`, label: "Driver's sheet" }];
   return (
-    <article className="space-y-4">
+    <article className="reader-plan space-y-4">
       <header className="flex flex-wrap items-end justify-between gap-x-4 gap-y-3">
         <div className="min-w-0">
           <DrawingTitle club={club} layoutId={layout.id} heading={`Plan of ${layout.name}`} links={links} />
