@@ -334,7 +334,7 @@ describe("layout editor", () => {
     expect(await page.getByTestId("save-status").textContent()).toBe("Unsaved changes");
   });
 
-  it("shows marshals the read-only plan: no handles, no editing panels, numbered marshal points", async () => {
+  it("shows marshals the read-only plan: no editing tools, numbered marshal points, fits a phone", async () => {
     const doc = {
       ...starterDocument("Race day", 3),
       marshalPoints: [
