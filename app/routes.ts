@@ -42,6 +42,7 @@ export default [
     route("layouts/:layoutId/jumps/:sectionId", "routes/jump-page.tsx"),
     route("layouts/:layoutId/edit", "routes/layout-editor.tsx"),
     route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
+    route("layouts/:layoutId/driver-sheet", "routes/driver-sheet.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
     route("layouts/:layoutId/build", "routes/build-pack.tsx"),
     route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),

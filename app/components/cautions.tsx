@@ -15,8 +15,15 @@ export const SAFETY_CAUTIONS = [
   "Your club's sanctioning body's current rulebook, local regulations and the site's own risk assessment decide.",
 ] as const;
 
+/** The one short line the compact block shows before it is opened. */
+export const CAUTIONS_LINE =
+  "Cars leave the track off jumps: marshals stand clear of landings; these numbers are estimates.";
+
 type Props = {
-  /** A shorter block (no heading text beyond the title) for tight spaces such as a jump panel. */
+  /**
+   * One short line that opens to the full list (a details element: it prints open), for reader
+   * pages where the cautions must not push the content down.
+   */
   compact?: boolean;
   /** Heading level of the title, to fit the page outline. */
   headingLevel?: 2 | 3;
@@ -27,23 +34,42 @@ type Props = {
 export function Cautions({ compact = false, headingLevel = 2, className = "" }: Props) {
   const Heading = headingLevel === 2 ? "h2" : "h3";
   const headingId = `cautions-title-${headingLevel}`;
+  const list = (
+    <ul className={`mt-2 list-disc space-y-1 pl-5 ${compact ? "" : "text-ink-700"}`}>
+      {SAFETY_CAUTIONS.map((line) => (
+        <li key={line}>{line}</li>
+      ))}
+    </ul>
+  );
+  if (compact)
+    return (
+      <aside
+        aria-labelledby={headingId}
+        className={`rounded-md border border-clay-500/40 bg-clay-100/60 px-3 py-1.5 text-sm text-ink-900 ${className}`}
+      >
+        <details>
+          <summary className="cursor-pointer list-none [&::-webkit-details-marker]:hidden">
+            <Heading id={headingId} className="inline font-semibold">
+              <WarningMark />
+              {CAUTIONS_TITLE}
+            </Heading>
+            <span className="text-ink-700">: {CAUTIONS_LINE} </span>
+            <span className="text-pine-700 underline print:hidden">Read all</span>
+          </summary>
+          {list}
+        </details>
+      </aside>
+    );
   return (
     <aside
       aria-labelledby={headingId}
-      className={`rounded-lg border border-clay-500/40 bg-clay-100/60 text-ink-900 ${compact ? "p-3 text-sm" : "p-5"} ${className}`}
+      className={`rounded-lg border border-clay-500/40 bg-clay-100/60 p-5 text-ink-900 ${className}`}
     >
-      <Heading
-        id={headingId}
-        className={`flex items-center gap-2 font-semibold ${compact ? "text-sm" : "text-lg"}`}
-      >
+      <Heading id={headingId} className="flex items-center gap-2 text-lg font-semibold">
         <WarningMark />
         {CAUTIONS_TITLE}
       </Heading>
-      <ul className={`mt-2 list-disc space-y-1 pl-5 ${compact ? "" : "text-ink-700"}`}>
-        {SAFETY_CAUTIONS.map((line) => (
-          <li key={line}>{line}</li>
-        ))}
-      </ul>
+      {list}
     </aside>
   );
 }
@@ -51,7 +77,7 @@ export function Cautions({ compact = false, headingLevel = 2, className = "" }: 
 /** A small triangle mark; the heading text carries the meaning, so it is hidden from readers. */
 function WarningMark() {
   return (
-    <svg viewBox="0 0 20 20" className="h-5 w-5 shrink-0" aria-hidden="true">
+    <svg viewBox="0 0 20 20" className="mr-1.5 inline-block h-4 w-4 shrink-0 align-[-3px]" aria-hidden="true">
       <path d="M10 2 L19 18 H1 Z" fill="var(--color-clay-500)" />
       <path d="M10 7.5 V12.5" stroke="white" strokeWidth="2" strokeLinecap="round" />
       <circle cx="10" cy="15.2" r="1.1" fill="white" />

@@ -35,6 +35,7 @@ const ROLES = [
       "Read the race-day version before practice and know which jumps lead into turns.",
       "For each jump, for a class of car or your own car's measured numbers: takeoff speed, time in the air and where you land.",
       "Whether to take it straight, or how to set the car up in the air for the turn, and how much timing slack you have.",
+      "On a phone: the jumps in lap order as cards, each opening its side view and the steering steps in plain words; on paper: a one-page driver's sheet.",
     ],
   },
   {

@@ -1,8 +1,7 @@
+import { data } from "react-router";
 import type { Route } from "./+types/layout-drawing";
-import { requireLayoutAccess } from "~/auth/permissions.server";
 import { DrawingViewer } from "~/components/reader/drawing-viewer";
-import { readerChoice } from "~/cars/reader-choice.server";
-import { readingFor } from "~/layouts/reading.server";
+import { readerPage } from "~/layouts/reader-page.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `Plan of ${data?.layout.name ?? "layout"} · Loftline` },
@@ -10,20 +9,12 @@ export const meta: Route.MetaFunction = ({ data }) => [
 
 /**
  * Any member who may see the layout, at the version they read (marshals and drivers: the race-day
- * version or `?version=n` of a published one; 404 otherwise), opening with their car and skill.
+ * version or `?version=n` of a published one; 404 otherwise), for their car and skill (`car`,
+ * `skill`, remembered); a parameter not understood is named on the page (400).
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId, "member");
-  const query = new URL(request.url).searchParams;
-  const reading = await readingFor(layout, role, query);
-  const choice = await readerChoice(user.id, query, reading.document.carClasses);
-  return {
-    club,
-    layout: { id: layout.id, name: layout.name, status: layout.status },
-    document: reading.document,
-    canEdit: role === "director",
-    choice: { car: choice.car, skill: choice.skill, cars: choice.options, problems: choice.problems },
-  };
+  const { status, ...page } = await readerPage(request, params.layoutId);
+  return data(page, { status });
 }
 
 export default function LayoutViewRoute({ loaderData }: Route.ComponentProps) {

@@ -86,11 +86,9 @@ describe("layout analysis in the browser", () => {
     const main = page.getByRole("main");
     expect(await main.getByRole("link", { name: "Edit the drawing" }).count()).toBe(0);
     expect(await main.getByRole("link", { name: "Open the plan" }).count()).toBe(1);
-    // One verdict per jump in the table (the plan's legend shows each mark with its word too).
-    const table = main
-      .getByRole("table")
-      .filter({ has: page.getByRole("columnheader", { name: /Airtime/ }) });
-    expect(await table.getByText(/^(Set up in the air|Take it straight|Cannot clear)$/).count()).toBe(9);
+    // One card per jump with its verdict (on a phone the cards stand for the table).
+    const cards = main.getByRole("list", { name: "Jumps in lap order" });
+    expect(await cards.getByText(/^(Set up in the air|Take it straight|Cannot clear)$/).count()).toBe(9);
     expect(await scrollsSideways(page)).toBe(false);
     await screenshot(page, "analysis-03-layout-page-driver-phone");
 

@@ -66,10 +66,16 @@ export function useBrowser() {
     await browser?.close();
   });
   return {
-    /** A page in a new signed-out context; the viewport defaults to a laptop screen. */
-    async newPage(viewport = { width: 1280, height: 900 }): Promise<Page> {
+    /**
+     * A page in a new signed-out context; the viewport defaults to a laptop screen.
+     * `javaScriptEnabled: false` reads the pages as a browser without scripts would.
+     */
+    async newPage(
+      viewport = { width: 1280, height: 900 },
+      options: { javaScriptEnabled?: boolean } = {},
+    ): Promise<Page> {
       if (!browser) throw new Error("the browser did not start");
-      const context = await browser.newContext({ viewport, baseURL: inject("baseUrl") });
+      const context = await browser.newContext({ viewport, baseURL: inject("baseUrl"), ...options });
       context.setDefaultTimeout(15_000);
       contexts.push(context);
       return context.newPage();

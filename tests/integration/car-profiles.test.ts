@@ -162,7 +162,7 @@ describe("own car profiles", () => {
     const plan = await run(() =>
       planLoader(args(getRequest(`/layouts/${layout.id}/plan`, director.cookie), { layoutId: layout.id })),
     );
-    expect((plan.data as { choice: { car: string; skill: string } }).choice).toMatchObject({
+    expect((plan.data as { analysis: { car: string; skill: string } }).analysis).toMatchObject({
       car,
       skill: "expert",
     });

@@ -278,10 +278,11 @@ describe("read-only plan", () => {
     const view = (id: string, cookie: string) =>
       run(() => viewLoader(args(getRequest(`/layouts/${id}/plan`, cookie), { layoutId: id })));
     expect((await view(published.id, marshal.cookie)).data).toMatchObject({
-      canEdit: false,
-      document: { name: "Race day" },
+      isDirector: false,
+      layout: { name: "Race day" },
+      analysis: { result: { ok: true } },
     });
     expect((await view(layout.id, marshal.cookie)).status).toBe(404);
-    expect((await view(layout.id, director.cookie)).data).toMatchObject({ canEdit: true });
+    expect((await view(layout.id, director.cookie)).data).toMatchObject({ isDirector: true });
   });
 });

@@ -25,7 +25,7 @@ export function AnalysisPickers({
   const classes = cars.filter((c) => !c.own);
   const own = cars.filter((c) => c.own);
   return (
-    <Form method="get" className="flex flex-wrap items-end gap-3" preventScrollReset>
+    <Form method="get" className="flex flex-wrap items-end gap-3 print:hidden" preventScrollReset>
       {Object.entries(keep).map(([name, value]) => (
         <input key={name} type="hidden" name={name} value={value} />
       ))}

@@ -10,6 +10,7 @@ import { degrees, percent } from "./format";
 import { pitchAdvice } from "./pitch-advice";
 import { planOwner } from "./plan-owner";
 import { SteeringChart, type SteeringSeries } from "./steering-chart";
+import { steeringWords } from "./steering-words";
 
 const INFEASIBLE: Record<string, string> = {
   "no-wheel-spin": "the wheels are not spinning, so steering cannot turn the car",
@@ -116,9 +117,17 @@ export function JumpPlanSection({
             {plan.rollToleranceDeg.toFixed(0)}°). Tightest timing window: {Math.round(plan.timingWindowMs)}{" "}
             ms.
           </p>
+          <div className="space-y-1">
+            <h3 className="text-sm font-semibold">In plain words</h3>
+            <ol className="list-decimal space-y-1 pl-5 text-sm" aria-label="Steering timeline in plain words">
+              {steeringWords(plan, j.airtime).map((line) => (
+                <li key={line}>{line}</li>
+              ))}
+            </ol>
+          </div>
           {steering ? <SteeringChart plan={plan} series={steering} /> : null}
           <div className="overflow-x-auto">
-            <table className="min-w-[24rem] text-sm">
+            <table className="w-full text-sm">
               <caption className="text-left text-sm font-medium text-ink-700">
                 Steering and pulse steps (what to command)
               </caption>

@@ -99,7 +99,7 @@ export function JumpView({
         </h2>
         <p className="mt-1 text-ink-700">{j.verdict.text}</p>
       </section>
-      <Cautions headingLevel={2} />
+      <Cautions compact />
       <section aria-labelledby="elevation-heading" className="space-y-2">
         <h2 id="elevation-heading" className="text-lg font-semibold">
           Side elevation and flight

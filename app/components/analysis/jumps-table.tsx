@@ -10,12 +10,16 @@ type Props = {
   numbers: Record<string, number>;
   skill: SkillLevel;
   sort: JumpSort;
-  /** The address of the page sorted by a column in a direction (keeps the other parameters). */
-  sortHref: (key: JumpSortKey, dir: "asc" | "desc") => string;
+  /**
+   * The address of the page sorted by a column in a direction (keeps the other parameters);
+   * without it the headings are plain (the driver's sheet).
+   */
+  sortHref?: (key: JumpSortKey, dir: "asc" | "desc") => string;
   jumpHref: (sectionId: string) => string;
 };
 
-const COLUMNS: { key: JumpSortKey | null; label: string; numeric?: boolean }[] = [
+/** The jumps table's columns, in order (the printed pages and their tests name every one). */
+export const JUMP_COLUMNS: { key: JumpSortKey | null; label: string; numeric?: boolean }[] = [
   { key: "order", label: "No." },
   { key: "name", label: "Jump" },
   { key: "takeoff", label: "Takeoff m/s", numeric: true },
@@ -38,7 +42,7 @@ export function JumpsTable({ jumps, numbers, skill, sort, sortHref, jumpHref }: 
         <caption className="sr-only">Jumps, sortable by the linked column headings</caption>
         <thead className="bg-sand-100 text-left text-ink-700">
           <tr>
-            {COLUMNS.map((c) => {
+            {JUMP_COLUMNS.map((c) => {
               const active = c.key !== null && sort.key === c.key;
               const next = active && sort.dir === "asc" ? "desc" : "asc";
               return (
@@ -47,13 +51,21 @@ export function JumpsTable({ jumps, numbers, skill, sort, sortHref, jumpHref }: 
                   scope="col"
                   className="px-3 py-2 font-medium whitespace-nowrap"
                   aria-sort={
-                    active ? (sort.dir === "asc" ? "ascending" : "descending") : c.key ? "none" : undefined
+                    !sortHref
+                      ? undefined
+                      : active
+                        ? sort.dir === "asc"
+                          ? "ascending"
+                          : "descending"
+                        : c.key
+                          ? "none"
+                          : undefined
                   }
                 >
-                  {c.key ? (
+                  {c.key && sortHref ? (
                     <Link to={sortHref(c.key, next)} preventScrollReset className="hover:underline">
                       {c.label}
-                      <span aria-hidden="true" className="ml-1 text-ink-500">
+                      <span aria-hidden="true" className="ml-1 text-ink-500 print:hidden">
                         {active ? (sort.dir === "asc" ? "\u25b2" : "\u25bc") : "\u21c5"}
                       </span>
                     </Link>

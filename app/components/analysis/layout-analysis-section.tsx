@@ -8,6 +8,7 @@ import { AnalysisSummary } from "./analysis-summary";
 import { jumpName } from "./format";
 import { sortJumps, type JumpSort, type JumpSortKey } from "./jump-sort";
 import { JumpsTable } from "./jumps-table";
+import { JumpCards } from "./jump-card";
 import { TrackDrawing } from "~/components/drawing/track-drawing";
 import { RuleChecksTable } from "./rule-checks-table";
 import type { SummaryData } from "./summary-data";
@@ -72,31 +73,6 @@ export function LayoutAnalysisSection({
         </div>
         <AnalysisPickers key={`${d.car}-${d.skill}`} cars={d.cars} car={d.car} skill={d.skill} keep={keep} />
       </div>
-      {shared ? null : (
-        <nav aria-label="Layout tools" className="flex flex-wrap gap-x-5 gap-y-2 text-sm">
-          <Link to={`/layouts/${d.layoutId}/plan${query({})}`} className="text-pine-700 hover:underline">
-            Open the plan
-          </Link>
-          {d.isDirector ? (
-            <Link to={`/layouts/${d.layoutId}/edit`} className="text-pine-700 hover:underline">
-              Edit the drawing
-            </Link>
-          ) : null}
-          <a
-            href={`/layouts/${d.layoutId}/export${d.version.version ? `?version=${d.version.version}` : ""}`}
-            download
-            className="text-pine-700 hover:underline"
-          >
-            Export the layout file (.json)
-          </a>
-          <a
-            href={`/api/layouts/${d.layoutId}/analysis${query({})}`}
-            className="text-pine-700 hover:underline"
-          >
-            This analysis as JSON
-          </a>
-        </nav>
-      )}
       {d.problems.length ? (
         <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
           {d.problems.join(" ")}
@@ -104,12 +80,30 @@ export function LayoutAnalysisSection({
       ) : null}
       <Cautions compact />
       {d.result.ok ? (
-        <Results data={d} result={d.result} layoutName={layoutName} jumpHref={jumpHref} sortHref={sortHref} />
+        <section aria-labelledby="cards-heading" className="space-y-2 print:hidden">
+          <h2 id="cards-heading" className="text-lg font-semibold">
+            Jumps in lap order ({d.result.chosen.jumps.length})
+          </h2>
+          {d.result.chosen.jumps.length ? (
+            <JumpCards
+              jumps={d.result.chosen.jumps}
+              numbers={jumpNumbers(d.result.chosen.jumps)}
+              skill={d.skill}
+              jumpHref={jumpHref}
+            />
+          ) : (
+            <p className="text-sm text-ink-700">This layout has no jumps.</p>
+          )}
+        </section>
       ) : (
         <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
           {d.result.message}
         </p>
       )}
+      {shared ? null : <ToolLinks data={d} query={query({})} />}
+      {d.result.ok ? (
+        <Results data={d} result={d.result} layoutName={layoutName} jumpHref={jumpHref} sortHref={sortHref} />
+      ) : null}
     </section>
   );
 }
@@ -128,7 +122,7 @@ function Results({
   sortHref: (key: JumpSortKey, dir: "asc" | "desc") => string;
 }) {
   const jumps = result.chosen.jumps;
-  const numbers = Object.fromEntries(jumps.map((j, i) => [j.sectionId, i + 1]));
+  const numbers = jumpNumbers(jumps);
   const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
   return (
     <>
@@ -149,17 +143,22 @@ function Results({
       </section>
       <section aria-labelledby="jumps-heading" className="space-y-2">
         <h2 id="jumps-heading" className="text-lg font-semibold">
-          Jumps ({jumps.length})
+          Jumps table ({jumps.length})
         </h2>
+        <p className="text-sm text-ink-500 md:hidden print:hidden">
+          The cards above carry every column; the sortable table shows on wider screens and on paper.
+        </p>
         {jumps.length ? (
-          <JumpsTable
-            jumps={sortJumps(jumps, d.sort, d.skill)}
-            numbers={numbers}
-            skill={d.skill}
-            sort={d.sort}
-            sortHref={sortHref}
-            jumpHref={jumpHref}
-          />
+          <div className="hidden md:block print:block">
+            <JumpsTable
+              jumps={sortJumps(jumps, d.sort, d.skill)}
+              numbers={numbers}
+              skill={d.skill}
+              sort={d.sort}
+              sortHref={sortHref}
+              jumpHref={jumpHref}
+            />
+          </div>
         ) : (
           <p className="text-sm text-ink-700">This layout has no jumps.</p>
         )}
@@ -174,5 +173,40 @@ function Results({
         settingsHref={d.isDirector ? `/clubs/${d.clubId}/settings` : undefined}
       />
     </>
+  );
+}
+
+/** Jump numbers in lap order (J1, J2, ...) by section id, as on the plan. */
+export function jumpNumbers(jumps: readonly { sectionId: string }[]): Record<string, number> {
+  return Object.fromEntries(jumps.map((j, i) => [j.sectionId, i + 1]));
+}
+
+/** Links to the plan, the driver's sheet, the editor (directors), the layout file and the JSON. */
+function ToolLinks({ data: d, query }: { data: LayoutAnalysisData; query: string }) {
+  const link = "text-pine-700 hover:underline";
+  return (
+    <nav aria-label="Layout tools" className="flex flex-wrap gap-x-5 gap-y-2 text-sm print:hidden">
+      <Link to={`/layouts/${d.layoutId}/plan${query}`} className={link}>
+        Open the plan
+      </Link>
+      <Link to={`/layouts/${d.layoutId}/driver-sheet${query}`} className={link}>
+        Driver's sheet (one page to print)
+      </Link>
+      {d.isDirector ? (
+        <Link to={`/layouts/${d.layoutId}/edit`} className={link}>
+          Edit the drawing
+        </Link>
+      ) : null}
+      <a
+        href={`/layouts/${d.layoutId}/export${d.version.version ? `?version=${d.version.version}` : ""}`}
+        download
+        className={link}
+      >
+        Export the layout file (.json)
+      </a>
+      <a href={`/api/layouts/${d.layoutId}/analysis${query}`} className={link}>
+        This analysis as JSON
+      </a>
+    </nav>
   );
 }

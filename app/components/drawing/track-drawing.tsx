@@ -1,12 +1,12 @@
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { SPEED_BINS } from "~/lib/editor/speed-scale";
-import { extent } from "./drawing-geometry";
+import { extent, type Extent } from "./drawing-geometry";
 import { drawingLabels } from "./drawing-labels";
 import { DrawingLegend } from "./drawing-legend";
 import { TrackLines } from "./track-lines";
 import { JumpMarks, SiteMarks, StartAndSpeeds } from "./track-marks";
-import { makePen } from "./track-pen";
+import { makePen, type Pen } from "./track-pen";
 
 type Site = Pick<LayoutDocument, "driverStand" | "marshalPoints" | "siteBoundary" | "trackWidth">;
 
@@ -41,30 +41,37 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
   const box = extent([...pts, ...others], site.trackWidth + 2);
   const w = box.maxX - box.minX;
   const h = box.maxY - box.minY;
-  const pen = makePen(Math.max(w, h));
-  const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
+  const viewBox = `${box.minX.toFixed(2)} ${(-box.maxY).toFixed(2)} ${w.toFixed(2)} ${h.toFixed(2)}`;
+  // Two drawings of the same plan: wide screens and paper, and a phone's with larger text (its
+  // width governs, so the labels stay readable); CSS shows one.
+  const drawings = [
+    { pen: makePen(Math.max(w, h)), className: "hidden sm:block print:block", maxHeight: "70vh" },
+    { pen: makePen(w, 26), className: "sm:hidden print:hidden", maxHeight: undefined },
+  ];
   return (
     <figure className="space-y-3">
-      <svg
-        viewBox={`${box.minX.toFixed(2)} ${(-box.maxY).toFixed(2)} ${w.toFixed(2)} ${h.toFixed(2)}`}
-        className="h-auto w-full rounded-lg border border-sand-200"
-        style={{ background: PLAN.paper, maxHeight: "70vh" }}
-        role="group"
-        aria-label={`${title}: plan drawn to scale, ${overlay.jumps.length} jumps marked`}
-        fontFamily="Inter, sans-serif"
-      >
-        <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
-        <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
-        <SiteMarks site={site} labels={labels} pen={pen} />
-        <JumpMarks
-          jumps={overlay.jumps}
-          numbers={numbers}
-          names={names}
-          jumpHref={jumpHref}
-          labels={labels}
-          pen={pen}
-        />
-      </svg>
+      {drawings.map(({ pen, className, maxHeight }) => (
+        <svg
+          key={className}
+          viewBox={viewBox}
+          className={`h-auto w-full rounded-lg border border-sand-200 ${className}`}
+          style={{ background: PLAN.paper, maxHeight }}
+          role="group"
+          aria-label={`${title}: plan drawn to scale, ${overlay.jumps.length} jumps marked`}
+          fontFamily="Inter, sans-serif"
+        >
+          <PlanParts
+            overlay={overlay}
+            site={site}
+            pts={pts}
+            numbers={numbers}
+            names={names}
+            jumpHref={jumpHref}
+            pen={pen}
+            box={box}
+          />
+        </svg>
+      ))}
       <figcaption className="space-y-3">
         <p className="text-sm text-ink-700">
           Drawn to scale from above for the {classLabel}: lap {overlay.lapLength.toFixed(0)} m, speeds from{" "}
@@ -79,5 +86,37 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
         />
       </figcaption>
     </figure>
+  );
+}
+
+function PlanParts({
+  overlay,
+  site,
+  pts,
+  numbers,
+  names,
+  jumpHref,
+  pen,
+  box,
+}: Pick<Props, "overlay" | "site" | "numbers" | "names" | "jumpHref"> & {
+  pts: [number, number][];
+  pen: Pen;
+  box: Extent;
+}) {
+  const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
+  return (
+    <>
+      <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
+      <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
+      <SiteMarks site={site} labels={labels} pen={pen} />
+      <JumpMarks
+        jumps={overlay.jumps}
+        numbers={numbers}
+        names={names}
+        jumpHref={jumpHref}
+        labels={labels}
+        pen={pen}
+      />
+    </>
   );
 }

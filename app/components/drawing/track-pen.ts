@@ -18,9 +18,12 @@ export interface Pen {
   };
 }
 
-/** A pen for a drawing whose larger side is `span` m. */
-export function makePen(span: number): Pen {
-  const fs = span / 55;
+/**
+ * A pen for a drawing whose larger side is `span` m: text 1/55 of it (a wide screen, paper). A
+ * phone passes its width over 26, so text stays about 11 px or more on a 360 px wide drawing.
+ */
+export function makePen(span: number, divisor = 55): Pen {
+  const fs = span / divisor;
   return {
     fs,
     P: (x, y) => `${x.toFixed(2)},${(-y).toFixed(2)}`,

@@ -1,140 +1,143 @@
 /**
- * The read-only plan for marshals and drivers (and directors who only want to look): the same
- * canvas without handles or editing panels, with the live analysis, its legend and the jump list.
+ * The plan for readers (marshals, drivers, directors who only want to look): the layout page's
+ * static drawing (the same symbols, J1..Jn and M1..Mn placed by the one label placer), drawn on
+ * the server for the reader's car and skill, larger, with the jumps as cards beside it. No editor
+ * canvas, handles or status lines; the car and skill pickers are a GET form, so the page works
+ * without JavaScript and prints as it reads (docs/decisions/0812-reader-plan-drawn-on-the-server.md).
  */
-import { useMemo, useState } from "react";
 import { Link } from "react-router";
-import { closureError, resolveSections, startPose } from "~/analysis";
-import type { Selection } from "~/lib/editor/editor-state";
-import { DEFAULT_SNAP } from "~/lib/editor/snap";
-import type { LengthUnit } from "~/lib/editor/units";
-import type { LayoutDocument } from "~/analysis";
-import { AnalysisPanel } from "~/components/editor/analysis-panel";
-import { ClosureBar } from "~/components/editor/closure-bar";
-import { DrawingTitle, photoUrl } from "~/components/drawing/drawing-title";
-import { Panel } from "~/components/editor/panel";
-import { describeSection } from "~/components/editor/sections-list";
-import { LazyDrawingCanvas } from "~/components/editor/lazy-drawing-canvas";
-import { useAnalysis, type Skill } from "~/components/editor/use-analysis";
-
-const noop = () => {};
+import { skillPhrase } from "~/analysis";
+import { AnalysisPickers } from "~/components/analysis/analysis-pickers";
+import { jumpName } from "~/components/analysis/format";
+import { JumpCards } from "~/components/analysis/jump-card";
+import { JumpsTable } from "~/components/analysis/jumps-table";
+import { jumpNumbers, type LayoutAnalysisData } from "~/components/analysis/layout-analysis-section";
+import { Cautions } from "~/components/cautions";
+import { DrawingTitle } from "~/components/drawing/drawing-title";
+import { TrackDrawing } from "~/components/drawing/track-drawing";
+import { VersionBanner, type VersionBannerReading } from "~/components/publishing/version-banner";
 
 export interface DrawingViewerProps {
   club: { id: string; name: string };
   layout: { id: string; name: string; status: string };
-  document: LayoutDocument;
-  canEdit: boolean;
-  /** The reader's car (a class id or "profile:<id>") and skill to open with, and the cars offered. */
-  choice?: { car: string; skill: Skill; cars: { value: string; label: string; own: boolean }[] };
+  isDirector: boolean;
+  reading: VersionBannerReading;
+  analysis: LayoutAnalysisData;
 }
 
-export function DrawingViewer({ club, layout, document: doc, canEdit, choice }: DrawingViewerProps) {
-  const sections = useMemo(() => resolveSections(doc), [doc]);
-  const closure = useMemo(() => closureError(sections, startPose(doc)), [sections, doc]);
-  const [selection, setSelection] = useState<Selection>(null);
-  const [units, setUnits] = useState<LengthUnit>("m");
-  const [classId, setClassId] = useState<string | undefined>(choice?.car ?? doc.carClasses[0]);
-  const [skill, setSkill] = useState<Skill>(choice?.skill ?? "club");
-  const [fitRequest, setFitRequest] = useState(0);
-  const analysis = useAnalysis(doc, classId, skill, layout.id);
-  const selected = selection?.kind === "section" ? selection.index : null;
+export function DrawingViewer({ club, layout, isDirector, reading, analysis: d }: DrawingViewerProps) {
+  const query = `?${new URLSearchParams({ car: d.car, skill: d.skill, ...d.version })}`;
+  const jumpHref = (id: string) => `/layouts/${layout.id}/jumps/${encodeURIComponent(id)}${query}`;
+  const own = d.cars.find((c) => c.value === d.car)?.own;
+  const carLabel = d.classes.find((c) => c.classId === d.classId)?.label ?? d.classId;
+  const links = [{ to: `/layouts/${layout.id}/driver-sheet${query}`, label: "Driver's sheet" }];
   return (
-    <div className="space-y-3">
-      <header className="flex flex-wrap items-end gap-x-4 gap-y-2">
-        <DrawingTitle club={club} layoutId={layout.id} heading={`Plan of ${doc.name}`} />
-        <div className="ml-auto flex items-center gap-3 text-sm">
-          <label className="inline-flex items-center gap-1.5">
-            Plan in
-            <select
-              className="rounded-md border border-ink-300 bg-white px-1.5 py-1 text-sm"
-              value={units}
-              onChange={(e) => setUnits(e.target.value as LengthUnit)}
-            >
-              <option value="m">metres</option>
-              <option value="ft">feet</option>
-            </select>
-          </label>
-          <button
-            type="button"
-            className="rounded-md border border-ink-300 bg-white px-2.5 py-1.5 font-medium hover:bg-sand-100"
-            onClick={() => setFitRequest((n) => n + 1)}
-          >
-            Fit
-          </button>
-          {canEdit ? (
+    <article className="reader-plan space-y-4">
+      <header className="flex flex-wrap items-end justify-between gap-x-4 gap-y-3">
+        <div className="min-w-0">
+          <DrawingTitle club={club} layoutId={layout.id} heading={`Plan of ${layout.name}`} links={links} />
+          <p className="text-sm text-ink-500">
+            {own ? "For your car " : "For the "}
+            {carLabel}, verdicts for {skillPhrase(d.skill)}. Model estimates.
+          </p>
+        </div>
+        <div className="flex flex-wrap items-end gap-3">
+          <AnalysisPickers
+            key={`${d.car}-${d.skill}`}
+            cars={d.cars}
+            car={d.car}
+            skill={d.skill}
+            keep={d.version}
+          />
+          {isDirector ? (
             <Link
               to={`/layouts/${layout.id}/edit`}
-              className="rounded-md bg-pine-700 px-3 py-1.5 font-medium text-white hover:bg-pine-800"
+              className="rounded-md bg-pine-700 px-3 py-2 text-sm font-medium text-white hover:bg-pine-800 print:hidden"
             >
               Edit the layout
             </Link>
           ) : null}
         </div>
       </header>
-      <ClosureBar closure={closure} units={units} editable={false} message={null} />
-      <div className="flex flex-col gap-3 lg:flex-row">
-        <div
-          className="relative h-[62vh] min-h-[360px] overflow-hidden rounded-md border border-ink-300 lg:flex-1"
-          role="img"
-          aria-label={`Plan of ${doc.name}: ${doc.sections.length} sections; the jumps and their verdicts are listed beside it`}
-        >
-          <LazyDrawingCanvas
-            doc={doc}
-            sections={sections}
-            selection={selection}
-            editable={false}
-            mode="select"
-            snap={DEFAULT_SNAP}
-            units={units}
-            overlay={analysis.overlay}
-            overlayStale={false}
-            photoUrl={photoUrl(doc.background)}
-            fitRequest={fitRequest}
-            calibrationPoints={[]}
-            onSelect={setSelection}
-            onChange={noop}
-            onGestureEnd={noop}
-            onPlanClick={noop}
-          />
-        </div>
-        <aside className="space-y-2 lg:w-[22rem]" aria-label="About this plan">
-          <Panel title="Jumps and verdicts" open>
-            <AnalysisPanel
-              overlay={analysis.overlay}
-              status={analysis.status}
-              stale={false}
-              sections={doc.sections}
-              classIds={doc.carClasses}
-              carOptions={choice?.cars}
-              classId={classId}
-              skill={skill}
-              selected={selected}
-              onClass={setClassId}
-              onSkill={setSkill}
-              onSelect={(index) => setSelection({ kind: "section", index })}
-            />
-          </Panel>
-          <Panel title={`Sections (${doc.sections.length})`} open={selected !== null}>
-            <ol className="max-h-64 space-y-0.5 overflow-y-auto text-sm">
-              {doc.sections.map((s, i) => (
-                <li
-                  key={s.id}
-                  className={`rounded px-2 py-0.5 tabular-nums ${selected === i ? "bg-clay-100 font-semibold text-clay-700" : ""}`}
-                >
-                  {i + 1}. {describeSection(s, sections[i])}
-                </li>
-              ))}
-            </ol>
-          </Panel>
-          {doc.marshalPoints.length ? (
-            <Panel title={`Marshal points (${doc.marshalPoints.length})`}>
-              <p className="text-sm text-ink-700">
-                Numbered on the plan. Stand out of the overshoot zone beyond landings and the outside of fast
-                turns, stay low and face the traffic; closed shoes, eye protection and hi-vis.
-              </p>
-            </Panel>
-          ) : null}
-        </aside>
+      <VersionBanner layoutId={layout.id} reading={reading} isDirector={isDirector} />
+      {d.problems.length ? (
+        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
+          {d.problems.join(" ")}
+        </p>
+      ) : null}
+      <Cautions compact />
+      {d.result.ok ? (
+        <Plan data={d} result={d.result} name={layout.name} jumpHref={jumpHref} />
+      ) : (
+        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
+          {d.result.message}
+        </p>
+      )}
+    </article>
+  );
+}
+
+function Plan({
+  data: d,
+  result,
+  name,
+  jumpHref,
+}: {
+  data: LayoutAnalysisData;
+  result: Extract<LayoutAnalysisData["result"], { ok: true }>;
+  name: string;
+  jumpHref: (id: string) => string;
+}) {
+  const jumps = result.chosen.jumps;
+  const numbers = jumpNumbers(jumps);
+  const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
+  const marshals = d.document.marshalPoints;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem] print:block">
+      <TrackDrawing
+        overlay={result.overlay}
+        site={d.document}
+        numbers={numbers}
+        names={names}
+        jumpHref={jumpHref}
+        title={name}
+        classLabel={result.chosen.label}
+      />
+      <div className="space-y-4">
+        <section aria-labelledby="plan-jumps-heading" className="space-y-2">
+          <h2 id="plan-jumps-heading" className="text-lg font-semibold">
+            Jumps in lap order ({jumps.length})
+          </h2>
+          {jumps.length ? (
+            <>
+              <div className="lg:[&_ol]:grid-cols-1 print:hidden">
+                <JumpCards jumps={jumps} numbers={numbers} skill={d.skill} jumpHref={jumpHref} />
+              </div>
+              <div className="hidden print:block">
+                <JumpsTable
+                  jumps={jumps}
+                  numbers={numbers}
+                  skill={d.skill}
+                  sort={d.sort}
+                  jumpHref={jumpHref}
+                />
+              </div>
+            </>
+          ) : (
+            <p className="text-sm text-ink-700">This layout has no jumps.</p>
+          )}
+        </section>
+        {marshals.length ? (
+          <section aria-labelledby="plan-marshals-heading" className="space-y-1 text-sm print-keep">
+            <h2 id="plan-marshals-heading" className="text-lg font-semibold">
+              Marshal points ({marshals.length})
+            </h2>
+            <p className="text-ink-700">
+              M1 to M{marshals.length} on the plan. Stand out of the overshoot zone beyond landings and off
+              the outside of fast turns, stay low and face the traffic.
+            </p>
+          </section>
+        ) : null}
       </div>
     </div>
   );
