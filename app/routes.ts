@@ -19,6 +19,7 @@ export default [
   route("layouts/:layoutId/build/marking.pdf", "routes/build-pack-marking-pdf.ts"),
   route("layouts/:layoutId/build/marking.csv", "routes/build-pack-marking-csv.ts"),
   route("layouts/:layoutId/build/earthworks.pdf", "routes/build-pack-earthworks-pdf.ts"),
+  route("layouts/:layoutId/risk.pdf", "routes/risk-sheet-pdf.ts"),
   route("profiles/:profileId/export", "routes/profile-export.ts"),
 
   // A published version shared by link: signed out, read-only, not indexed, rate limited.
@@ -44,6 +45,7 @@ export default [
     route("layouts/:layoutId/plan", "routes/layout-drawing.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
     route("layouts/:layoutId/build", "routes/build-pack.tsx"),
+    route("layouts/:layoutId/risk", "routes/risk-sheet.tsx"),
     route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),
     route("layouts/:layoutId/compare", "routes/layout-compare.tsx"),
     route("profiles", "routes/profiles.tsx"),

@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { SPEED_BINS } from "~/lib/editor/speed-scale";
@@ -6,7 +7,7 @@ import { drawingLabels } from "./drawing-labels";
 import { DrawingLegend } from "./drawing-legend";
 import { TrackLines } from "./track-lines";
 import { JumpMarks, SiteMarks, StartAndSpeeds } from "./track-marks";
-import { makePen } from "./track-pen";
+import { makePen, type Pen } from "./track-pen";
 
 type Site = Pick<LayoutDocument, "driverStand" | "marshalPoints" | "siteBoundary" | "trackWidth">;
 
@@ -19,6 +20,10 @@ type Props = {
   jumpHref: (sectionId: string) => string;
   title: string;
   classLabel: string;
+  /** More plan points the drawing must hold (a zone's far end), m. */
+  extraPoints?: readonly [number, number][];
+  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen. */
+  layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode };
 };
 
 /**
@@ -30,7 +35,17 @@ type Props = {
  * label placer the editor's canvas uses too (drawing-labels.ts), so none overlaps another or is cut
  * off at the edge.
  */
-export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, classLabel }: Props) {
+export function TrackDrawing({
+  overlay,
+  site,
+  numbers,
+  names,
+  jumpHref,
+  title,
+  classLabel,
+  extraPoints = [],
+  layers,
+}: Props) {
   const { line, speedRange } = overlay;
   const pts: [number, number][] = line.x.map((x, i) => [x, line.y[i]]);
   const others: [number, number][] = [
@@ -38,11 +53,12 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
     ...site.marshalPoints.map((m) => [m.x, m.y] as [number, number]),
     ...(site.driverStand ? [[site.driverStand.x, site.driverStand.y] as [number, number]] : []),
   ];
-  const box = extent([...pts, ...others], site.trackWidth + 2);
+  const box = extent([...pts, ...others, ...extraPoints], site.trackWidth + 2);
   const w = box.maxX - box.minX;
   const h = box.maxY - box.minY;
   const pen = makePen(Math.max(w, h));
   const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
+  const extra = layers?.(pen);
   return (
     <figure className="space-y-3">
       <svg
@@ -53,6 +69,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
         aria-label={`${title}: plan drawn to scale, ${overlay.jumps.length} jumps marked`}
         fontFamily="Inter, sans-serif"
       >
+        {extra?.under}
         <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
         <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
         <SiteMarks site={site} labels={labels} pen={pen} />
@@ -64,6 +81,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
           labels={labels}
           pen={pen}
         />
+        {extra?.over}
       </svg>
       <figcaption className="space-y-3">
         <p className="text-sm text-ink-700">
