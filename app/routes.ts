@@ -15,6 +15,7 @@ export default [
   route("api/layouts/:layoutId", "routes/api-layout.ts"),
   route("api/layouts/:layoutId/analysis", "routes/api-layout-analysis.ts"),
   route("api/analysis", "routes/api-analysis.ts"),
+  route("api/layouts/:layoutId/marshal-plan", "routes/api-marshal-plan.ts"),
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
   route("layouts/:layoutId/build/marking.pdf", "routes/build-pack-marking-pdf.ts"),
   route("layouts/:layoutId/build/marking.csv", "routes/build-pack-marking-csv.ts"),

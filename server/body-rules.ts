@@ -33,6 +33,8 @@ export const BODY_RULES: Readonly<Record<string, BodyRule>> = {
   "routes/layout-photo": { maxBytes: 10 * MB + 128 * KB, accepts: ["multipart"], streamMultipart: true },
   // The analysis API: a layout document as JSON, at most 1 MB (api-analysis.ts).
   "routes/api-analysis": { maxBytes: MB + 64 * KB, accepts: ["json"] },
+  // The editor's marshal plan: the draft document as JSON, at most 1 MB (marshal-plan-api.server.ts).
+  "routes/api-marshal-plan": { maxBytes: MB + 64 * KB, accepts: ["json"] },
 };
 
 export function bodyRuleFor(routeId: string | undefined): BodyRule {
