@@ -72,7 +72,7 @@ export function RiskSheetView({ sheet }: { sheet: RiskSheetData }) {
               </select>
             </label>
             <button type="submit" className={buttonClass("secondary")}>
-              Show
+              Show this class
             </button>
           </Form>
         ) : null}
