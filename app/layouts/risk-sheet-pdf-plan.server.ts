@@ -6,6 +6,7 @@
  */
 import { rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import { hatchSegments } from "~/lib/hatch";
+import { groupHotspots } from "~/lib/risk-sheet-rows";
 import type { RiskSheet } from "./risk-sheet.server";
 
 type Box = { x: number; y: number; w: number; h: number };
@@ -58,15 +59,6 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
 
   page.drawRectangle({ x: box.x, y: box.y, width: box.w, height: box.h, borderColor: INK, borderWidth: 0.4 });
   if (site.siteBoundary) stroke(site.siteBoundary, INK, 0.6, [3, 2], true);
-  // The track band as a wide stroke of the track's width, then the centre line.
-  page.drawSvgPath(path(line, true), {
-    x: box.x,
-    y: top,
-    borderColor: BAND,
-    borderWidth: site.trackWidth * scale,
-  });
-  stroke(line, INK, 0.4, [1.5, 1.5], true);
-
   for (const z of plan.zones) {
     const pts = z.polygon.map((q) => P(q));
     for (const [a, b] of hatchSegments(
@@ -76,22 +68,36 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
       page.drawLine({ start: { x: a[0], y: a[1] }, end: { x: b[0], y: b[1] }, thickness: 0.4, color: ZONE });
     stroke(z.polygon, ZONE, 0.8, [3, 1.5], true);
   }
+  // The track band as a wide stroke of the track's width, then the centre line.
+  page.drawSvgPath(path(line, true), {
+    x: box.x,
+    y: top,
+    borderColor: BAND,
+    borderWidth: site.trackWidth * scale,
+  });
+  stroke(line, INK, 0.4, [1.5, 1.5], true);
+
+  for (const g of groupHotspots(plan.hotspots, 6 / scale)) {
+    const p = P([g.x, g.y]);
+    page.drawSvgPath("M0 -3 L2.6 2 L-2.6 2 Z", {
+      x: p.x,
+      y: p.y,
+      color: rgb(1, 1, 1),
+      borderColor: INK,
+      borderWidth: 0.7,
+    });
+    label(
+      g.ids.join(","),
+      { x: p.x - 3 - font.widthOfTextAtSize(g.ids.join(","), 5.5), y: p.y - 8 },
+      5.5,
+      font,
+    );
+  }
   for (const j of overlay.jumps) {
     const mark = plan.jumps.find((m) => m.sectionId === j.sectionId);
     const p = P(j.lip);
     page.drawRectangle({ x: p.x - 2.5, y: p.y - 2.5, width: 5, height: 5, color: INK });
     if (mark) label(mark.id, { x: p.x + 4, y: p.y - 8 }, 7.5);
-  }
-  for (const h of plan.hotspots) {
-    const p = P([h.x, h.y]);
-    page.drawSvgPath("M0 -4 L3.5 2.5 L-3.5 2.5 Z", {
-      x: p.x,
-      y: p.y,
-      color: rgb(1, 1, 1),
-      borderColor: INK,
-      borderWidth: 0.8,
-    });
-    label(h.id, { x: p.x + 4, y: p.y + 1 }, 6.5, font);
   }
   site.marshalPoints.forEach((m, i) => {
     const p = P([m.x, m.y]);

@@ -20,7 +20,7 @@ export const POINT_COLUMNS = [
   { id: "point", title: "Point", width: 34 },
   { id: "stretch", title: "Stretch of the lap", width: 86 },
   { id: "watch", title: "What to watch", width: 170 },
-  { id: "marks", title: "Jumps and turns", width: 70 },
+  { id: "marks", title: "Jumps, turns", width: 70 },
   { id: "warnings", title: "Warnings", width: 163 },
 ] as const;
 export type PointColumnId = (typeof POINT_COLUMNS)[number]["id"];
@@ -91,4 +91,18 @@ export function hotspotLine(h: Hotspot): string {
 /** "J1 Tabletop, J2 Hairpin double and T3 ..." for the legend under the plan. */
 export function marksLegend(plan: Pick<MarshalPlan, "jumps">): string {
   return listWords(plan.jumps.map((j) => j.title));
+}
+
+/** Hotspots closer than `near` (m) to the first of a group share one mark: "H9,H10,H11". */
+export function groupHotspots(
+  hotspots: readonly Pick<Hotspot, "id" | "x" | "y">[],
+  near: number,
+): { ids: string[]; x: number; y: number }[] {
+  const groups: { ids: string[]; x: number; y: number }[] = [];
+  for (const h of hotspots) {
+    const g = groups.find((q) => Math.hypot(q.x - h.x, q.y - h.y) < near);
+    if (g) g.ids.push(h.id);
+    else groups.push({ ids: [h.id], x: h.x, y: h.y });
+  }
+  return groups;
 }

@@ -22,7 +22,7 @@ type Props = {
   classLabel: string;
   /** More plan points the drawing must hold (a zone's far end), m. */
   extraPoints?: readonly [number, number][];
-  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen. */
+  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen: `under` below the track, `over` above it and below the marks. */
   layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode };
 };
 
@@ -72,6 +72,7 @@ export function TrackDrawing({
         {extra?.under}
         <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
         <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
+        {extra?.over}
         <SiteMarks site={site} labels={labels} pen={pen} />
         <JumpMarks
           jumps={overlay.jumps}
@@ -81,7 +82,6 @@ export function TrackDrawing({
           labels={labels}
           pen={pen}
         />
-        {extra?.over}
       </svg>
       <figcaption className="space-y-3">
         <p className="text-sm text-ink-700">

@@ -1,10 +1,12 @@
 /**
  * The corner-risk sheet's layers over the track drawing (TrackDrawing's `layers`): each zone as a
- * hatched, outlined wedge under the track, and each hotspot as a numbered triangle over it.
+ * hatched, outlined wedge under the track, and the hotspots as numbered triangles over the track
+ * but under the jump and marshal marks (hotspots at one spot share a mark).
  * Hatching and outline carry the meaning on black-and-white paper, not the colour alone.
  */
 import type { Hotspot, MarshalZone } from "~/analysis";
 import type { Pen } from "~/components/drawing/track-pen";
+import { groupHotspots } from "~/lib/risk-sheet-rows";
 
 const ZONE = "#a3261b";
 const HOT = "#141b24";
@@ -44,29 +46,30 @@ export function riskLayers(zones: readonly MarshalZone[], hotspots: readonly Hot
         ))}
       </g>
     );
-    const s = pen.fs * 0.55;
+    const s = pen.fs * 0.4;
     const over = (
       <g aria-label={`${hotspots.length} hotspots, numbered`}>
-        {hotspots.map((h) => {
-          const [cx, cy] = pen.P(h.x, h.y).split(",").map(Number);
+        {groupHotspots(hotspots, pen.fs * 1.2).map((g) => {
+          const [cx, cy] = pen.P(g.x, g.y).split(",").map(Number);
           return (
-            <g key={h.id}>
+            <g key={g.ids[0]}>
               <path
                 d={`M${cx} ${cy - s} L${cx + s} ${cy + s * 0.75} L${cx - s} ${cy + s * 0.75} Z`}
                 fill="#ffffff"
                 stroke={HOT}
-                strokeWidth={1.4}
+                strokeWidth={1.2}
                 vectorEffect="non-scaling-stroke"
               />
               <text
-                x={cx + s * 1.1}
-                y={cy + s * 0.3}
-                fontSize={pen.fs * 0.7}
+                x={cx - s * 1.2}
+                y={cy + s * 1.9}
+                textAnchor="end"
+                fontSize={pen.fs * 0.6}
                 fontWeight={600}
                 fill={HOT}
                 {...pen.halo}
               >
-                {h.id}
+                {g.ids.join(",")}
               </text>
             </g>
           );

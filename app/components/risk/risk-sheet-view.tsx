@@ -114,7 +114,8 @@ export function RiskSheetView({ sheet }: { sheet: RiskSheetData }) {
           <ol className="space-y-1 text-sm">
             {plan.hotspots.map((h) => (
               <li key={h.id} className="print-keep">
-                {hotspotLine(h)}
+                <strong>{hotspotLine(h).split(" · ")[0]}</strong> ·{" "}
+                {hotspotLine(h).split(" · ").slice(1).join(" · ")}
               </li>
             ))}
           </ol>
