@@ -22,8 +22,8 @@ type Props = {
   classLabel: string;
   /** More plan points the drawing must hold (a zone's far end), m. */
   extraPoints?: readonly [number, number][];
-  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen: `under` below the track, `over` above it and below the marks. */
-  layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode };
+  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen: `under` below the track, `over` above it and below the marks, `top` last. */
+  layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode; top?: ReactNode };
 };
 
 /**
@@ -82,6 +82,7 @@ export function TrackDrawing({
           labels={labels}
           pen={pen}
         />
+        {extra?.top}
       </svg>
       <figcaption className="space-y-3">
         <p className="text-sm text-ink-700">

@@ -47,36 +47,48 @@ export function riskLayers(zones: readonly MarshalZone[], hotspots: readonly Hot
       </g>
     );
     const s = pen.fs * 0.4;
+    const groups = groupHotspots(hotspots, pen.fs * 1.2);
+    const at = (g: { x: number; y: number }) => pen.P(g.x, g.y).split(",").map(Number);
     const over = (
       <g aria-label={`${hotspots.length} hotspots, numbered`}>
-        {groupHotspots(hotspots, pen.fs * 1.2).map((g) => {
-          const [cx, cy] = pen.P(g.x, g.y).split(",").map(Number);
+        {groups.map((g) => {
+          const [cx, cy] = at(g);
           return (
-            <g key={g.ids[0]}>
-              <path
-                d={`M${cx} ${cy - s} L${cx + s} ${cy + s * 0.75} L${cx - s} ${cy + s * 0.75} Z`}
-                fill="#ffffff"
-                stroke={HOT}
-                strokeWidth={1.2}
-                vectorEffect="non-scaling-stroke"
-              />
-              <text
-                x={cx - s * 1.2}
-                y={cy + s * 1.9}
-                textAnchor="end"
-                fontSize={pen.fs * 0.6}
-                fontWeight={600}
-                fill={HOT}
-                {...pen.halo}
-              >
-                {g.ids.join(",")}
-              </text>
-            </g>
+            <path
+              key={g.ids[0]}
+              d={`M${cx} ${cy - s} L${cx + s} ${cy + s * 0.75} L${cx - s} ${cy + s * 0.75} Z`}
+              fill="#ffffff"
+              stroke={HOT}
+              strokeWidth={1.2}
+              vectorEffect="non-scaling-stroke"
+            />
           );
         })}
       </g>
     );
-    return { under, over };
+    // The numbers go on top, below and left of the mark (jump labels sit to the right).
+    const top = (
+      <g aria-hidden="true">
+        {groups.map((g) => {
+          const [cx, cy] = at(g);
+          return (
+            <text
+              key={g.ids[0]}
+              x={cx - pen.fs * 0.5}
+              y={cy + pen.fs * 1.3}
+              textAnchor="end"
+              fontSize={pen.fs * 0.6}
+              fontWeight={600}
+              fill={HOT}
+              {...pen.halo}
+            >
+              {g.ids.join(",")}
+            </text>
+          );
+        })}
+      </g>
+    );
+    return { under, over, top };
   };
 }
 
