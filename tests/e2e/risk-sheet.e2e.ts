@@ -36,7 +36,12 @@ describe("corner-risk sheet in the browser", () => {
     const page = await browser.newPage();
     await login(page, demoAccount("marshal"));
     await page.goto(url(`/clubs/${clubId}`));
-    await page.getByRole("link", { name: "Corner-risk sheet" }).first().click();
+    // Other browser tests may publish layouts of their own: take the summer layout's card.
+    await page
+      .getByRole("listitem")
+      .filter({ hasText: "Summer layout" })
+      .getByRole("link", { name: "Corner-risk sheet" })
+      .click();
     await page.getByRole("heading", { level: 1, name: "Corner-risk sheet: Summer layout" }).waitFor();
     expect(new URL(page.url()).pathname).toBe(`/layouts/${id}/risk`);
     const main = page.getByRole("main");
@@ -68,5 +73,28 @@ describe("corner-risk sheet in the browser", () => {
     await phone.getByRole("heading", { level: 1, name: "Corner-risk sheet: Summer layout" }).waitFor();
     expect(await scrollsSideways(phone)).toBe(false);
     await screenshot(phone, "risk-sheet-03-390");
+  });
+
+  it("shows the director a warned marshal point in the editor and suggests a heat's worth of points, undoable", async () => {
+    const [wet] = await queryDb<{ id: string }>("select id from layouts where name = ?", [
+      "Wet-weather layout",
+    ]);
+    const page = await browser.newPage();
+    await login(page, demoAccount("director"));
+    await page.goto(url(`/layouts/${wet.id}/edit`));
+    await page.getByText("Marshal points: warnings and suggestions").click();
+    const warnings = page.getByRole("list", { name: "Marshal point warnings" });
+    await warnings.getByText(/M2 · Inside a zone/).waitFor();
+    expect(await warnings.getByRole("button", { name: "Move M2 to the nearby safe spot" }).count()).toBe(1);
+    await page.getByRole("button", { name: "Suggest marshal points" }).click();
+    await page.getByText(/^10 suggested points placed/).waitFor();
+    await page
+      .getByRole("heading", { name: "Marshal points (10)", includeHidden: true })
+      .waitFor({ state: "attached" });
+    await screenshot(page, "risk-sheet-04-editor-suggested");
+    await page.getByRole("button", { name: "Undo", exact: true }).click();
+    await page
+      .getByRole("heading", { name: "Marshal points (5)", includeHidden: true })
+      .waitFor({ state: "attached" });
   });
 });
