@@ -64,7 +64,12 @@ export function MarshalPlanPanel({ layoutId, doc, onChange }: Props) {
           {marshal.stale ? " (checking the latest change…)" : ""}.
         </p>
       ) : (
-        <ul className="space-y-2" aria-label="Marshal point warnings">
+        <ul
+          className={`space-y-2 ${marshal.stale ? "opacity-60" : ""}`}
+          aria-label="Marshal point warnings"
+          aria-busy={marshal.stale}
+        >
+          {marshal.stale ? <li className="text-ink-500">Checking the latest change…</li> : null}
           {warned.flatMap((p) =>
             p.warnings.map((w, k) => {
               const index = Number(p.id.slice(1)) - 1;
@@ -83,6 +88,7 @@ export function MarshalPlanPanel({ layoutId, doc, onChange }: Props) {
                     <button
                       type="button"
                       className={`${toolClass} mt-1`}
+                      disabled={marshal.stale}
                       onClick={() =>
                         onChange(
                           moveMarshalPoint(doc, index, { x: w.moveTo![0], y: w.moveTo![1] }),
