@@ -15,10 +15,12 @@ export default [
   route("api/layouts/:layoutId", "routes/api-layout.ts"),
   route("api/layouts/:layoutId/analysis", "routes/api-layout-analysis.ts"),
   route("api/analysis", "routes/api-analysis.ts"),
+  route("api/layouts/:layoutId/marshal-plan", "routes/api-marshal-plan.ts"),
   route("layouts/:layoutId/export", "routes/layout-export.ts"),
   route("layouts/:layoutId/build/marking.pdf", "routes/build-pack-marking-pdf.ts"),
   route("layouts/:layoutId/build/marking.csv", "routes/build-pack-marking-csv.ts"),
   route("layouts/:layoutId/build/earthworks.pdf", "routes/build-pack-earthworks-pdf.ts"),
+  route("layouts/:layoutId/risk.pdf", "routes/risk-sheet-pdf.ts"),
   route("profiles/:profileId/export", "routes/profile-export.ts"),
 
   // A published version shared by link: signed out, read-only, not indexed, rate limited.
@@ -45,6 +47,7 @@ export default [
     route("layouts/:layoutId/driver-sheet", "routes/driver-sheet.tsx"),
     route("layouts/:layoutId/photo", "routes/layout-photo.tsx"),
     route("layouts/:layoutId/build", "routes/build-pack.tsx"),
+    route("layouts/:layoutId/risk", "routes/risk-sheet.tsx"),
     route("layouts/:layoutId/publishing", "routes/layout-publishing.tsx"),
     route("layouts/:layoutId/compare", "routes/layout-compare.tsx"),
     route("layouts/:layoutId/calibrate", "routes/layout-calibrate.tsx"),

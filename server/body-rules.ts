@@ -35,6 +35,8 @@ export const BODY_RULES: Readonly<Record<string, BodyRule>> = {
   "routes/layout-calibrate": { maxBytes: 576 * KB + 64 * KB, accepts: ["urlencoded", "multipart"] },
   // The analysis API: a layout document as JSON, at most 1 MB (api-analysis.ts).
   "routes/api-analysis": { maxBytes: MB + 64 * KB, accepts: ["json"] },
+  // The editor's marshal plan: the draft document as JSON, at most 1 MB (marshal-plan-api.server.ts).
+  "routes/api-marshal-plan": { maxBytes: MB + 64 * KB, accepts: ["json"] },
 };
 
 export function bodyRuleFor(routeId: string | undefined): BodyRule {

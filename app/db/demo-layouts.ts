@@ -152,15 +152,17 @@ export const SUMMER_LAYOUT: LayoutDocument = {
     [60, 38],
     [0, 38],
   ],
+  // Placed beside the landings and on the inside of the turns, out of every zone of the three
+  // classes (decision 0715); the wet-weather layout keeps one point in a zone, as a warning to see.
   marshalPoints: [
     { x: 28.9, y: 6.5 },
-    { x: 42.9, y: 7.5 },
+    { x: 43, y: 7.2 },
     { x: 15.4, y: 18.5 },
-    { x: 50.4, y: 18.7 },
+    { x: 48.4, y: 18.75 },
     { x: 18.8, y: 19.5 },
     { x: 39.5, y: 30.5 },
-    { x: 31.9, y: 32.4 },
-    { x: 8, y: 20 },
+    { x: 26.2, y: 37.9 },
+    { x: 8.9, y: 16.7 },
   ],
 };
 

@@ -37,6 +37,10 @@ export const clubs = sqliteTable("clubs", {
   guidanceOverrides: text("guidance_overrides").notNull().default("{}"),
   /** JSON list of the car class ids a new layout of the club is analysed for; null: the default class. */
   defaultCarClasses: text("default_car_classes"),
+  /** Farthest a marshal point may stand from the nearest track edge, m (decision 0710). */
+  marshalReach: real("marshal_reach").notNull().default(3),
+  /** The club's largest heat: how many marshal points a suggested plan has (decision 0710). */
+  heatSize: integer("heat_size").notNull().default(10),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });

@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { RiskSheetLink } from "~/components/risk/risk-sheet-link";
 import type { Route } from "./+types/club-home";
 import { requireClubRole } from "~/auth/permissions.server";
 import { ImportForm } from "~/components/analysis/import-form";
@@ -62,6 +63,7 @@ export default function ClubHome({ loaderData }: Route.ComponentProps) {
                   {raceDay[layout.id].versionNumber}
                 </p>
               ) : null}
+              {raceDay[layout.id] ? <RiskSheetLink layoutId={layout.id} className="mt-1" /> : null}
             </li>
           ))}
         </ul>

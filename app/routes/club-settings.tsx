@@ -25,6 +25,9 @@ import {
 import { LIST_FIELDS } from "~/lib/schemas/layouts";
 import { loadClubCarClasses, saveClubCarClasses } from "~/clubs/car-classes.server";
 import { DefaultClassesForm } from "~/components/car-class-picker";
+import { loadClubMarshal, saveClubMarshal } from "~/clubs/marshal-settings.server";
+import { MarshalSettingsForm } from "~/components/risk/marshal-settings-form";
+import { clubMarshalSchema } from "~/lib/schemas/marshal-settings";
 
 export const meta: Route.MetaFunction = () => [{ title: "Club settings · Loftline" }];
 
@@ -59,6 +62,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       values: GUIDANCE_SETS[id].values,
     })),
     sources: ruleSources(guidance.guidanceSet, guidance.overrides),
+    marshal: await loadClubMarshal(club.id),
   };
 }
 
@@ -82,6 +86,16 @@ export async function action({ request, params }: Route.ActionArgs) {
       "Default car classes saved. New layouts start with them; existing layouts keep their own.",
     );
   }
+  if (formData.get("intent") === "marshal-settings") {
+    const marshal = parseForm(clubMarshalSchema, formData);
+    if (!marshal.ok) return data({ errors: marshal.errors, values: formValues(formData) }, { status: 400 });
+    await saveClubMarshal(club.id, { reach: marshal.data.reach, heatSize: marshal.data.heatSize });
+    throw await redirectWithNotice(
+      request,
+      `/clubs/${club.id}/settings`,
+      "Marshal settings saved. The editor's warnings, suggested points and the corner-risk sheet use them.",
+    );
+  }
   const parsed = parseForm(clubSettingsSchema, formData);
   if (!parsed.ok) return data({ errors: parsed.errors, values: formValues(formData) }, { status: 400 });
   await saveClubGuidance(club.id, settingsFromForm(parsed.data));
@@ -95,8 +109,10 @@ export async function action({ request, params }: Route.ActionArgs) {
 export default function ClubSettings({ loaderData, actionData }: Route.ComponentProps) {
   const { guidance, sets, sources } = loaderData;
   const classesSent = actionData?.values?.intent === "default-classes";
-  const errors: FieldErrors | undefined = classesSent ? undefined : actionData?.errors;
-  const values = classesSent ? undefined : (actionData?.values as Record<string, string> | undefined);
+  const marshalSent = actionData?.values?.intent === "marshal-settings";
+  const errors: FieldErrors | undefined = classesSent || marshalSent ? undefined : actionData?.errors;
+  const values =
+    classesSent || marshalSent ? undefined : (actionData?.values as Record<string, string> | undefined);
   const busy = useNavigation().state === "submitting";
   const chosen = (values?.guidanceSet as GuidanceSetId | undefined) ?? guidance.guidanceSet;
   const overrideText = (id: string) =>
@@ -112,6 +128,12 @@ export default function ClubSettings({ loaderData, actionData }: Route.Component
             : loaderData.carClasses
         }
         errors={classesSent ? actionData?.errors?.carClasses : undefined}
+        busy={busy}
+      />
+      <MarshalSettingsForm
+        saved={loaderData.marshal}
+        values={marshalSent ? (actionData?.values as Record<string, string>) : undefined}
+        errors={marshalSent ? actionData?.errors : undefined}
         busy={busy}
       />
       <section aria-labelledby="guidance-heading" className="space-y-4">

@@ -14,6 +14,7 @@ import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { readerChoice } from "~/cars/reader-choice.server";
 import { readingFor, readingView } from "~/layouts/reading.server";
 import { VersionBanner } from "~/components/publishing/version-banner";
+import { RiskSheetLink } from "~/components/risk/risk-sheet-link";
 import {
   changeLayoutStatus,
   deleteLayout,
@@ -132,6 +133,13 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
         {[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}
       </FormMessage>
       <VersionBanner layoutId={layout.id} reading={reading} isDirector={isDirector} />
+      <RiskSheetLink
+        layoutId={layout.id}
+        query={{
+          ...analysis.version,
+          class: layout.carClasses.includes(analysis.classId) ? analysis.classId : undefined,
+        }}
+      />
       <LayoutAnalysisSection data={analysis} layoutName={layout.name} />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <section

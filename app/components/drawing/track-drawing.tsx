@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { SPEED_BINS } from "~/lib/editor/speed-scale";
@@ -19,6 +20,10 @@ type Props = {
   jumpHref: (sectionId: string) => string;
   title: string;
   classLabel: string;
+  /** More plan points the drawing must hold (a zone's far end), m. */
+  extraPoints?: readonly [number, number][];
+  /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen: `under` below the track, `over` above it and below the marks, `top` last. */
+  layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode; top?: ReactNode };
 };
 
 /**
@@ -30,7 +35,17 @@ type Props = {
  * label placer the editor's canvas uses too (drawing-labels.ts), so none overlaps another or is cut
  * off at the edge.
  */
-export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, classLabel }: Props) {
+export function TrackDrawing({
+  overlay,
+  site,
+  numbers,
+  names,
+  jumpHref,
+  title,
+  classLabel,
+  extraPoints = [],
+  layers,
+}: Props) {
   const { line, speedRange } = overlay;
   const pts: [number, number][] = line.x.map((x, i) => [x, line.y[i]]);
   const others: [number, number][] = [
@@ -38,7 +53,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
     ...site.marshalPoints.map((m) => [m.x, m.y] as [number, number]),
     ...(site.driverStand ? [[site.driverStand.x, site.driverStand.y] as [number, number]] : []),
   ];
-  const box = extent([...pts, ...others], site.trackWidth + 2);
+  const box = extent([...pts, ...others, ...extraPoints], site.trackWidth + 2);
   const w = box.maxX - box.minX;
   const h = box.maxY - box.minY;
   const viewBox = `${box.minX.toFixed(2)} ${(-box.maxY).toFixed(2)} ${w.toFixed(2)} ${h.toFixed(2)}`;
@@ -69,6 +84,7 @@ export function TrackDrawing({ overlay, site, numbers, names, jumpHref, title, c
             jumpHref={jumpHref}
             pen={pen}
             box={box}
+            layers={layers}
           />
         </svg>
       ))}
@@ -98,16 +114,20 @@ function PlanParts({
   jumpHref,
   pen,
   box,
-}: Pick<Props, "overlay" | "site" | "numbers" | "names" | "jumpHref"> & {
+  layers,
+}: Pick<Props, "overlay" | "site" | "numbers" | "names" | "jumpHref" | "layers"> & {
   pts: [number, number][];
   pen: Pen;
   box: Extent;
 }) {
   const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
+  const extra = layers?.(pen);
   return (
     <>
+      {extra?.under}
       <TrackLines overlay={overlay} site={site} pts={pts} labels={labels} pen={pen} />
       <StartAndSpeeds pts={pts} trackWidth={site.trackWidth} labels={labels} pen={pen} />
+      {extra?.over}
       <SiteMarks site={site} labels={labels} pen={pen} />
       <JumpMarks
         jumps={overlay.jumps}
@@ -117,6 +137,7 @@ function PlanParts({
         labels={labels}
         pen={pen}
       />
+      {extra?.top}
     </>
   );
 }

@@ -4,6 +4,7 @@ import { changeSectionKind } from "~/lib/editor/section-ops";
 import type { LayoutSection } from "~/analysis";
 import { AnalysisPanel } from "./analysis-panel";
 import { HelpPanel } from "./help-panel";
+import { MarshalPlanPanel } from "./marshal-plan-panel";
 import { Panel } from "./panel";
 import { PhotoPanel } from "./photo-panel";
 import { SectionPanel } from "./section-panel";
@@ -108,6 +109,9 @@ export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }
           onSelect={select}
           onGestureEnd={endGesture}
         />
+      </Panel>
+      <Panel title="Marshal points: warnings and suggestions" open={state.selection?.kind === "marshal"}>
+        <MarshalPlanPanel layoutId={layoutId} doc={doc} onChange={change} />
       </Panel>
       <Panel title="Site photo" open={tools.mode === "calibrate" || state.selection?.kind === "photo"}>
         <PhotoPanel
