@@ -82,7 +82,7 @@ export async function pageAnalysis(
   }
   const cars = classes.map((c) => ({ value: c.classId, label: c.label, own: false }));
   const base = { document, classId, skill, classes, problems, car: classId, cars };
-  return withResult(base, () => analyseStoredLayout(layout, { skill }));
+  return withResult(base, () => analyseStoredLayout(layout, { skill, draft: document }));
 }
 
 /** The analysis of the version read with the reader's choice (also the share link's pages). */
@@ -110,6 +110,8 @@ export async function versionAnalysis(
       classIds: own ? [...document.carClasses, own.classId] : undefined,
       cars: own ? { [own.classId]: own.car } : undefined,
       saved: savedSource(reading),
+      // The document is read once: a miss analyses the one the reading holds.
+      draft: reading.kind === "draft" ? document : undefined,
     }),
   );
 }

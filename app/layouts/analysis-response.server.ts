@@ -2,7 +2,7 @@
  * JSON answers of the analysis API: the body text made once per memo entry, the cache header,
  * 400 answers that name the field, 422 over the analysis budget, 429 and 503 when busy.
  */
-import type { CachedBody } from "~/analysis-cache.server";
+import type { CachedBody } from "~/layouts/analysis-memo.server";
 import type { LayoutIssue } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import { AnalysisInputError } from "./analysis.server";

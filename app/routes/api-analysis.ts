@@ -1,6 +1,6 @@
 import type { Route } from "./+types/api-analysis";
 import { requireLayoutAccess, requireUser } from "~/auth/permissions.server";
-import { cachedBody } from "~/analysis-cache.server";
+import { cachedBody } from "~/layouts/analysis-memo.server";
 import type { ClubGuidance } from "~/clubs/guidance.server";
 import { loadClubGuidance } from "~/clubs/guidance.server";
 import { carParam } from "~/cars/reader-choice.server";

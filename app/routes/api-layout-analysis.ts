@@ -1,5 +1,5 @@
 import type { Route } from "./+types/api-layout-analysis";
-import { cachedBody } from "~/analysis-cache.server";
+import { cachedBody } from "~/layouts/analysis-memo.server";
 import { carParam } from "~/cars/reader-choice.server";
 import { analyseStoredLayout, overlayFor, parseSkill } from "~/layouts/analysis.server";
 import { countAnalysisRequest } from "~/layouts/analysis-rate.server";
