@@ -11,6 +11,7 @@ export const meta: Route.MetaFunction = ({ data }) => [
 /**
  * Any member who may see the layout, at the version they read (marshals and drivers: the race-day
  * version or `?version=n` of a published one; 404 otherwise), opening with their car and skill.
+ * The document is read once; the browser asks the analysis API's cached GET for the overlay.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId, "member");
@@ -22,6 +23,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     layout: { id: layout.id, name: layout.name, status: layout.status },
     document: reading.document,
     canEdit: role === "director",
+    shown: {
+      version: layout.version,
+      read: reading.kind === "draft" ? null : reading.number,
+      query: reading.query,
+    },
     choice: { car: choice.car, skill: choice.skill, cars: choice.options, problems: choice.problems },
   };
 }

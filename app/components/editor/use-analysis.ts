@@ -1,8 +1,12 @@
 /**
- * Live analysis while editing: a moment after the drawing stops changing, the draft document goes
- * to POST /api/analysis; the last overlay stays on screen while a newer one is worked out. A plain
- * abortable fetch rather than a router fetcher (docs/decisions/0501-analysis-requests-outside-the-router.md):
- * a failed request must never replace the editor with an error page.
+ * The analysis overlay in the browser, asked for with a plain abortable fetch rather than a router
+ * fetcher (docs/decisions/0501-analysis-requests-outside-the-router.md): a failed request must never
+ * replace the page with an error page. Both hooks ask only for the overlay, which is all they draw.
+ * - `useAnalysis` (the editor): a moment after the drawing stops changing, the draft document goes
+ *   to POST /api/analysis; the last overlay stays on screen while a newer one is worked out.
+ * - `useStoredAnalysis` (the read-only plan): the saved layout's overlay from the cached
+ *   GET /api/layouts/:id/analysis (ETag: the browser's repeat is a 304), without sending the
+ *   document back.
  */
 import { useEffect, useRef, useState } from "react";
 import type { AnalysisOverlay, SkillLevel } from "~/analysis";
@@ -52,6 +56,7 @@ export function useAnalysis(
             ...(classId?.startsWith("profile:") ? { car: classId } : { classId }),
             skill,
             layoutId,
+            only: "overlay",
           }),
           credentials: "same-origin",
           signal: controller.signal,
@@ -90,6 +95,85 @@ export function useAnalysis(
   }, [doc, classId, skill, layoutId, endpoint]);
 
   return { overlay: result?.overlay ?? null, overlayDoc: result?.doc ?? null, status };
+}
+
+/**
+ * The address of a saved layout's overlay: the car (a class id or "profile:<id>"), the skill and
+ * the version read (the reading's query, e.g. `{ version: "6" }`; {} for the reader's default).
+ */
+export function storedAnalysisUrl(
+  layoutId: string,
+  car: string | undefined,
+  skill: Skill,
+  version: Readonly<Record<string, string>> = {},
+): string {
+  const query = new URLSearchParams({ ...version, ...(car ? { car } : {}), skill, only: "overlay" });
+  return `/api/layouts/${encodeURIComponent(layoutId)}/analysis?${query}`;
+}
+
+type StoredAnswer = {
+  overlay?: AnalysisOverlay;
+  version?: number;
+  readVersion?: number | null;
+  error?: string;
+  issues?: { path: string; message: string }[];
+} | null;
+
+/**
+ * The saved layout's overlay for a car and skill, from the analysis API's cached GET.
+ * @param shown the version the page shows: the layout's version for a draft, or the saved
+ *   version's number read (`read`, null for the draft); an answer for another one says to reload.
+ */
+export function useStoredAnalysis(
+  layoutId: string,
+  shown: { version: number; read: number | null; query?: Readonly<Record<string, string>> },
+  car: string | undefined,
+  skill: Skill,
+) {
+  const [overlay, setOverlay] = useState<AnalysisOverlay | null>(null);
+  const [status, setStatus] = useState<AnalysisStatus>({ state: "idle", message: null });
+  const url = storedAnalysisUrl(layoutId, car, skill, shown.query);
+  const { version, read } = shown;
+
+  useEffect(() => {
+    const controller = new AbortController();
+    (async () => {
+      setStatus((s) => ({ state: "working", message: s.message }));
+      try {
+        const response = await fetch(url, {
+          headers: { Accept: "application/json" },
+          credentials: "same-origin",
+          signal: controller.signal,
+        });
+        const body = (await response.json().catch(() => null)) as StoredAnswer;
+        if (!response.ok || !body?.overlay) {
+          setStatus({ state: "failed", message: failure(response.status, body) });
+          return;
+        }
+        const same = read === null ? body.version === version : body.readVersion === read;
+        if (!same) {
+          setOverlay(null);
+          setStatus({
+            state: "failed",
+            message:
+              "The layout was changed after this page was opened: reload the page to see the analysis.",
+          });
+          return;
+        }
+        setOverlay(body.overlay);
+        setStatus({ state: "ready", message: null });
+      } catch (error) {
+        if (controller.signal.aborted) return;
+        setStatus({
+          state: "failed",
+          message: `The analysis could not be reached (${(error as Error).message}). Reload the page to try again.`,
+        });
+      }
+    })();
+    return () => controller.abort();
+  }, [url, version, read]);
+
+  return { overlay, status };
 }
 
 function failure(

@@ -1,6 +1,7 @@
 /**
  * The read-only plan for marshals and drivers (and directors who only want to look): the same
- * canvas without handles or editing panels, with the live analysis, its legend and the jump list.
+ * canvas without handles or editing panels, with the saved layout's analysis (from the analysis
+ * API's cached GET, not by sending the document back), its legend and the jump list.
  */
 import { useMemo, useState } from "react";
 import { Link } from "react-router";
@@ -15,7 +16,7 @@ import { DrawingTitle, photoUrl } from "~/components/drawing/drawing-title";
 import { Panel } from "~/components/editor/panel";
 import { describeSection } from "~/components/editor/sections-list";
 import { LazyDrawingCanvas } from "~/components/editor/lazy-drawing-canvas";
-import { useAnalysis, type Skill } from "~/components/editor/use-analysis";
+import { useStoredAnalysis, type Skill } from "~/components/editor/use-analysis";
 
 const noop = () => {};
 
@@ -24,11 +25,13 @@ export interface DrawingViewerProps {
   layout: { id: string; name: string; status: string };
   document: LayoutDocument;
   canEdit: boolean;
+  /** The version shown: the layout's version, the saved version's number read (null: the draft) and its query. */
+  shown: { version: number; read: number | null; query: Record<string, string> };
   /** The reader's car (a class id or "profile:<id>") and skill to open with, and the cars offered. */
   choice?: { car: string; skill: Skill; cars: { value: string; label: string; own: boolean }[] };
 }
 
-export function DrawingViewer({ club, layout, document: doc, canEdit, choice }: DrawingViewerProps) {
+export function DrawingViewer({ club, layout, document: doc, canEdit, choice, shown }: DrawingViewerProps) {
   const sections = useMemo(() => resolveSections(doc), [doc]);
   const closure = useMemo(() => closureError(sections, startPose(doc)), [sections, doc]);
   const [selection, setSelection] = useState<Selection>(null);
@@ -36,7 +39,7 @@ export function DrawingViewer({ club, layout, document: doc, canEdit, choice }: 
   const [classId, setClassId] = useState<string | undefined>(choice?.car ?? doc.carClasses[0]);
   const [skill, setSkill] = useState<Skill>(choice?.skill ?? "club");
   const [fitRequest, setFitRequest] = useState(0);
-  const analysis = useAnalysis(doc, classId, skill, layout.id);
+  const analysis = useStoredAnalysis(layout.id, shown, classId, skill);
   const selected = selection?.kind === "section" ? selection.index : null;
   return (
     <div className="space-y-3">
