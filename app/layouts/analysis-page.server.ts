@@ -19,6 +19,8 @@ import {
   parseSkill,
   type LayoutRef,
 } from "./analysis.server";
+import { markUnchanging } from "~/lib/html-cache.server";
+import { analysisMemo } from "./analysis-memo.server";
 import { loadLayoutDocument } from "./documents.server";
 import { savedSource, type Reading } from "./reading.server";
 
@@ -123,26 +125,34 @@ async function withResult(
   const { classId, skill } = base;
   try {
     const run = await analyse();
-    const a = run.analysis;
-    const chosen = a.classes.find((c) => c.classId === classId) ?? a.classes[0];
-    const summary: SummaryData = {
-      lapLength: a.lapLength,
-      closure: a.closure,
-      trackWidth: a.trackWidth,
-      startStraight: a.startStraight,
-      note: a.note,
-      rules: a.rules,
-      classes: a.classes.map(({ classId: id, label, lapTime, speed, cannotClear, tightTurns }) => ({
-        classId: id,
-        label,
-        lapTime,
-        speed,
-        cannotClear,
-        tightTurns,
-      })),
-    };
-    const overlay = compactOverlay(overlayFor(run, chosen.classId, skill));
-    return { ...base, result: { ok: true, summary, chosen, overlay, hit: run.hit } };
+    // Made once per memo entry, class and skill; marked unchanging so page keys hash them once.
+    const made = analysisMemo.made(run.entry, `page:${classId}:${skill}`, () => {
+      const a = run.analysis;
+      const chosen = a.classes.find((c) => c.classId === classId) ?? a.classes[0];
+      const summary: SummaryData = {
+        lapLength: a.lapLength,
+        closure: a.closure,
+        trackWidth: a.trackWidth,
+        startStraight: a.startStraight,
+        note: a.note,
+        rules: a.rules,
+        classes: a.classes.map(({ classId: id, label, lapTime, speed, cannotClear, tightTurns }) => ({
+          classId: id,
+          label,
+          lapTime,
+          speed,
+          cannotClear,
+          tightTurns,
+        })),
+      };
+      const overlay = compactOverlay(overlayFor(run, chosen.classId, skill));
+      return {
+        summary: markUnchanging(summary),
+        chosen: markUnchanging(chosen),
+        overlay: markUnchanging(overlay),
+      };
+    });
+    return { ...base, result: { ok: true, ...made, hit: run.hit } };
   } catch (error) {
     if (error instanceof AnalysisInputError)
       return { ...base, result: { ok: false, message: `The layout cannot be analysed: ${error.message}.` } };

@@ -8,6 +8,9 @@ import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { jumpViewData } from "~/layouts/jump-view.server";
 import { readingFor } from "~/layouts/reading.server";
 
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
+
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Layout"} · Loftline` },
 ];

@@ -24,6 +24,9 @@ import { parseForm } from "~/lib/forms";
 import { formValues } from "~/clubs/form-values.server";
 import { layoutActionSchema, LIST_FIELDS } from "~/lib/schemas/layouts";
 
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
+
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.layout.name ?? "Layout"} · Loftline` },
 ];
