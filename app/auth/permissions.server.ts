@@ -1,6 +1,6 @@
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { redirect } from "react-router";
-import { getDb } from "~/db/client.server";
+import { getDb, type Database } from "~/db/client.server";
 import { type Role } from "~/lib/roles";
 import { clubs, layouts, memberships, users } from "~/db/schema";
 import { canSeeLayout, roleAllows } from "~/lib/roles";
@@ -8,8 +8,24 @@ import { getSession } from "./session.server";
 
 export type SessionUser = { id: string; email: string; name: string };
 
+/**
+ * Users already read for a GET request: the root, the frame and the page each ask for the same
+ * request's user, which is read once (no action can change it within a GET).
+ */
+const usersOfRequests = new WeakMap<Request, Promise<SessionUser | null>>();
+
 /** The signed-in user, or null. */
-export async function getUser(request: Request): Promise<SessionUser | null> {
+export function getUser(request: Request): Promise<SessionUser | null> {
+  if (request.method !== "GET") return readUser(request);
+  let user = usersOfRequests.get(request);
+  if (!user) {
+    user = readUser(request);
+    usersOfRequests.set(request, user);
+  }
+  return user;
+}
+
+async function readUser(request: Request): Promise<SessionUser | null> {
   const session = await getSession(request);
   const userId = session.get("userId");
   if (!userId) return null;
@@ -79,12 +95,38 @@ export async function requireLayoutAccess(
   opts: { api?: boolean } = {},
 ): Promise<LayoutAccess> {
   const user = await requireUser(request, opts);
+  const [row] = layoutId ? await (await layoutQuery()).execute({ layoutId, userId: user.id }) : [];
+  // The same answers, in the same order, as requireClubRole after reading the layout.
+  if (!row) throw deny(404, "No such layout.", opts);
+  if (!row.club) throw deny(404, "No such club.", opts);
+  if (!row.role) throw deny(403, "You are not a member of this club.", opts);
+  if (need === "director" && !roleAllows(row.role, "manage"))
+    throw deny(403, "Only the club's directors can do this.", opts);
+  if (!canSeeLayout(row.role, row.layout.status)) throw deny(404, "No such layout.", opts);
+  return { user, club: row.club, role: row.role, layout: row.layout };
+}
+
+/** The layout, its club and the user's membership in one round trip (a reader page's first query). */
+function buildLayoutQuery(db: Database) {
+  return db
+    .select({ layout: layouts, club: { id: clubs.id, name: clubs.name }, role: memberships.role })
+    .from(layouts)
+    .leftJoin(clubs, eq(clubs.id, layouts.clubId))
+    .leftJoin(
+      memberships,
+      and(eq(memberships.clubId, layouts.clubId), eq(memberships.userId, sql.placeholder("userId"))),
+    )
+    .where(eq(layouts.id, sql.placeholder("layoutId")))
+    .prepare();
+}
+
+let prepared: { db: Database; query: ReturnType<typeof buildLayoutQuery> } | undefined;
+
+async function layoutQuery() {
   const db = await getDb();
-  const [layout] = layoutId ? await db.select().from(layouts).where(eq(layouts.id, layoutId)) : [];
-  if (!layout) throw deny(404, "No such layout.", opts);
-  const access = await requireClubRole(request, layout.clubId, need, opts);
-  if (!canSeeLayout(access.role, layout.status)) throw deny(404, "No such layout.", opts);
-  return { ...access, user, layout };
+  // A new database handle (tests, scripts) needs the query prepared again.
+  if (!prepared || prepared.db !== db) prepared = { db, query: buildLayoutQuery(db) };
+  return prepared.query;
 }
 
 function deny(status: number, message: string, opts: { api?: boolean }) {
