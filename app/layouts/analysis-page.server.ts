@@ -8,7 +8,6 @@ import type { ClassAnalysis, SkillLevel } from "~/analysis";
 import type { SummaryData } from "~/components/analysis/summary-data";
 import { carPreset, SKILL_LEVELS, wordList } from "~/analysis";
 import type { layouts } from "~/db/schema";
-import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import type { CarOption, ReaderChoice } from "~/cars/reader-choice.server";
@@ -20,6 +19,7 @@ import {
   type LayoutRef,
 } from "./analysis.server";
 import { markUnchanging } from "~/lib/html-cache.server";
+import { packOverlay, type PackedOverlay } from "~/lib/packed-line";
 import { analysisMemo } from "./analysis-memo.server";
 import { loadLayoutDocument } from "./documents.server";
 import { savedSource, type Reading } from "./reading.server";
@@ -38,18 +38,8 @@ export interface PageAnalysis {
   problems: string[];
   /** The analysis, or why it could not be made. */
   result:
-    | { ok: true; summary: SummaryData; chosen: ClassAnalysis; overlay: AnalysisOverlay; hit: boolean }
+    | { ok: true; summary: SummaryData; chosen: ClassAnalysis; overlay: PackedOverlay; hit: boolean }
     | { ok: false; message: string };
-}
-
-const round2 = (v: number) => Math.round(v * 100) / 100;
-
-/** The overlay with plan coordinates and speeds to the centimetre (a smaller page, same drawing). */
-function compactOverlay(o: AnalysisOverlay): AnalysisOverlay {
-  return {
-    ...o,
-    line: { ...o.line, x: o.line.x.map(round2), y: o.line.y.map(round2), speed: o.line.speed.map(round2) },
-  };
 }
 
 /**
@@ -145,7 +135,8 @@ async function withResult(
           tightTurns,
         })),
       };
-      const overlay = compactOverlay(overlayFor(run, chosen.classId, skill));
+      // The line as one text to the centimetre: the page's components get it unpacked (app/lib/packed-line.ts).
+      const overlay = packOverlay(overlayFor(run, chosen.classId, skill));
       return {
         summary: markUnchanging(summary),
         chosen: markUnchanging(chosen),

@@ -1,3 +1,5 @@
+import { useMemo } from "react";
+import { withUnpackedOverlay } from "~/lib/packed-line";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/layout-page";
 import { requireLayoutAccess } from "~/auth/permissions.server";
@@ -116,6 +118,8 @@ export async function action({ request, params }: Route.ActionArgs) {
 
 export default function LayoutPage({ loaderData, actionData }: Route.ComponentProps) {
   const { club, layout, isDirector, createdByName, analysis, reading } = loaderData;
+  // The racing line travels as one text (app/lib/packed-line.ts): unpacked once per data.
+  const unpacked = useMemo(() => withUnpackedOverlay(analysis), [analysis]);
   const errors: FieldErrors | undefined = actionData?.errors;
   const values = actionData?.values;
   return (
@@ -135,7 +139,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
         {[...(errors?.form ?? []), ...(errors?.version ?? []), ...(errors?.intent ?? [])].join(" ")}
       </FormMessage>
       <VersionBanner layoutId={layout.id} reading={reading} isDirector={isDirector} />
-      <LayoutAnalysisSection data={analysis} layoutName={layout.name} />
+      <LayoutAnalysisSection data={unpacked} layoutName={layout.name} />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <section
           aria-labelledby="about"

@@ -1,3 +1,5 @@
+import { useMemo } from "react";
+import { withUnpackedOverlay } from "~/lib/packed-line";
 import { data } from "react-router";
 import type { Route } from "./+types/shared-layout";
 import { parseJumpSort } from "~/components/analysis/jump-sort";
@@ -53,11 +55,13 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
 }
 
 export default function SharedLayout({ loaderData: d, params }: Route.ComponentProps) {
+  // The racing line travels as one text (app/lib/packed-line.ts): unpacked once per data.
+  const unpacked = useMemo(() => withUnpackedOverlay(d.analysis), [d.analysis]);
   return (
     <article className="space-y-8">
       <SharedHeader layoutName={d.layoutName} clubName={d.clubName} publication={d.publication} />
       <LayoutAnalysisSection
-        data={d.analysis}
+        data={unpacked}
         layoutName={d.layoutName}
         shared={{ base: `/shared/${params.token}` }}
       />
