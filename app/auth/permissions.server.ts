@@ -1,4 +1,6 @@
 import { and, eq, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/sqlite-core";
+import { readGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { redirect } from "react-router";
 import { getDb, type Database } from "~/db/client.server";
 import { type Role } from "~/lib/roles";
@@ -82,6 +84,10 @@ export async function requireClubRole(
 
 export type LayoutAccess = ClubAccess & {
   layout: typeof layouts.$inferSelect;
+  /** The club's track guidance, read in the same query (the analysis needs it). */
+  guidance: ClubGuidance;
+  /** The name of the member who created the layout, if still known. */
+  creatorName: string | null;
 };
 
 /**
@@ -103,15 +109,36 @@ export async function requireLayoutAccess(
   if (need === "director" && !roleAllows(row.role, "manage"))
     throw deny(403, "Only the club's directors can do this.", opts);
   if (!canSeeLayout(row.role, row.layout.status)) throw deny(404, "No such layout.", opts);
-  return { user, club: row.club, role: row.role, layout: row.layout };
+  const guidance = readGuidance({
+    guidanceSet: row.club.guidanceSet,
+    guidanceOverrides: row.club.guidanceOverrides,
+  });
+  const club = { id: row.club.id, name: row.club.name };
+  return { user, club, role: row.role, layout: row.layout, guidance, creatorName: row.creatorName };
 }
 
-/** The layout, its club and the user's membership in one round trip (a reader page's first query). */
+const creators = alias(users, "creators");
+
+/**
+ * The layout, its club (with its track guidance), the user's membership and the creator's name in
+ * one round trip (a reader page's first query).
+ */
 function buildLayoutQuery(db: Database) {
   return db
-    .select({ layout: layouts, club: { id: clubs.id, name: clubs.name }, role: memberships.role })
+    .select({
+      layout: layouts,
+      club: {
+        id: clubs.id,
+        name: clubs.name,
+        guidanceSet: clubs.guidanceSet,
+        guidanceOverrides: clubs.guidanceOverrides,
+      },
+      role: memberships.role,
+      creatorName: creators.name,
+    })
     .from(layouts)
     .leftJoin(clubs, eq(clubs.id, layouts.clubId))
+    .leftJoin(creators, eq(creators.id, layouts.createdBy))
     .leftJoin(
       memberships,
       and(eq(memberships.clubId, layouts.clubId), eq(memberships.userId, sql.placeholder("userId"))),

@@ -113,8 +113,22 @@ export function sessionStorage() {
   return storage;
 }
 
+const sessionsOfRequests = new WeakMap<Request, ReturnType<typeof readSession>>();
+
+const readSession = (request: Request) => sessionStorage().getSession(request.headers.get("Cookie"));
+
+/**
+ * The request's session. A GET request's loaders (the root, the frame, the page) share one read
+ * of it; any other request reads it afresh.
+ */
 export async function getSession(request: Request) {
-  return sessionStorage().getSession(request.headers.get("Cookie"));
+  if (request.method !== "GET") return readSession(request);
+  let session = sessionsOfRequests.get(request);
+  if (!session) {
+    session = readSession(request);
+    sessionsOfRequests.set(request, session);
+  }
+  return session;
 }
 
 /**

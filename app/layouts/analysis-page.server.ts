@@ -11,6 +11,7 @@ import type { layouts } from "~/db/schema";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import type { CarOption, ReaderChoice } from "~/cars/reader-choice.server";
+import type { ClubGuidance } from "~/clubs/guidance.server";
 import {
   AnalysisInputError,
   analyseStoredLayout,
@@ -50,9 +51,9 @@ export interface PageAnalysis {
 export async function pageAnalysis(
   layout: LayoutRow,
   query: URLSearchParams,
-  ctx?: { reading: Reading; choice: ReaderChoice },
+  ctx?: { reading: Reading; choice: ReaderChoice; guidance?: ClubGuidance },
 ): Promise<PageAnalysis> {
-  if (ctx) return versionAnalysis(layout, ctx.reading, ctx.choice);
+  if (ctx) return versionAnalysis(layout, ctx.reading, ctx.choice, ctx.guidance);
   const { document } = await loadLayoutDocument(layout);
   const problems: string[] = [];
   const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
@@ -82,6 +83,7 @@ export async function versionAnalysis(
   layout: LayoutRef,
   reading: Pick<Reading, "kind" | "number" | "document">,
   choice: Omit<ReaderChoice, "label">,
+  guidance?: ClubGuidance,
 ): Promise<PageAnalysis> {
   const { document } = reading;
   const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
@@ -99,6 +101,7 @@ export async function versionAnalysis(
   return withResult(base, () =>
     analyseStoredLayout(layout, {
       skill: choice.skill,
+      guidance,
       classIds: own ? [...document.carClasses, own.classId] : undefined,
       cars: own ? { [own.classId]: own.car } : undefined,
       saved: savedSource(reading),
@@ -139,7 +142,8 @@ async function withResult(
       const overlay = packOverlay(overlayFor(run, chosen.classId, skill));
       return {
         summary: markUnchanging(summary),
-        chosen: markUnchanging(chosen),
+        // The plan's speeds travel in the overlay; the page shows the class's label and jumps.
+        chosen: markUnchanging({ ...chosen, lineSpeed: [] }),
         overlay: markUnchanging(overlay),
       };
     });

@@ -22,11 +22,11 @@ export const meta: Route.MetaFunction = ({ data }) => [
  * the version read.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId);
+  const { layout, club, role, user, guidance } = await requireLayoutAccess(request, params.layoutId);
   const query = new URL(request.url).searchParams;
   const reading = await readingFor(layout, role, query);
   const choice = await readerChoice(user.id, query, reading.document.carClasses);
-  const page = await pageAnalysis(layout, query, { reading, choice });
+  const page = await pageAnalysis(layout, query, { reading, choice, guidance });
   const jump = jumpViewData(page, params.sectionId, choice.own?.car);
   return data(
     { club, layout: { id: layout.id, name: layout.name }, version: reading.query, ...jump },

@@ -16,12 +16,7 @@ import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { readerChoice } from "~/cars/reader-choice.server";
 import { readingFor, readingView } from "~/layouts/reading.server";
 import { VersionBanner } from "~/components/publishing/version-banner";
-import {
-  changeLayoutStatus,
-  deleteLayout,
-  layoutCreatorName,
-  updateLayoutMeta,
-} from "~/layouts/layouts.server";
+import { changeLayoutStatus, deleteLayout, updateLayoutMeta } from "~/layouts/layouts.server";
 import { parseForm } from "~/lib/forms";
 import { formValues } from "~/clubs/form-values.server";
 import { layoutActionSchema, LIST_FIELDS } from "~/lib/schemas/layouts";
@@ -41,12 +36,15 @@ export const meta: Route.MetaFunction = ({ data }) => [
  * is not understood is named on the page (status 400) and the defaults are shown.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId);
+  const { layout, club, role, user, guidance, creatorName } = await requireLayoutAccess(
+    request,
+    params.layoutId,
+  );
   const query = new URL(request.url).searchParams;
   const isDirector = role === "director";
   const reading = await readingFor(layout, role, query);
   const choice = await readerChoice(user.id, query, reading.document.carClasses);
-  const page = await pageAnalysis(layout, query, { reading, choice });
+  const page = await pageAnalysis(layout, query, { reading, choice, guidance });
   const sort = parseJumpSort(query);
   const problems = sort.problem ? [...page.problems, sort.problem] : page.problems;
   const { driverStand, marshalPoints, siteBoundary, trackWidth } = page.document;
@@ -65,7 +63,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     sort,
     result: page.result,
   };
-  const createdByName = await layoutCreatorName(layout.createdBy);
+  const createdByName = creatorName;
   const facts = {
     id: layout.id,
     name: layout.name,
