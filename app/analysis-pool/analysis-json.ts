@@ -28,6 +28,11 @@ export function rememberJson(value: object, bytes: Uint8Array): void {
   made.set(value, bytes);
 }
 
+/** The JSON bytes remembered for this value, if any. */
+export function jsonBytesOf(value: object): Uint8Array | undefined {
+  return made.get(value);
+}
+
 /**
  * UTF-8 JSON of an object's fields with compact numbers; a field whose value has its JSON bytes
  * remembered is spliced in as they are, the others are serialised here.

@@ -1,6 +1,8 @@
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/sqlite-core";
+import { readGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { redirect } from "react-router";
-import { getDb } from "~/db/client.server";
+import { getDb, type Database } from "~/db/client.server";
 import { type Role } from "~/lib/roles";
 import { clubs, layouts, memberships, users } from "~/db/schema";
 import { canSeeLayout, roleAllows } from "~/lib/roles";
@@ -8,8 +10,24 @@ import { getSession } from "./session.server";
 
 export type SessionUser = { id: string; email: string; name: string };
 
+/**
+ * Users already read for a GET request: the root, the frame and the page each ask for the same
+ * request's user, which is read once (no action can change it within a GET).
+ */
+const usersOfRequests = new WeakMap<Request, Promise<SessionUser | null>>();
+
 /** The signed-in user, or null. */
-export async function getUser(request: Request): Promise<SessionUser | null> {
+export function getUser(request: Request): Promise<SessionUser | null> {
+  if (request.method !== "GET") return readUser(request);
+  let user = usersOfRequests.get(request);
+  if (!user) {
+    user = readUser(request);
+    usersOfRequests.set(request, user);
+  }
+  return user;
+}
+
+async function readUser(request: Request): Promise<SessionUser | null> {
   const session = await getSession(request);
   const userId = session.get("userId");
   if (!userId) return null;
@@ -66,6 +84,10 @@ export async function requireClubRole(
 
 export type LayoutAccess = ClubAccess & {
   layout: typeof layouts.$inferSelect;
+  /** The club's track guidance, read in the same query (the analysis needs it). */
+  guidance: ClubGuidance;
+  /** The name of the member who created the layout, if still known. */
+  creatorName: string | null;
 };
 
 /**
@@ -79,12 +101,59 @@ export async function requireLayoutAccess(
   opts: { api?: boolean } = {},
 ): Promise<LayoutAccess> {
   const user = await requireUser(request, opts);
+  const [row] = layoutId ? await (await layoutQuery()).execute({ layoutId, userId: user.id }) : [];
+  // The same answers, in the same order, as requireClubRole after reading the layout.
+  if (!row) throw deny(404, "No such layout.", opts);
+  if (!row.club) throw deny(404, "No such club.", opts);
+  if (!row.role) throw deny(403, "You are not a member of this club.", opts);
+  if (need === "director" && !roleAllows(row.role, "manage"))
+    throw deny(403, "Only the club's directors can do this.", opts);
+  if (!canSeeLayout(row.role, row.layout.status)) throw deny(404, "No such layout.", opts);
+  const guidance = readGuidance({
+    guidanceSet: row.club.guidanceSet,
+    guidanceOverrides: row.club.guidanceOverrides,
+  });
+  const club = { id: row.club.id, name: row.club.name };
+  return { user, club, role: row.role, layout: row.layout, guidance, creatorName: row.creatorName };
+}
+
+const creators = alias(users, "creators");
+
+/**
+ * The layout, its club (with its track guidance), the user's membership and the creator's name in
+ * one round trip (a reader page's first query).
+ */
+function buildLayoutQuery(db: Database) {
+  return db
+    .select({
+      layout: layouts,
+      club: {
+        id: clubs.id,
+        name: clubs.name,
+        guidanceSet: clubs.guidanceSet,
+        guidanceOverrides: clubs.guidanceOverrides,
+      },
+      role: memberships.role,
+      creatorName: creators.name,
+    })
+    .from(layouts)
+    .leftJoin(clubs, eq(clubs.id, layouts.clubId))
+    .leftJoin(creators, eq(creators.id, layouts.createdBy))
+    .leftJoin(
+      memberships,
+      and(eq(memberships.clubId, layouts.clubId), eq(memberships.userId, sql.placeholder("userId"))),
+    )
+    .where(eq(layouts.id, sql.placeholder("layoutId")))
+    .prepare();
+}
+
+let prepared: { db: Database; query: ReturnType<typeof buildLayoutQuery> } | undefined;
+
+async function layoutQuery() {
   const db = await getDb();
-  const [layout] = layoutId ? await db.select().from(layouts).where(eq(layouts.id, layoutId)) : [];
-  if (!layout) throw deny(404, "No such layout.", opts);
-  const access = await requireClubRole(request, layout.clubId, need, opts);
-  if (!canSeeLayout(access.role, layout.status)) throw deny(404, "No such layout.", opts);
-  return { ...access, user, layout };
+  // A new database handle (tests, scripts) needs the query prepared again.
+  if (!prepared || prepared.db !== db) prepared = { db, query: buildLayoutQuery(db) };
+  return prepared.query;
 }
 
 function deny(status: number, message: string, opts: { api?: boolean }) {

@@ -1,5 +1,6 @@
 import { randomBytes } from "node:crypto";
-import { createCookie, createSessionStorage, redirect } from "react-router";
+import { LRUCache } from "lru-cache";
+import { createCookie, createSessionStorage, redirect, type Cookie } from "react-router";
 import { and, eq, gt, lt } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { sessions, users } from "~/db/schema";
@@ -26,6 +27,35 @@ type SessionFlash = { notice: string };
 /** How long a session lasts without signing in again, s (30 days). */
 export const SESSION_MAX_AGE_S = 60 * 60 * 24 * 30;
 
+/**
+ * The cookie with its signature check remembered per cookie header (only the check: the session's
+ * row is read on every request, so signing out still ends every copy of the cookie at once). A
+ * check costs a key import and an HMAC; a page asks several times (docs/decisions/0459).
+ */
+function checkedOnce(cookie: Cookie): Cookie {
+  const checked = new LRUCache<string, { value: unknown }>({ max: 5000 });
+  return {
+    get name() {
+      return cookie.name;
+    },
+    get isSigned() {
+      return cookie.isSigned;
+    },
+    get expires() {
+      return cookie.expires;
+    },
+    async parse(header, options) {
+      if (!header || options) return cookie.parse(header, options);
+      const known = checked.get(header);
+      if (known) return known.value;
+      const value: unknown = await cookie.parse(header);
+      if (typeof value === "string" || value === null) checked.set(header, { value });
+      return value;
+    },
+    serialize: (value, options) => cookie.serialize(value, options),
+  };
+}
+
 let storage: ReturnType<typeof createSessionStorage<SessionData, SessionFlash>> | undefined;
 
 /**
@@ -35,14 +65,16 @@ let storage: ReturnType<typeof createSessionStorage<SessionData, SessionFlash>> 
  */
 export function sessionStorage() {
   storage ??= createSessionStorage<SessionData, SessionFlash>({
-    cookie: createCookie("__loftline", {
-      httpOnly: true,
-      sameSite: "lax",
-      path: "/",
-      secure: config.isProduction && process.env.LOFTLINE_INSECURE_COOKIE !== "1",
-      secrets: [sessionSecret()],
-      maxAge: SESSION_MAX_AGE_S,
-    }),
+    cookie: checkedOnce(
+      createCookie("__loftline", {
+        httpOnly: true,
+        sameSite: "lax",
+        path: "/",
+        secure: config.isProduction && process.env.LOFTLINE_INSECURE_COOKIE !== "1",
+        secrets: [sessionSecret()],
+        maxAge: SESSION_MAX_AGE_S,
+      }),
+    ),
     async createData(data, expires) {
       const db = await getDb();
       const now = Date.now();
@@ -81,8 +113,22 @@ export function sessionStorage() {
   return storage;
 }
 
+const sessionsOfRequests = new WeakMap<Request, ReturnType<typeof readSession>>();
+
+const readSession = (request: Request) => sessionStorage().getSession(request.headers.get("Cookie"));
+
+/**
+ * The request's session. A GET request's loaders (the root, the frame, the page) share one read
+ * of it; any other request reads it afresh.
+ */
 export async function getSession(request: Request) {
-  return sessionStorage().getSession(request.headers.get("Cookie"));
+  if (request.method !== "GET") return readSession(request);
+  let session = sessionsOfRequests.get(request);
+  if (!session) {
+    session = readSession(request);
+    sessionsOfRequests.set(request, session);
+  }
+  return session;
 }
 
 /**

@@ -8,10 +8,10 @@ import type { ClassAnalysis, SkillLevel } from "~/analysis";
 import type { SummaryData } from "~/components/analysis/summary-data";
 import { carPreset, SKILL_LEVELS, wordList } from "~/analysis";
 import type { layouts } from "~/db/schema";
-import type { AnalysisOverlay } from "~/analysis";
 import type { LayoutDocument } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import type { CarOption, ReaderChoice } from "~/cars/reader-choice.server";
+import type { ClubGuidance } from "~/clubs/guidance.server";
 import {
   AnalysisInputError,
   analyseStoredLayout,
@@ -19,6 +19,9 @@ import {
   parseSkill,
   type LayoutRef,
 } from "./analysis.server";
+import { markUnchanging } from "~/lib/html-cache.server";
+import { packOverlay, type PackedOverlay } from "~/lib/packed-line";
+import { analysisMemo } from "./analysis-memo.server";
 import { loadLayoutDocument } from "./documents.server";
 import { savedSource, type Reading } from "./reading.server";
 
@@ -36,18 +39,8 @@ export interface PageAnalysis {
   problems: string[];
   /** The analysis, or why it could not be made. */
   result:
-    | { ok: true; summary: SummaryData; chosen: ClassAnalysis; overlay: AnalysisOverlay; hit: boolean }
+    | { ok: true; summary: SummaryData; chosen: ClassAnalysis; overlay: PackedOverlay; hit: boolean }
     | { ok: false; message: string };
-}
-
-const round2 = (v: number) => Math.round(v * 100) / 100;
-
-/** The overlay with plan coordinates and speeds to the centimetre (a smaller page, same drawing). */
-function compactOverlay(o: AnalysisOverlay): AnalysisOverlay {
-  return {
-    ...o,
-    line: { ...o.line, x: o.line.x.map(round2), y: o.line.y.map(round2), speed: o.line.speed.map(round2) },
-  };
 }
 
 /**
@@ -58,9 +51,9 @@ function compactOverlay(o: AnalysisOverlay): AnalysisOverlay {
 export async function pageAnalysis(
   layout: LayoutRow,
   query: URLSearchParams,
-  ctx?: { reading: Reading; choice: ReaderChoice },
+  ctx?: { reading: Reading; choice: ReaderChoice; guidance?: ClubGuidance },
 ): Promise<PageAnalysis> {
-  if (ctx) return versionAnalysis(layout, ctx.reading, ctx.choice);
+  if (ctx) return versionAnalysis(layout, ctx.reading, ctx.choice, ctx.guidance);
   const { document } = await loadLayoutDocument(layout);
   const problems: string[] = [];
   const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
@@ -82,7 +75,7 @@ export async function pageAnalysis(
   }
   const cars = classes.map((c) => ({ value: c.classId, label: c.label, own: false }));
   const base = { document, classId, skill, classes, problems, car: classId, cars };
-  return withResult(base, () => analyseStoredLayout(layout, { skill }));
+  return withResult(base, () => analyseStoredLayout(layout, { skill, draft: document }));
 }
 
 /** The analysis of the version read with the reader's choice (also the share link's pages). */
@@ -90,6 +83,7 @@ export async function versionAnalysis(
   layout: LayoutRef,
   reading: Pick<Reading, "kind" | "number" | "document">,
   choice: Omit<ReaderChoice, "label">,
+  guidance?: ClubGuidance,
 ): Promise<PageAnalysis> {
   const { document } = reading;
   const classes = document.carClasses.map((id) => ({ classId: id, label: carPreset(id)?.label ?? id }));
@@ -107,9 +101,12 @@ export async function versionAnalysis(
   return withResult(base, () =>
     analyseStoredLayout(layout, {
       skill: choice.skill,
+      guidance,
       classIds: own ? [...document.carClasses, own.classId] : undefined,
       cars: own ? { [own.classId]: own.car } : undefined,
       saved: savedSource(reading),
+      // The document is read once: a miss analyses the one the reading holds.
+      draft: reading.kind === "draft" ? document : undefined,
     }),
   );
 }
@@ -121,26 +118,36 @@ async function withResult(
   const { classId, skill } = base;
   try {
     const run = await analyse();
-    const a = run.analysis;
-    const chosen = a.classes.find((c) => c.classId === classId) ?? a.classes[0];
-    const summary: SummaryData = {
-      lapLength: a.lapLength,
-      closure: a.closure,
-      trackWidth: a.trackWidth,
-      startStraight: a.startStraight,
-      note: a.note,
-      rules: a.rules,
-      classes: a.classes.map(({ classId: id, label, lapTime, speed, cannotClear, tightTurns }) => ({
-        classId: id,
-        label,
-        lapTime,
-        speed,
-        cannotClear,
-        tightTurns,
-      })),
-    };
-    const overlay = compactOverlay(overlayFor(run, chosen.classId, skill));
-    return { ...base, result: { ok: true, summary, chosen, overlay, hit: run.hit } };
+    // Made once per memo entry, class and skill; marked unchanging so page keys hash them once.
+    const made = analysisMemo.made(run.entry, `page:${classId}:${skill}`, () => {
+      const a = run.analysis;
+      const chosen = a.classes.find((c) => c.classId === classId) ?? a.classes[0];
+      const summary: SummaryData = {
+        lapLength: a.lapLength,
+        closure: a.closure,
+        trackWidth: a.trackWidth,
+        startStraight: a.startStraight,
+        note: a.note,
+        rules: a.rules,
+        classes: a.classes.map(({ classId: id, label, lapTime, speed, cannotClear, tightTurns }) => ({
+          classId: id,
+          label,
+          lapTime,
+          speed,
+          cannotClear,
+          tightTurns,
+        })),
+      };
+      // The line as one text to the centimetre: the page's components get it unpacked (app/lib/packed-line.ts).
+      const overlay = packOverlay(overlayFor(run, chosen.classId, skill));
+      return {
+        summary: markUnchanging(summary),
+        // The plan's speeds travel in the overlay; the page shows the class's label and jumps.
+        chosen: markUnchanging({ ...chosen, lineSpeed: [] }),
+        overlay: markUnchanging(overlay),
+      };
+    });
+    return { ...base, result: { ok: true, ...made, hit: run.hit } };
   } catch (error) {
     if (error instanceof AnalysisInputError)
       return { ...base, result: { ok: false, message: `The layout cannot be analysed: ${error.message}.` } };

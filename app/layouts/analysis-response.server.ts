@@ -2,10 +2,25 @@
  * JSON answers of the analysis API: the body text made once per memo entry, the cache header,
  * 400 answers that name the field, 422 over the analysis budget, 429 and 503 when busy.
  */
-import type { CachedBody } from "~/analysis-cache.server";
+import type { CachedBody } from "~/layouts/analysis-memo.server";
 import type { LayoutIssue } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import { AnalysisInputError } from "./analysis.server";
+
+/** What an answer may be narrowed to: `only=overlay` is what the editor and the plan draw. */
+export const ONLY_PARTS = ["overlay"] as const;
+export type OnlyPart = (typeof ONLY_PARTS)[number];
+
+/**
+ * Checks `only` (a query parameter or a JSON field named `field`); undefined when absent.
+ * @throws AnalysisInputError naming the field for anything else.
+ */
+export function parseOnly(value: unknown, field: string): OnlyPart | undefined {
+  if (value === undefined || value === null || value === "") return undefined;
+  if (typeof value === "string" && (ONLY_PARTS as readonly string[]).includes(value))
+    return value as OnlyPart;
+  throw new AnalysisInputError([{ path: field, message: `must be "overlay" or left out` }]);
+}
 
 /** A 400 answer listing every issue, each naming its field. */
 export function badRequest(issues: LayoutIssue[], error?: string): Response {

@@ -1,7 +1,7 @@
 /**
  * Runs the layout analysis for the pages and the API: checks the requested classes and skill,
  * applies the club's track guidance, and goes through the process-wide memo
- * (app/analysis-cache.server.ts) so a repeat costs nothing. The engine runs in the worker pool
+ * (analysis-memo.server.ts) so a repeat costs nothing. The engine runs in the worker pool
  * (app/analysis-pool/pool.server.ts), whose workers keep each jump's costly parts, so an edited
  * draft recomputes only what changed.
  */
@@ -9,14 +9,8 @@ import { carPreset } from "~/analysis";
 import { runAnalysis } from "~/analysis-pool/pool.server";
 import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis";
 import { buildOverlay } from "~/analysis";
-import {
-  canonicalJson,
-  entryByAlias,
-  memoAnalysis,
-  setAlias,
-  type AnalysisInputs,
-  type CacheEntry,
-} from "~/analysis-cache.server";
+import { canonicalJson } from "~/analysis";
+import { analysisMemo, type AnalysisInputs, type MemoEntry } from "./analysis-memo.server";
 import { loadClubGuidance, verdictThresholds, type ClubGuidance } from "~/clubs/guidance.server";
 import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
@@ -56,7 +50,7 @@ export function parseClassId(value: unknown, field: string): string | undefined 
 
 export interface AnalysisRun {
   analysis: LayoutAnalysis;
-  entry: CacheEntry<LayoutAnalysis>;
+  entry: MemoEntry;
   /** True when the memo already held the result. */
   hit: boolean;
 }
@@ -92,7 +86,7 @@ export async function analyseDocument(
     overrides: guidance.overrides,
     ...(guidance.verdict ? { verdict: guidance.verdict } : {}),
   };
-  const { entry, hit } = await memoAnalysis(inputs, () =>
+  const { entry, hit } = await analysisMemo.recall(inputs, () =>
     runAnalysis(
       { ...document, guidance: guidance.guidanceSet },
       {
@@ -135,13 +129,15 @@ export async function analyseStoredLayout(
     cars?: Readonly<Record<string, CarParams>>;
     owner?: string;
     saved?: { number: number; load: () => Promise<LayoutDocument> };
+    /** The working draft's document when the caller has already read it (read once). */
+    draft?: LayoutDocument;
   },
 ): Promise<AnalysisRun & { guidance: ClubGuidance }> {
   const guidance = opts.guidance ?? (await loadClubGuidance(layout.clubId));
   const which = opts.saved ? `saved:${opts.saved.number}` : layout.version;
   const aliasOf = (version: number | string) =>
     canonicalJson([layout.id, version, guidance, opts.classIds ?? "*", opts.skill]);
-  const known = entryByAlias<LayoutAnalysis>(aliasOf(which));
+  const known = analysisMemo.byAlias(aliasOf(which));
   if (known) return { analysis: known.value, entry: known, hit: true, guidance };
   const settings = {
     classIds: opts.classIds,
@@ -152,13 +148,12 @@ export async function analyseStoredLayout(
   };
   if (opts.saved) {
     const run = await analyseDocument(await opts.saved.load(), settings);
-    setAlias(aliasOf(which), run.entry.key);
+    analysisMemo.setAlias(aliasOf(which), run.entry);
     return { ...run, guidance };
   }
-  const row = await fullRow(layout);
-  const { document } = await loadLayoutDocument(row);
+  const document = opts.draft ?? (await loadLayoutDocument(await fullRow(layout))).document;
   const run = await analyseDocument(document, settings);
-  setAlias(aliasOf(row.version), run.entry.key);
+  analysisMemo.setAlias(aliasOf(layout.version), run.entry);
   return { ...run, guidance };
 }
 
@@ -168,5 +163,6 @@ export function overlayFor(
   classId: string | undefined,
   skill: SkillLevel,
 ): AnalysisOverlay {
-  return buildOverlay(run.analysis, classId ?? run.analysis.classes[0].classId, skill);
+  const id = classId ?? run.analysis.classes[0].classId;
+  return analysisMemo.made(run.entry, `overlay:${id}:${skill}`, () => buildOverlay(run.analysis, id, skill));
 }

@@ -79,7 +79,7 @@ export async function compareVersions(
   const load = async (v: number | "draft") => {
     if (v === "draft") {
       const doc = (await loadLayoutDocument(layout)).document;
-      return { doc, run: await analyseStoredLayout(layout, { skill }) };
+      return { doc, run: await analyseStoredLayout(layout, { skill, draft: doc }) };
     }
     const doc = await loadVersionDocument(layout.id, v);
     if (!doc) throw notFound(`There is no saved version ${v} of this layout.`);

@@ -1,4 +1,5 @@
 import { and, desc, eq } from "drizzle-orm";
+import { LRUCache } from "lru-cache";
 import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
 import { type LayoutDocument, parseLayoutDocument } from "~/analysis";
@@ -56,8 +57,17 @@ export async function loadLayoutDocument(
   };
 }
 
-/** A specific stored version's document, or null. */
+/**
+ * Stored versions never change (a save adds a new one), so a version's parsed document is kept by
+ * layout and number, bounded by the bytes of its stored text: a warm reader page reads none.
+ */
+const versionDocuments = new LRUCache<string, LayoutDocument>({ maxSize: 16 * 1024 * 1024 });
+
+/** A specific stored version's document (the caller's own copy), or null. */
 export async function loadVersionDocument(layoutId: string, number: number): Promise<LayoutDocument | null> {
+  const key = `${layoutId}:${number}`;
+  const known = versionDocuments.get(key);
+  if (known) return structuredClone(known);
   const db = await getDb();
   const [row] = await db
     .select({ document: layoutVersions.document })
@@ -65,7 +75,9 @@ export async function loadVersionDocument(layoutId: string, number: number): Pro
     .where(and(eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, number)));
   if (!row) return null;
   const parsed = parseLayoutDocument(row.document);
-  return parsed.ok ? parsed.document : null;
+  if (!parsed.ok) return null;
+  versionDocuments.set(key, structuredClone(parsed.document), { size: Math.max(1, row.document.length) });
+  return parsed.document;
 }
 
 /**

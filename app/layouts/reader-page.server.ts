@@ -8,6 +8,7 @@ import { requireLayoutAccess } from "~/auth/permissions.server";
 import { readerChoice } from "~/cars/reader-choice.server";
 import type { LayoutAnalysisData } from "~/components/analysis/layout-analysis-section";
 import { parseJumpSort } from "~/components/analysis/jump-sort";
+import { unpackOverlay } from "~/lib/packed-line";
 import { pageAnalysis } from "./analysis-page.server";
 import { readingFor, readingView } from "./reading.server";
 
@@ -37,7 +38,8 @@ export async function readerPage(request: Request, layoutId: string | undefined)
           ok: true,
           summary: page.result.summary,
           chosen: page.result.chosen,
-          overlay: page.result.overlay,
+          // The plan and the sheet draw on the server and are not kept rendered: the line unpacked here.
+          overlay: unpackOverlay(page.result.overlay),
         }
       : page.result,
   };

@@ -1,19 +1,19 @@
 import type { Route } from "./+types/api-analysis";
 import { requireLayoutAccess, requireUser } from "~/auth/permissions.server";
-import { cachedBody } from "~/analysis-cache.server";
+import { cachedBody } from "~/layouts/analysis-memo.server";
 import type { ClubGuidance } from "~/clubs/guidance.server";
 import { loadClubGuidance } from "~/clubs/guidance.server";
 import { carParam } from "~/cars/reader-choice.server";
 import { analyseDocument, overlayFor, parseSkill } from "~/layouts/analysis.server";
 import { countAnalysisRequest } from "~/layouts/analysis-rate.server";
-import { analysisRefusal, badRequest, jsonText } from "~/layouts/analysis-response.server";
+import { analysisRefusal, badRequest, jsonText, parseOnly } from "~/layouts/analysis-response.server";
 import { ONE_MEGABYTE, readJsonBody } from "~/lib/json-body.server";
 import { parseLayoutDocument } from "~/analysis";
 
 /** Only POST has a meaning here. */
 export function loader(_: Route.LoaderArgs) {
   return Response.json(
-    { error: "Send a layout document with POST: { document, classId? or car?, skill?, layoutId? }." },
+    { error: "Send a layout document with POST: { document, classId? or car?, skill?, layoutId?, only? }." },
     { status: 405, headers: { Allow: "POST" } },
   );
 }
@@ -23,7 +23,8 @@ export function loader(_: Route.LoaderArgs) {
  * while a director drags). Body `{ document, classId?, car?, skill?, layoutId? }`, at most 1 MB
  * (413 beyond); `car` is a class id or "profile:<id>" of the caller's own car profile (404 for
  * anyone else's). Answers `{ analysis, overlay }`: every class of the document, or only that car; the
- * overlay for `classId` or the first class. With `layoutId` (a layout the user may open) the
+ * overlay for `classId` or the first class; with `only: "overlay"`, `{ overlay }` alone (what the
+ * editor draws). With `layoutId` (a layout the user may open) the
  * club's track guidance applies, otherwise the document's own set. Signed-in users only (401);
  * a bad document or field answers 400 with `{ error, issues: [{ path, message }] }`; over the
  * work budget 422 naming the limit; too many requests of the account 429; a full queue 503.
@@ -49,6 +50,7 @@ export async function action({ request }: Route.ActionArgs) {
     const field = input.car !== undefined ? "car" : "classId";
     const { classId, own } = await carParam(user.id, input[field], field);
     const skill = parseSkill(input.skill, "skill");
+    const only = parseOnly(input.only, "only");
     let guidance: ClubGuidance | undefined;
     if (input.layoutId !== undefined) {
       if (typeof input.layoutId !== "string")
@@ -64,8 +66,8 @@ export async function action({ request }: Route.ActionArgs) {
       owner: user.id,
       cars: own ? { [own.classId]: own.car } : undefined,
     });
-    const text = cachedBody(run.entry, "post", () => ({
-      analysis: run.analysis,
+    const text = cachedBody(run.entry, `post:${only ?? "all"}`, () => ({
+      analysis: only === "overlay" ? undefined : run.analysis,
       overlay: overlayFor(run, classId, skill),
     }));
     return await jsonText(request, text, run.hit);

@@ -1,19 +1,20 @@
 import type { Route } from "./+types/api-layout-analysis";
-import { cachedBody } from "~/analysis-cache.server";
+import { cachedBody } from "~/layouts/analysis-memo.server";
 import { carParam } from "~/cars/reader-choice.server";
 import { analyseStoredLayout, overlayFor, parseSkill } from "~/layouts/analysis.server";
 import { countAnalysisRequest } from "~/layouts/analysis-rate.server";
-import { analysisRefusal, jsonText } from "~/layouts/analysis-response.server";
+import { analysisRefusal, jsonText, parseOnly } from "~/layouts/analysis-response.server";
 import { apiLayoutAccess } from "~/layouts/api-access.server";
 import { loadVersionDocument } from "~/layouts/documents.server";
 import { apiReading } from "~/layouts/api-reading.server";
 
 /**
- * GET /api/layouts/:layoutId/analysis?car=ID|profile:ID&skill=novice|club|expert&version=N: a
+ * GET /api/layouts/:layoutId/analysis?car=ID|profile:ID&skill=novice|club|expert&version=N[&only=overlay]: a
  * saved layout's analysis with the club's track guidance, at the version the caller reads (marshals
  * and drivers: the race-day version or `version=N` of a published one; directors: the working
  * draft or any saved version). `car` (or `class`) picks one car class or the caller's own car
- * profile; without it, every class of the layout (the overlay is for the first). Same permissions
+ * profile; without it, every class of the layout (the overlay is for the first); `only=overlay`
+ * leaves out `analysis` and `guidance` (what the read-only plan draws). Same permissions
  * as the layout page, as JSON: 401 signed out, 403 for non-members, 404 for a missing layout, a
  * draft or unpublished version (for all but directors) or someone else's car profile, 400 naming
  * the parameter for an unknown class, skill or version, 422 over the analysis budget, 429 over
@@ -29,6 +30,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     const field = query.get("car") !== null ? "car" : "class";
     const { classId, own } = await carParam(userId, query.get(field), field);
     const skill = parseSkill(query.get("skill"), "skill");
+    const only = parseOnly(query.get("only"), "only");
     const run = await analyseStoredLayout(layout, {
       classIds: classId ? [classId] : undefined,
       skill,
@@ -50,13 +52,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     });
     const readVersion = which.kind === "draft" ? null : which.number;
     // A published version's answer does not change when the draft is saved: its tag names the version read.
-    const etag = `"${run.entry.key.slice(0, 32)}.${readVersion === null ? layout.version : `v${readVersion}`}"`;
+    const etag = `"${run.entry.key.slice("analysis:".length)}.${readVersion === null ? layout.version : `v${readVersion}`}${only ? `.${only}` : ""}"`;
     if (request.headers.get("If-None-Match") === etag)
       return new Response(null, {
         status: 304,
         headers: { ETag: etag, "Cache-Control": "private, no-cache" },
       });
-    const text = cachedBody(run.entry, `get:${layout.id}:${layout.version}:${readVersion ?? "draft"}`, () => {
+    const purpose = `get:${layout.id}:${layout.version}:${readVersion ?? "draft"}:${only ?? "all"}`;
+    const text = cachedBody(run.entry, purpose, () => {
       const overlay = overlayFor(run, classId, skill);
       return {
         layoutId: layout.id,
@@ -66,8 +69,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
         status: layout.status,
         classId: overlay.classId,
         skill,
-        guidance: run.guidance,
-        analysis: run.analysis,
+        guidance: only ? undefined : run.guidance,
+        analysis: only ? undefined : run.analysis,
         overlay,
       };
     });

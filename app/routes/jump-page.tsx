@@ -8,6 +8,9 @@ import { pageAnalysis } from "~/layouts/analysis-page.server";
 import { jumpViewData } from "~/layouts/jump-view.server";
 import { readingFor } from "~/layouts/reading.server";
 
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
+
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Layout"} · Loftline` },
 ];
@@ -19,11 +22,11 @@ export const meta: Route.MetaFunction = ({ data }) => [
  * the version read.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId);
+  const { layout, club, role, user, guidance } = await requireLayoutAccess(request, params.layoutId);
   const query = new URL(request.url).searchParams;
   const reading = await readingFor(layout, role, query);
   const choice = await readerChoice(user.id, query, reading.document.carClasses);
-  const page = await pageAnalysis(layout, query, { reading, choice });
+  const page = await pageAnalysis(layout, query, { reading, choice, guidance });
   const jump = jumpViewData(page, params.sectionId, choice.own?.car);
   return data(
     { club, layout: { id: layout.id, name: layout.name }, version: reading.query, ...jump },

@@ -1,3 +1,5 @@
+import { useMemo } from "react";
+import { withUnpackedOverlay } from "~/lib/packed-line";
 import { data, Form, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/layout-page";
 import { requireLayoutAccess } from "~/auth/permissions.server";
@@ -15,15 +17,13 @@ import { readerChoice } from "~/cars/reader-choice.server";
 import { readingFor, readingView } from "~/layouts/reading.server";
 import { VersionBanner } from "~/components/publishing/version-banner";
 import { RiskSheetLink } from "~/components/risk/risk-sheet-link";
-import {
-  changeLayoutStatus,
-  deleteLayout,
-  layoutCreatorName,
-  updateLayoutMeta,
-} from "~/layouts/layouts.server";
+import { changeLayoutStatus, deleteLayout, updateLayoutMeta } from "~/layouts/layouts.server";
 import { parseForm } from "~/lib/forms";
 import { formValues } from "~/clubs/form-values.server";
 import { layoutActionSchema, LIST_FIELDS } from "~/lib/schemas/layouts";
+
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.layout.name ?? "Layout"} · Loftline` },
@@ -37,12 +37,15 @@ export const meta: Route.MetaFunction = ({ data }) => [
  * is not understood is named on the page (status 400) and the defaults are shown.
  */
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { layout, club, role, user } = await requireLayoutAccess(request, params.layoutId);
+  const { layout, club, role, user, guidance, creatorName } = await requireLayoutAccess(
+    request,
+    params.layoutId,
+  );
   const query = new URL(request.url).searchParams;
   const isDirector = role === "director";
   const reading = await readingFor(layout, role, query);
   const choice = await readerChoice(user.id, query, reading.document.carClasses);
-  const page = await pageAnalysis(layout, query, { reading, choice });
+  const page = await pageAnalysis(layout, query, { reading, choice, guidance });
   const sort = parseJumpSort(query);
   const problems = sort.problem ? [...page.problems, sort.problem] : page.problems;
   const { driverStand, marshalPoints, siteBoundary, trackWidth } = page.document;
@@ -61,7 +64,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     sort,
     result: page.result,
   };
-  const createdByName = await layoutCreatorName(layout.createdBy);
+  const createdByName = creatorName;
   const facts = {
     id: layout.id,
     name: layout.name,
@@ -114,6 +117,8 @@ export async function action({ request, params }: Route.ActionArgs) {
 
 export default function LayoutPage({ loaderData, actionData }: Route.ComponentProps) {
   const { club, layout, isDirector, createdByName, analysis, reading } = loaderData;
+  // The racing line travels as one text (app/lib/packed-line.ts): unpacked once per data.
+  const unpacked = useMemo(() => withUnpackedOverlay(analysis), [analysis]);
   const errors: FieldErrors | undefined = actionData?.errors;
   const values = actionData?.values;
   return (
@@ -140,7 +145,7 @@ export default function LayoutPage({ loaderData, actionData }: Route.ComponentPr
           class: layout.carClasses.includes(analysis.classId) ? analysis.classId : undefined,
         }}
       />
-      <LayoutAnalysisSection data={analysis} layoutName={layout.name} />
+      <LayoutAnalysisSection data={unpacked} layoutName={layout.name} />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <section
           aria-labelledby="about"

@@ -6,6 +6,9 @@ import { versionAnalysis } from "~/layouts/analysis-page.server";
 import { jumpViewData } from "~/layouts/jump-view.server";
 import { SHARE_HEADERS, sharedChoice, sharedVersionFor } from "~/layouts/share-access.server";
 
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
+
 export const meta: Route.MetaFunction = ({ data }) => [
   {
     title: `${data?.jump ? jumpName(data.jump) : "Jump"} · ${data?.layout.name ?? "Shared layout"} · Loftline`,

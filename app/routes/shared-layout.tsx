@@ -1,3 +1,5 @@
+import { useMemo } from "react";
+import { withUnpackedOverlay } from "~/lib/packed-line";
 import { data } from "react-router";
 import type { Route } from "./+types/shared-layout";
 import { parseJumpSort } from "~/components/analysis/jump-sort";
@@ -5,6 +7,9 @@ import { LayoutAnalysisSection } from "~/components/analysis/layout-analysis-sec
 import { SharedHeader } from "~/components/publishing/shared-header";
 import { versionAnalysis } from "~/layouts/analysis-page.server";
 import { SHARE_HEADERS, sharedChoice, sharedVersionFor } from "~/layouts/share-access.server";
+
+/** The page is a pure function of its data: kept rendered (app/lib/html-cache.server.ts). */
+export const handle = { htmlCache: true };
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: `${data?.layoutName ?? "Shared layout"} · Loftline` },
@@ -50,11 +55,13 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
 }
 
 export default function SharedLayout({ loaderData: d, params }: Route.ComponentProps) {
+  // The racing line travels as one text (app/lib/packed-line.ts): unpacked once per data.
+  const unpacked = useMemo(() => withUnpackedOverlay(d.analysis), [d.analysis]);
   return (
     <article className="space-y-8">
       <SharedHeader layoutName={d.layoutName} clubName={d.clubName} publication={d.publication} />
       <LayoutAnalysisSection
-        data={d.analysis}
+        data={unpacked}
         layoutName={d.layoutName}
         shared={{ base: `/shared/${params.token}` }}
       />

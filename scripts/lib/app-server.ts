@@ -83,8 +83,10 @@ export async function startAppServer(opts: {
   env: Record<string, string>;
   output?: "inherit" | "ignore";
   timeoutMs?: number;
+  /** Flags for Node that NODE_OPTIONS refuses, e.g. `--cpu-prof`. */
+  nodeArgs?: string[];
 }): Promise<AppServer> {
-  const child = spawn(process.execPath, [SERVE_ENTRY], {
+  const child = spawn(process.execPath, [...(opts.nodeArgs ?? []), SERVE_ENTRY], {
     cwd: ROOT,
     env: { ...process.env, ...opts.env, PORT: String(opts.port) },
     stdio: ["ignore", opts.output ?? "inherit", "inherit"],
@@ -100,7 +102,8 @@ export async function startAppServer(opts: {
       if (child.exitCode !== null || child.signalCode !== null) return resolve();
       child.once("exit", () => resolve());
       child.kill("SIGTERM");
-      setTimeout(() => child.kill("SIGKILL"), 5000).unref();
+      // A profiling run must stop gracefully to write its profile, so it gets longer.
+      setTimeout(() => child.kill("SIGKILL"), opts.nodeArgs?.length ? 30_000 : 5000).unref();
     });
   return { url, child, stop };
 }

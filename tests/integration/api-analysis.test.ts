@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
 import type { LayoutAnalysis } from "~/analysis";
-import { analysisCacheStats } from "~/analysis-cache.server";
+import { analysisMemo } from "~/layouts/analysis-memo.server";
 import { getDb } from "~/db/client.server";
 import { seedDemoData } from "~/db/demo-data.server";
 import { layouts, memberships, users } from "~/db/schema";
@@ -94,15 +94,15 @@ describe("POST /api/analysis (a draft, nothing saved)", () => {
     expect(body.overlay.lapTime).toBeGreaterThan(0);
     expect(body.overlay.jumps.length).toBe(body.analysis.classes[0].jumps.length);
 
-    const before = analysisCacheStats();
+    const before = analysisMemo.stats();
     const again = await post(
       { document: WET_WEATHER_LAYOUT, classId: "buggy-4wd-10", skill: "expert" },
       director.cookie,
     );
     expect(again.headers.get("X-Analysis-Cache")).toBe("hit");
     expect(again.data).toEqual(first.data);
-    expect(analysisCacheStats().hits).toBe(before.hits + 1);
-    expect(analysisCacheStats().misses).toBe(before.misses);
+    expect(analysisMemo.stats().hits).toBe(before.hits + 1);
+    expect(analysisMemo.stats().misses).toBe(before.misses);
 
     const all = await post({ document: WET_WEATHER_LAYOUT }, director.cookie);
     expect(all.headers.get("X-Analysis-Cache")).toBe("miss");

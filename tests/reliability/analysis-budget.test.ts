@@ -9,7 +9,7 @@ import { afterAll, afterEach, describe, expect, it } from "vitest";
 import { starterDocument } from "~/analysis";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { analysisPoolStats, closeAnalysisPool } from "~/analysis-pool/pool.server";
-import { clearAnalysisCache } from "~/analysis-cache.server";
+import { analysisMemo } from "~/layouts/analysis-memo.server";
 import { action as analysisAction } from "~/routes/api-analysis";
 import { heaviestAccepted, overBudget } from "../../scripts/lib/worst-case-layout";
 import { useTestDatabase } from "../integration/helpers/db";
@@ -29,7 +29,7 @@ const ask = (cookie: string, document: unknown, extra: Record<string, unknown> =
 afterEach(async () => {
   delete process.env.LOFTLINE_ANALYSIS_RATE;
   await closeAnalysisPool();
-  clearAnalysisCache();
+  analysisMemo.clear();
 });
 afterAll(() => closeAnalysisPool());
 

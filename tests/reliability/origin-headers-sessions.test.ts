@@ -99,6 +99,23 @@ describe("security headers", () => {
     expect(new Set(nonces).size).toBe(2);
   });
 
+  it("a reader page kept rendered gets each answer's own nonce, never another's", async () => {
+    const nonces: string[] = [];
+    for (let i = 0; i < 3; i++) {
+      const page = await send(`/layouts/${layoutId}`, { method: "GET", headers: { Cookie: cookie } });
+      expect(page.status).toBe(200);
+      const nonce = /script-src 'self' 'nonce-([^']+)'/.exec(
+        String(page.headers["content-security-policy"]),
+      )?.[1];
+      const scripts = [...page.text.matchAll(/<script\b[^>]*>/g)].map((m) => m[0]);
+      expect(scripts.length).toBeGreaterThan(2);
+      for (const tag of scripts) expect(tag).toContain(`nonce="${nonce}"`);
+      expect(page.text).not.toContain("LoftlineNonceSlot");
+      nonces.push(nonce!);
+    }
+    expect(new Set(nonces).size).toBe(3);
+  });
+
   it("no framing, no sniffing, same-origin referrers, HSTS in production, on pages and the API", async () => {
     for (const target of ["/", "/api/health", `/api/layouts/${layoutId}`]) {
       const answer = await send(target, { method: "GET", headers: { Cookie: cookie } });

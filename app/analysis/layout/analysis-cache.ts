@@ -5,7 +5,9 @@
  * edit recomputes only the jumps whose inputs changed (docs/decisions/0402).
  *
  * Pure JavaScript (no Node imports): the hash is FNV-1a over a canonical JSON string, run twice
- * with different offset bases for a 64-bit key.
+ * with different offset bases for a 64-bit key. The server's memo of whole analyses
+ * (app/layouts/analysis-memo.server.ts, docs/decisions/0458-one-memo.md) keys by the same
+ * `canonicalJson` and `fnv1a64`.
  */
 
 /** Counters for tests and benchmarks. */

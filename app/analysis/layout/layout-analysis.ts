@@ -4,12 +4,13 @@
  * verdict per skill level. The result is plain JSON-serialisable data (layout-analysis-types.ts);
  * `buildOverlay` (overlay.ts) turns it into what the plan view and the editor draw.
  *
- * With a cache (analysis-cache.ts) a repeat of the same inputs returns the stored analysis, and
- * an edited layout recomputes only the jumps whose own inputs changed.
+ * With a cache (analysis-cache.ts) each jump's costly parts are remembered, so a repeat or an
+ * edited layout recomputes only the jumps whose own inputs changed. Whole analyses are memoised
+ * by the server (app/layouts/analysis-memo.server.ts, with this folder's hashing), not here.
  */
 import type { JumpSection, LayoutDocument } from "../format/layout-document";
 import { DEFAULT_SKILL_SIGMAS, DEFAULT_SPEED_SIGMAS, type SkillSigmas } from "../air/air-plan-robustness";
-import { cacheKey, cacheKeyOf, fnv1a64, hashOnce, type AnalysisCache } from "./analysis-cache";
+import { cacheKeyOf, hashOnce, type AnalysisCache } from "./analysis-cache";
 import { carPreset, type CarParams } from "../format/cars";
 import type { ResolvedSection } from "../track/geometry";
 import { analyseJump } from "./jump-analysis";
@@ -40,7 +41,7 @@ export interface AnalyseOptions {
   guidance?: GuidanceSetId;
   /** A club's own values for the rule checks. */
   overrides?: GuidanceOverrides;
-  /** Memo for repeats and edits; without one everything is computed. */
+  /** Memo of each jump's costly parts, for repeats and edits; without one everything is computed. */
   cache?: AnalysisCache;
   /** A club's own car classes by id (checked before the presets). Do not change one after passing it. */
   cars?: Readonly<Record<string, CarParams>>;
@@ -161,7 +162,6 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
   const skill = options.skill ?? "club";
   if (!SKILL_LEVELS.includes(skill)) throw new RangeError(`skill: must be one of ${SKILL_LEVELS.join(", ")}`);
   const classes = resolveClasses(doc, options);
-  const cache = options.cache;
   const failCost = options.failCost ?? options.thresholds?.failCost ?? DEFAULT_FAIL_COST_S;
   const settings: AnalysisSettings = {
     skillSigmas: options.skillSigmas ?? DEFAULT_SKILL_SIGMAS,
@@ -194,19 +194,7 @@ export function analyseLayout(doc: LayoutDocument, options: AnalyseOptions = {})
           marshal,
           { suggest: false, jumpWindow },
         );
-  const compute = () => computeAnalysis(doc, classes, skill, rulesFor, riskFor, settings, cache);
-  if (!cache) return compute();
-  // The document's plain JSON text: a document written with its keys in another order only misses.
-  const key = cacheKey("layout", {
-    doc: fnv1a64(JSON.stringify(doc)),
-    classes: classes.map((c) => [c.id, hashOnce(c.car)]),
-    skill,
-    guidance,
-    overrides,
-    settings,
-    marshal,
-  });
-  return cache.memo(key, compute);
+  return computeAnalysis(doc, classes, skill, rulesFor, riskFor, settings, options.cache);
 }
 
 /** The marshal risk of the analysis so far, with the lap model's (memoised) speed windows. */

@@ -1,8 +1,10 @@
 /**
- * Live analysis while editing: a moment after the drawing stops changing, the draft document goes
- * to POST /api/analysis; the last overlay stays on screen while a newer one is worked out. A plain
- * abortable fetch rather than a router fetcher (docs/decisions/0501-analysis-requests-outside-the-router.md):
- * a failed request must never replace the editor with an error page.
+ * The analysis overlay in the browser, asked for with a plain abortable fetch rather than a router
+ * fetcher (docs/decisions/0501-analysis-requests-outside-the-router.md): a failed request must never
+ * replace the page with an error page. It asks only for the overlay, which is all the editor draws:
+ * a moment after the drawing stops changing, the draft document goes to POST /api/analysis; the
+ * last overlay stays on screen while a newer one is worked out. (The read-only plan is drawn on the
+ * server, decision 0812.)
  */
 import { useEffect, useRef, useState } from "react";
 import type { AnalysisOverlay, SkillLevel } from "~/analysis";
@@ -52,6 +54,7 @@ export function useAnalysis(
             ...(classId?.startsWith("profile:") ? { car: classId } : { classId }),
             skill,
             layoutId,
+            only: "overlay",
           }),
           credentials: "same-origin",
           signal: controller.signal,

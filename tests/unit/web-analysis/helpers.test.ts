@@ -1,39 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 import { analyseLayout } from "~/analysis";
-import { analysisKey, canonicalJson, LruMap } from "~/analysis-cache.server";
 import { flightCurve, ticks } from "~/components/analysis/elevation-path";
 import { parseJumpSort, sortJumps } from "~/components/analysis/jump-sort";
 import { speedLabels } from "~/components/drawing/drawing-geometry";
 import { exportFileName } from "~/lib/layout-file-name";
-
-describe("analysis memo keys", () => {
-  it("gives equal keys for equal inputs written in another key order, different ones for any change", () => {
-    const base = {
-      document: SUMMER_LAYOUT,
-      classIds: ["sct-10"],
-      skill: "club" as const,
-      guidance: "club" as const,
-      overrides: {},
-    };
-    const reordered = JSON.parse(canonicalJson(SUMMER_LAYOUT));
-    expect(analysisKey({ ...base, document: reordered })).toBe(analysisKey(base));
-    expect(analysisKey({ ...base, skill: "expert" })).not.toBe(analysisKey(base));
-    expect(analysisKey({ ...base, overrides: { minTrackWidth: 3 } })).not.toBe(analysisKey(base));
-    expect(analysisKey(base)).toMatch(/^[0-9a-f]{64}$/);
-  });
-
-  it("forgets the least recently used entry beyond its bound", () => {
-    const lru = new LruMap<string, number>(2);
-    lru.set("a", 1);
-    lru.set("b", 2);
-    expect(lru.get("a")).toBe(1); // a is now the most recent
-    lru.set("c", 3);
-    expect(lru.get("b")).toBeUndefined();
-    expect(lru.get("a")).toBe(1);
-    expect(lru.size).toBe(2);
-  });
-});
 
 describe("jumps table sorting", () => {
   const jumps = analyseLayout(SUMMER_LAYOUT, { classIds: ["buggy-2wd-10"] }).classes[0].jumps;
