@@ -2,10 +2,12 @@
  * The plan on the corner-risk PDF, drawn to scale as vector lines: the track band and centre
  * line, the site boundary, each zone outlined (dashed) and hatched, the jumps (J), hotspots (H),
  * marshal points (M) and the driver stand, with a scale bar. Black-and-white safe: zones are
- * hatched and outlined, marks differ by shape and label.
+ * hatched and outlined, marks differ by shape and label. The J, M and H numbers and the stand's
+ * name are placed by the one label placer every plan drawing uses, so none overlaps another.
  */
 import { rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import { hatchSegments } from "~/lib/hatch";
+import { placeLabels, type Box as LabelBox, type LabelRequest } from "~/lib/label-placer";
 import { groupHotspots } from "~/lib/risk-sheet-rows";
 import type { RiskSheet } from "./risk-sheet.server";
 
@@ -56,6 +58,31 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
     });
   const label = (text: string, at: { x: number; y: number }, size: number, f = bold, color = INK) =>
     page.drawText(text, { x: at.x, y: at.y, size, font: f, color });
+  // Labels go to the placer (y down: the page's y negated), then are drawn in one pass at the end.
+  const wanted: (LabelRequest & { text: string; size: number; f: PDFFont })[] = [];
+  const obstacles: LabelBox[] = [];
+  const want = (
+    id: string,
+    text: string,
+    at: { x: number; y: number },
+    size: number,
+    f: PDFFont,
+    priority: number,
+    mark: number,
+  ) => {
+    obstacles.push({ x: at.x - mark, y: -at.y - mark, width: 2 * mark, height: 2 * mark });
+    wanted.push({
+      id,
+      text,
+      size,
+      f,
+      anchor: { x: at.x, y: -at.y },
+      width: f.widthOfTextAtSize(text, size) + 1,
+      height: size * 1.15,
+      priority,
+      offset: mark + 0.8,
+    });
+  };
 
   page.drawRectangle({ x: box.x, y: box.y, width: box.w, height: box.h, borderColor: INK, borderWidth: 0.4 });
   if (site.siteBoundary) stroke(site.siteBoundary, INK, 0.6, [3, 2], true);
@@ -86,18 +113,13 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
       borderColor: INK,
       borderWidth: 0.7,
     });
-    label(
-      g.ids.join(","),
-      { x: p.x - 3 - font.widthOfTextAtSize(g.ids.join(","), 5.5), y: p.y - 8 },
-      5.5,
-      font,
-    );
+    want(`hotspot-${g.ids[0]}`, g.ids.join(","), p, 5.5, font, 85, 3);
   }
   for (const j of overlay.jumps) {
     const mark = plan.jumps.find((m) => m.sectionId === j.sectionId);
     const p = P(j.lip);
     page.drawRectangle({ x: p.x - 2.5, y: p.y - 2.5, width: 5, height: 5, color: INK });
-    if (mark) label(mark.id, { x: p.x + 4, y: p.y - 8 }, 7.5);
+    if (mark) want(`jump-${j.sectionId}`, mark.id, p, 7.5, bold, 100, 3);
   }
   site.marshalPoints.forEach((m, i) => {
     const p = P([m.x, m.y]);
@@ -108,12 +130,12 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
       borderColor: INK,
       borderWidth: 0.6,
     });
-    label(`M${i + 1}`, { x: p.x + 5, y: p.y + 2 }, 8);
+    want(`marshal-${i}`, `M${i + 1}`, p, 8, bold, 90, 4);
   });
   if (site.driverStand) {
     const p = P([site.driverStand.x, site.driverStand.y]);
     page.drawRectangle({ x: p.x - 3, y: p.y - 3, width: 6, height: 6, borderColor: INK, borderWidth: 0.8 });
-    label("Driver stand", { x: p.x + 5, y: p.y - 2 }, 6.5, font);
+    want("stand", "Driver stand", p, 6.5, font, 70, 3);
   }
   const metres = [500, 200, 100, 50, 20, 10, 5, 2].find((m) => m * scale <= box.w / 5) ?? 1;
   const sx = box.x + 8;
@@ -125,4 +147,15 @@ export function drawRiskPlan(page: PDFPage, box: Box, sheet: RiskSheet, font: PD
     color: INK,
   });
   label(`${metres} m`, { x: sx, y: sy + 3 }, 6.5, font);
+  obstacles.push({ x: sx, y: -(sy + 10), width: Math.max(metres * scale, 24), height: 11 });
+  const { placed } = placeLabels(wanted, {
+    bounds: { x: box.x + 1, y: -(top - 1), width: box.w - 2, height: box.h - 2 },
+    obstacles,
+    gap: 0.6,
+  });
+  const byId = new Map(wanted.map((w) => [w.id, w]));
+  for (const p of placed) {
+    const w = byId.get(p.id)!;
+    label(w.text, { x: p.x + 0.5, y: -(p.y + p.height) + w.size * 0.25 }, w.size, w.f);
+  }
 }

@@ -28,13 +28,29 @@ export interface DrawingLabelInput {
   numbers: Record<string, number>;
   pen: Pen;
   box: Extent;
+  /** Labels another page adds to the drawing (the corner-risk sheet's hotspot numbers). */
+  extra?: readonly ExtraLabel[];
+}
+
+/** A label another page adds: its text at a plan point (m), with the mark drawn there. */
+export interface ExtraLabel {
+  id: string;
+  text: string;
+  x: number;
+  y: number;
+  /** Half the size of the mark at the point, as a multiple of the text size (kept clear). */
+  mark: number;
+  /** Text size as a multiple of the drawing's (default 0.7). */
+  size?: number;
+  /** Who gives way: J and M numbers are 100 and 90, speeds 25 to 30 (default 50). */
+  priority?: number;
 }
 
 /** Mark sizes of the drawing as multiples of the text size: verdict mark, marshal diamond, stand. */
 export const MARK = { jump: 0.75, marshal: 0.6, stand: 0.6 } as const;
 
 /** Every label of the drawing placed, by id ("jump-<sectionId>", "marshal-0", "start", ...). */
-export function drawingLabels({ overlay, site, pts, numbers, pen, box }: DrawingLabelInput) {
+export function drawingLabels({ overlay, site, pts, numbers, pen, box, extra = [] }: DrawingLabelInput) {
   const { fs } = pen;
   const requests: (LabelRequest & { text: string; size: number; bold: boolean })[] = [];
   const obstacles: Box[] = [];
@@ -86,6 +102,15 @@ export function drawingLabels({ overlay, site, pts, numbers, pen, box }: Drawing
     square(at, fs * MARK.stand);
     add("stand", "Driver stand", at, fs, { priority: 70, offset: fs * MARK.stand * 1.2 });
   }
+  extra.forEach((e) => {
+    const at = svg(e.x, e.y);
+    square(at, fs * e.mark);
+    add(e.id, e.text, at, fs * (e.size ?? 0.7), {
+      priority: e.priority ?? 50,
+      offset: fs * e.mark * 1.2,
+      bold: true,
+    });
+  });
   overlay.laneConflicts.forEach((c, i) => {
     const at = svg((c.a[0] + c.b[0]) / 2, (c.a[1] + c.b[1]) / 2);
     add(`conflict-${i}`, `${c.distance.toFixed(1)} m apart`, at, fs * 0.8, {

@@ -3,7 +3,7 @@ import type { AnalysisOverlay, LayoutDocument } from "~/analysis";
 import { PLAN } from "~/components/editor/colours";
 import { SPEED_BINS } from "~/lib/editor/speed-scale";
 import { extent, type Extent } from "./drawing-geometry";
-import { drawingLabels } from "./drawing-labels";
+import { drawingLabels, type DrawingLabel, type ExtraLabel } from "./drawing-labels";
 import { DrawingLegend } from "./drawing-legend";
 import { TrackLines } from "./track-lines";
 import { JumpMarks, SiteMarks, StartAndSpeeds } from "./track-marks";
@@ -23,7 +23,12 @@ type Props = {
   /** More plan points the drawing must hold (a zone's far end), m. */
   extraPoints?: readonly [number, number][];
   /** Layers of another page (the corner-risk sheet's zones and hotspots), drawn with the same pen: `under` below the track, `over` above it and below the marks, `top` last. */
-  layers?: (pen: Pen) => { under?: ReactNode; over?: ReactNode; top?: ReactNode };
+  layers?: (
+    pen: Pen,
+    labels: ReadonlyMap<string, DrawingLabel>,
+  ) => { under?: ReactNode; over?: ReactNode; top?: ReactNode };
+  /** Labels the layers add, placed with every other label by the one label placer. */
+  extraLabels?: (pen: Pen) => readonly ExtraLabel[];
 };
 
 /**
@@ -45,6 +50,7 @@ export function TrackDrawing({
   classLabel,
   extraPoints = [],
   layers,
+  extraLabels,
 }: Props) {
   const { line, speedRange } = overlay;
   const pts: [number, number][] = line.x.map((x, i) => [x, line.y[i]]);
@@ -85,6 +91,7 @@ export function TrackDrawing({
             pen={pen}
             box={box}
             layers={layers}
+            extraLabels={extraLabels}
           />
         </svg>
       ))}
@@ -115,13 +122,14 @@ function PlanParts({
   pen,
   box,
   layers,
-}: Pick<Props, "overlay" | "site" | "numbers" | "names" | "jumpHref" | "layers"> & {
+  extraLabels,
+}: Pick<Props, "overlay" | "site" | "numbers" | "names" | "jumpHref" | "layers" | "extraLabels"> & {
   pts: [number, number][];
   pen: Pen;
   box: Extent;
 }) {
-  const labels = drawingLabels({ overlay, site, pts, numbers, pen, box });
-  const extra = layers?.(pen);
+  const labels = drawingLabels({ overlay, site, pts, numbers, pen, box, extra: extraLabels?.(pen) });
+  const extra = layers?.(pen, labels);
   return (
     <>
       {extra?.under}

@@ -5,6 +5,8 @@
  * Hatching and outline carry the meaning on black-and-white paper, not the colour alone.
  */
 import type { Hotspot, MarshalZone } from "~/analysis";
+import type { DrawingLabel, ExtraLabel } from "~/components/drawing/drawing-labels";
+import { LabelText } from "~/components/drawing/track-marks";
 import type { Pen } from "~/components/drawing/track-pen";
 import { groupHotspots } from "~/lib/risk-sheet-rows";
 
@@ -14,8 +16,27 @@ const HOT = "#141b24";
 /** The hatch pattern's id (one per page). */
 const HATCH_ID = "risk-zone-hatch";
 
+/** Hotspots closer than this many text sizes share one mark. */
+const SHARE = 1.2;
+/** Half the hotspot triangle's size, as a multiple of the text size. */
+const MARK = 0.4;
+
+/** The hotspot numbers, placed with every other label of the drawing by the one label placer. */
+export function hotspotLabels(hotspots: readonly Hotspot[]) {
+  return (pen: Pen): ExtraLabel[] =>
+    groupHotspots(hotspots, pen.fs * SHARE).map((g) => ({
+      id: `hotspot-${g.ids[0]}`,
+      text: g.ids.join(","),
+      x: g.x,
+      y: g.y,
+      mark: MARK,
+      size: 0.6,
+      priority: 85,
+    }));
+}
+
 export function riskLayers(zones: readonly MarshalZone[], hotspots: readonly Hotspot[]) {
-  return (pen: Pen) => {
+  return (pen: Pen, labels: ReadonlyMap<string, DrawingLabel>) => {
     const gap = pen.fs * 0.5;
     const under = (
       <g aria-label={`${zones.length} overshoot and run-off zones, hatched`}>
@@ -46,8 +67,8 @@ export function riskLayers(zones: readonly MarshalZone[], hotspots: readonly Hot
         ))}
       </g>
     );
-    const s = pen.fs * 0.4;
-    const groups = groupHotspots(hotspots, pen.fs * 1.2);
+    const s = pen.fs * MARK;
+    const groups = groupHotspots(hotspots, pen.fs * SHARE);
     const at = (g: { x: number; y: number }) => pen.P(g.x, g.y).split(",").map(Number);
     const over = (
       <g aria-label={`${hotspots.length} hotspots, numbered`}>
@@ -66,26 +87,12 @@ export function riskLayers(zones: readonly MarshalZone[], hotspots: readonly Hot
         })}
       </g>
     );
-    // The numbers go on top, below and left of the mark (jump labels sit to the right).
+    // The numbers go on top, where the one label placer put them.
     const top = (
       <g aria-hidden="true">
-        {groups.map((g) => {
-          const [cx, cy] = at(g);
-          return (
-            <text
-              key={g.ids[0]}
-              x={cx - pen.fs * 0.5}
-              y={cy + pen.fs * 1.3}
-              textAnchor="end"
-              fontSize={pen.fs * 0.6}
-              fontWeight={600}
-              fill={HOT}
-              {...pen.halo}
-            >
-              {g.ids.join(",")}
-            </text>
-          );
-        })}
+        {groups.map((g) => (
+          <LabelText key={g.ids[0]} label={labels.get(`hotspot-${g.ids[0]}`)} pen={pen} fill={HOT} />
+        ))}
       </g>
     );
     return { under, over, top };

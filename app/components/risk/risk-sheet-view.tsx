@@ -5,7 +5,7 @@ import { TrackDrawing } from "~/components/drawing/track-drawing";
 import { buttonClass } from "~/components/ui/button";
 import { hotspotLine, MARSHAL_CAUTIONS, RISK_SHEET_TITLE } from "~/lib/risk-sheet-rows";
 import { PointTable } from "./point-table";
-import { riskLayers, zoneExtent } from "./risk-layers";
+import { hotspotLabels, riskLayers, zoneExtent } from "./risk-layers";
 
 export type RiskSheetData = {
   club: { id: string; name: string };
@@ -98,6 +98,7 @@ export function RiskSheetView({ sheet }: { sheet: RiskSheetData }) {
           classLabel={sheet.classLabel}
           extraPoints={zoneExtent(plan.zones)}
           layers={riskLayers(plan.zones, plan.hotspots)}
+          extraLabels={hotspotLabels(plan.hotspots)}
         />
       </section>
       <section aria-labelledby="points-heading" className="space-y-2">

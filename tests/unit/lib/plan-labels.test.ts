@@ -119,4 +119,33 @@ describe("the plan labels of the demo layouts", () => {
       for (const id of dropped) expect(id).toMatch(/^(section|verdict|hidden|conflict)-/);
     });
   }
+
+  it("the corner-risk sheet's hotspot numbers join the same placer: none lands on a J or M number", () => {
+    const doc = DEMO_LAYOUTS[0];
+    const overlay = overlayOf(doc);
+    const pts = overlay.line.x.map((x, i) => [x, overlay.line.y[i]] as [number, number]);
+    const box = extent(pts, doc.trackWidth + 2);
+    const pen = makePen(Math.max(box.maxX - box.minX, box.maxY - box.minY));
+    const numbers = Object.fromEntries(overlay.jumps.map((j, k) => [j.sectionId, k + 1]));
+    // A hotspot at every jump's lip and every marshal point: the worst crowding a sheet can have.
+    const extra = [
+      ...overlay.jumps.map((j, k) => ({
+        id: `hotspot-H${k + 1}`,
+        text: `H${k + 1}`,
+        x: j.lip[0],
+        y: j.lip[1],
+      })),
+      ...doc.marshalPoints.map((m, k) => ({ id: `hotspot-HM${k + 1}`, text: `H${20 + k}`, x: m.x, y: m.y })),
+    ].map((e) => ({ ...e, mark: 0.4, size: 0.6, priority: 85 }));
+    const labels = drawingLabels({ overlay, site: doc, pts, numbers, pen, box, extra });
+    expectApart([...labels.values()], {
+      x: box.minX,
+      y: -box.maxY,
+      width: box.maxX - box.minX,
+      height: box.maxY - box.minY,
+    });
+    for (const j of overlay.jumps)
+      expect(labels.get(`jump-${j.sectionId}`)?.text).toBe(`J${numbers[j.sectionId]}`);
+    for (const e of extra) expect(labels.get(e.id)?.text).toBe(e.text);
+  });
 });
