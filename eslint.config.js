@@ -25,6 +25,8 @@ export default tseslint.config(
         "error",
         { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrorsIgnorePattern: "^_" },
       ],
+      // One import statement per module (a separate `import type` is allowed).
+      "no-duplicate-imports": ["error", { allowSeparateTypeImports: true }],
     },
   },
   {

@@ -14,14 +14,17 @@ import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
-import { createAnalysisCache, type AnalysisCache } from "~/analysis";
+import {
+  createAnalysisCache,
+  type AnalysisCache,
+  carPreset,
+  analyseLayout,
+  SKILL_LEVELS,
+  measureLayout,
+  lapSpeed,
+  type LayoutDocument,
+} from "~/analysis";
 import { DEMO_LAYOUTS } from "~/db/demo-layouts";
-import { carPreset } from "~/analysis";
-import { analyseLayout } from "~/analysis";
-import { SKILL_LEVELS } from "~/analysis";
-import { measureLayout } from "~/analysis";
-import { lapSpeed } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);

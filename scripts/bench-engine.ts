@@ -13,12 +13,19 @@
  */
 import { spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import { planAirSetup } from "~/analysis";
-import { simulateAttitude, type AttitudeInput } from "~/analysis";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis";
-import { flyJump } from "~/analysis";
-import { speedWindow } from "~/analysis";
-import { calibrationTrack, fitPace, fitSpeedGrip, modelTimes } from "~/analysis";
+import {
+  planAirSetup,
+  simulateAttitude,
+  type AttitudeInput,
+  CAR_PRESETS,
+  CAR_PRESET_IDS,
+  flyJump,
+  speedWindow,
+  calibrationTrack,
+  fitPace,
+  fitSpeedGrip,
+  modelTimes,
+} from "~/analysis";
 import { SUMMER_LAYOUT } from "~/db/demo-layouts";
 
 const median = (xs: number[]) => {

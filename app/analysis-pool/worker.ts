@@ -6,8 +6,13 @@
  * (worker-source.mjs).
  */
 import type { MessagePort } from "node:worker_threads";
-import { analyseLayout, createAnalysisCache, type AnalyseOptions, type LayoutAnalysis } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
+import {
+  analyseLayout,
+  createAnalysisCache,
+  type AnalyseOptions,
+  type LayoutAnalysis,
+  type LayoutDocument,
+} from "~/analysis";
 import { compactJsonBytes } from "./analysis-json";
 
 export interface AnalysisTask {

@@ -3,9 +3,8 @@ import { alias } from "drizzle-orm/sqlite-core";
 import { readGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { redirect } from "react-router";
 import { getDb, type Database } from "~/db/client.server";
-import { type Role } from "~/lib/roles";
+import { type Role, canSeeLayout, roleAllows } from "~/lib/roles";
 import { clubs, layouts, memberships, users } from "~/db/schema";
-import { canSeeLayout, roleAllows } from "~/lib/roles";
 import { getSession } from "./session.server";
 
 export type SessionUser = { id: string; email: string; name: string };

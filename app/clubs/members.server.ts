@@ -1,9 +1,8 @@
 import { and, asc, count, desc, eq, or, sql, type SQL } from "drizzle-orm";
 import { getDb, type Database } from "~/db/client.server";
-import { type Role } from "~/lib/roles";
+import { type Role, ROLE_LABELS } from "~/lib/roles";
 import { memberships, users } from "~/db/schema";
 import type { MemberQuery } from "~/lib/schemas/clubs";
-import { ROLE_LABELS } from "~/lib/roles";
 import { RuleError } from "./rule-error.server";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];

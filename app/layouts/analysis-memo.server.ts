@@ -13,13 +13,14 @@
 import { promisify } from "node:util";
 import { gzip } from "node:zlib";
 import { LRUCache } from "lru-cache";
-import { canonicalJson, fnv1a64 } from "~/analysis";
-import type {
-  GuidanceOverrides,
-  GuidanceSetId,
-  LayoutAnalysis,
-  LayoutDocument,
-  SkillLevel,
+import {
+  canonicalJson,
+  fnv1a64,
+  type GuidanceOverrides,
+  type GuidanceSetId,
+  type LayoutAnalysis,
+  type LayoutDocument,
+  type SkillLevel,
 } from "~/analysis";
 import { composeJson, jsonBytesOf } from "~/analysis-pool/analysis-json";
 

@@ -4,11 +4,16 @@
  * and the parts of the result the page draws, trimmed so the page does not carry every class's
  * speed samples.
  */
-import type { ClassAnalysis, SkillLevel } from "~/analysis";
+import {
+  type ClassAnalysis,
+  type SkillLevel,
+  carPreset,
+  SKILL_LEVELS,
+  wordList,
+  type LayoutDocument,
+} from "~/analysis";
 import type { SummaryData } from "~/components/analysis/summary-data";
-import { carPreset, SKILL_LEVELS, wordList } from "~/analysis";
 import type { layouts } from "~/db/schema";
-import type { LayoutDocument } from "~/analysis";
 import { AnalysisBudgetError, AnalysisBusyError } from "~/analysis-pool/errors";
 import type { CarOption, ReaderChoice } from "~/cars/reader-choice.server";
 import type { ClubGuidance } from "~/clubs/guidance.server";

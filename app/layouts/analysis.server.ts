@@ -5,18 +5,24 @@
  * (app/analysis-pool/pool.server.ts), whose workers keep each jump's costly parts, so an edited
  * draft recomputes only what changed.
  */
-import { carPreset } from "~/analysis";
+import {
+  carPreset,
+  SKILL_LEVELS,
+  type LayoutAnalysis,
+  type SkillLevel,
+  buildOverlay,
+  canonicalJson,
+  type AnalysisOverlay,
+  type CarParams,
+  type LayoutDocument,
+  type LayoutIssue,
+} from "~/analysis";
 import { runAnalysis } from "~/analysis-pool/pool.server";
-import { SKILL_LEVELS, type LayoutAnalysis, type SkillLevel } from "~/analysis";
-import { buildOverlay } from "~/analysis";
-import { canonicalJson } from "~/analysis";
 import { analysisMemo, type AnalysisInputs, type MemoEntry } from "./analysis-memo.server";
 import { loadClubGuidance, verdictThresholds, type ClubGuidance } from "~/clubs/guidance.server";
 import { eq } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
 import { layouts } from "~/db/schema";
-import type { AnalysisOverlay } from "~/analysis";
-import type { CarParams, LayoutDocument, LayoutIssue } from "~/analysis";
 import { analysisInputIssues, KNOWN_CLASSES } from "./document-checks.server";
 import { loadLayoutDocument } from "./documents.server";
 

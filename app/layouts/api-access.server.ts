@@ -11,9 +11,8 @@ import { and, eq, sql } from "drizzle-orm";
 import { getSession } from "~/auth/session.server";
 import { readGuidance, type ClubGuidance } from "~/clubs/guidance.server";
 import { getDb, type Database } from "~/db/client.server";
-import { type Role } from "~/lib/roles";
+import { type Role, canSeeLayout } from "~/lib/roles";
 import { clubs, layouts, memberships, users } from "~/db/schema";
-import { canSeeLayout } from "~/lib/roles";
 
 /** The layout's fields the API needs (the analysis reads the rest only when its memo misses). */
 export type ApiLayout = Pick<typeof layouts.$inferSelect, "id" | "clubId" | "status" | "version">;

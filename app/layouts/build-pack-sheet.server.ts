@@ -11,10 +11,10 @@ import {
   trackEdges,
   type LayoutDocument,
   type Stake,
+  JUMP_PRESET_LABELS,
 } from "~/analysis";
 import type { StakeRow } from "~/lib/build-pack-rows";
 import { STAKE_KIND_LABELS } from "~/lib/build-pack-words";
-import { JUMP_PRESET_LABELS } from "~/analysis";
 import type { BuildSettings } from "./build-pack-settings.server";
 import { geoLocator } from "./build-pack-geo.server";
 

@@ -2,8 +2,7 @@ import { and, desc, eq } from "drizzle-orm";
 import { LRUCache } from "lru-cache";
 import { getDb } from "~/db/client.server";
 import { layouts, layoutVersions } from "~/db/schema";
-import { type LayoutDocument, parseLayoutDocument } from "~/analysis";
-import { starterDocument } from "~/analysis";
+import { type LayoutDocument, parseLayoutDocument, starterDocument } from "~/analysis";
 import { DEFAULT_CAR_CLASSES, readCarClasses } from "~/lib/car-classes";
 
 type LayoutRow = typeof layouts.$inferSelect;

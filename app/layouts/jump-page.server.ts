@@ -2,13 +2,18 @@
  * The jump page's data: the analysed jump for the chosen class and skill, its ground profile for
  * the side elevation, and the servo-followed steering of its set-up plan for the chart.
  */
-import { compileServo, evaluate } from "~/analysis";
-import { carPreset } from "~/analysis";
-import { jumpProfile } from "~/analysis";
-import type { CarParams, JumpAnalysis, JumpPlan } from "~/analysis";
+import {
+  compileServo,
+  evaluate,
+  carPreset,
+  jumpProfile,
+  type CarParams,
+  type JumpAnalysis,
+  type JumpPlan,
+  type JumpSection,
+} from "~/analysis";
 import type { ElevationData } from "~/components/analysis/jump-elevation";
 import type { SteeringSeries } from "~/components/analysis/steering-chart";
-import type { JumpSection } from "~/analysis";
 
 const RAD = Math.PI / 180;
 

@@ -5,9 +5,8 @@
  */
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { getDb } from "~/db/client.server";
-import { type LayoutStatus, type Role } from "~/lib/roles";
+import { type LayoutStatus, type Role, canSeeLayout } from "~/lib/roles";
 import { layouts, users } from "~/db/schema";
-import { canSeeLayout } from "~/lib/roles";
 import type { Surface } from "~/lib/schemas/layouts";
 import { RuleError } from "~/clubs/rule-error.server";
 import { hasLivePublication } from "./publications.server";

@@ -2,8 +2,7 @@
  * The messages Loftline sends, each as plain text plus a simple HTML part. Plain words, one
  * link, and a line saying what to do if the message was not expected.
  */
-import type { Role } from "~/lib/roles";
-import { ROLE_LABELS } from "~/lib/roles";
+import { type Role, ROLE_LABELS } from "~/lib/roles";
 
 export type MailContent = { subject: string; text: string; html: string };
 

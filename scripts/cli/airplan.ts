@@ -11,8 +11,7 @@
  * change would give (`withoutLevelling`) and the trade-off, and the details behind them.
  */
 import { z } from "zod";
-import { planAirSetup } from "~/analysis";
-import { carRefSchema, resolveCar } from "~/analysis";
+import { planAirSetup, carRefSchema, resolveCar } from "~/analysis";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });

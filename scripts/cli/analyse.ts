@@ -9,17 +9,20 @@
  * "own-1", "own-2", ...; `--skill` picks the level of each jump's `verdict` (default club; every
  * level is in `verdicts`). Bad input names the field on stderr, exit code 2, nothing on stdout.
  */
-import { analyseLayout } from "~/analysis";
 import {
+  analyseLayout,
   quotedList,
   SKILL_LEVELS,
   type JumpAnalysis,
   type LayoutAnalysis,
   type SkillLevel,
+  CAR_PRESET_IDS,
+  carPreset,
+  parseLayoutDocument,
+  carFromProfile,
+  parseCarProfile,
+  type CarParams,
 } from "~/analysis";
-import { CAR_PRESET_IDS, carPreset } from "~/analysis";
-import { parseLayoutDocument } from "~/analysis";
-import { carFromProfile, parseCarProfile, type CarParams } from "~/analysis";
 import { InputError, parseJson, readInput, type CliCommand } from "./io";
 
 const SKILL_OPTION = `--skill ${SKILL_LEVELS.join("|")}`;

@@ -6,8 +6,7 @@
  * Output: { yawDeg, pitchDeg, rollDeg, angularMomentumDrift }.
  */
 import { z } from "zod";
-import { simulateAttitude } from "~/analysis";
-import { carRefSchema, resolveCar } from "~/analysis";
+import { simulateAttitude, carRefSchema, resolveCar } from "~/analysis";
 import { parseWith, toDeg, toRad, type CliCommand } from "./io";
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });

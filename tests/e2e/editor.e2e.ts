@@ -8,8 +8,7 @@ import { randomUUID } from "node:crypto";
 import zlib from "node:zlib";
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import type { LayoutDocument } from "~/analysis";
-import { starterDocument } from "~/analysis";
+import { type LayoutDocument, starterDocument } from "~/analysis";
 import { DEMO_CLUB, demoAccount, login, queryDb, screenshot, url, useBrowser } from "./fixtures";
 
 const browser = useBrowser();

@@ -1,8 +1,12 @@
 import { Link } from "react-router";
-import { skillPhrase, type ClassAnalysis, type SkillLevel } from "~/analysis";
+import {
+  skillPhrase,
+  type ClassAnalysis,
+  type SkillLevel,
+  type AnalysisOverlay,
+  type LayoutDocument,
+} from "~/analysis";
 import { Cautions } from "~/components/cautions";
-import type { AnalysisOverlay } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
 import { AnalysisPickers, type CarChoiceOption } from "./analysis-pickers";
 import { AnalysisSummary } from "./analysis-summary";
 import { jumpName } from "./format";

@@ -2,8 +2,7 @@ import type { ReactNode } from "react";
 import { Form, Link } from "react-router";
 import { Button } from "~/components/ui/button";
 import { Field, FormMessage, type FieldErrors } from "~/components/ui/form";
-import type { Role } from "~/lib/roles";
-import { ROLE_LABELS } from "~/lib/roles";
+import { type Role, ROLE_LABELS } from "~/lib/roles";
 
 type Shown = { email: string; role: Role; club: { id: string; name: string }; inviterName: string | null };
 

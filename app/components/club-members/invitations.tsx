@@ -1,8 +1,7 @@
 import { Form } from "react-router";
 import { Button } from "~/components/ui/button";
 import { Field, FieldError, SelectField, type FieldErrors } from "~/components/ui/form";
-import { ROLES, type Role } from "~/lib/roles";
-import { ROLE_LABELS } from "~/lib/roles";
+import { ROLES, type Role, ROLE_LABELS } from "~/lib/roles";
 
 export type InvitationView = {
   id: string;

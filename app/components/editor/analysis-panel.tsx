@@ -1,6 +1,11 @@
-import { CAR_PRESETS, SKILL_LABELS, SKILL_LEVELS, VERDICT_WORDS } from "~/analysis";
-import type { AnalysisOverlay } from "~/analysis";
-import type { LayoutSection } from "~/analysis";
+import {
+  CAR_PRESETS,
+  SKILL_LABELS,
+  SKILL_LEVELS,
+  VERDICT_WORDS,
+  type AnalysisOverlay,
+  type LayoutSection,
+} from "~/analysis";
 import { VerdictMark } from "~/components/analysis/verdict-mark";
 import type { AnalysisStatus, Skill } from "./use-analysis";
 

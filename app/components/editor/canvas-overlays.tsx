@@ -1,8 +1,7 @@
 /**
  * The plan's DOM overlays (no konva): the scale bar, the speed legend and the zoom buttons.
  */
-import { CAR_PRESETS } from "~/analysis";
-import type { AnalysisOverlay } from "~/analysis";
+import { CAR_PRESETS, type AnalysisOverlay } from "~/analysis";
 import { binStyle, legendTicks, SPEED_BINS } from "~/lib/editor/speed-scale";
 import { niceStep, type LengthUnit } from "~/lib/editor/units";
 

@@ -2,13 +2,11 @@
  * What the plan canvas needs and reports. Kept apart from the canvas itself so the editor's
  * panels can use the types without loading konva (which only the canvas chunk imports).
  */
-import type { CentreLine, ResolvedSection } from "~/analysis";
-import type { AnalysisOverlay } from "~/analysis";
+import type { CentreLine, ResolvedSection, AnalysisOverlay, LayoutDocument } from "~/analysis";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { Selection } from "~/lib/editor/editor-state";
 import type { SnapSettings } from "~/lib/editor/snap";
 import type { LengthUnit } from "~/lib/editor/units";
-import type { LayoutDocument } from "~/analysis";
 
 /**
  * What a click on the plan does: select things (and drag their handles), place a marshal point,

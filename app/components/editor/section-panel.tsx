@@ -1,11 +1,16 @@
-import type { ResolvedSection } from "~/analysis";
-import type { OverlayJump } from "~/analysis";
+import {
+  type ResolvedSection,
+  type OverlayJump,
+  JUMP_PRESET_LABELS,
+  type JumpPreset,
+  type LayoutDocument,
+  type LayoutSection,
+} from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { checkSectionPatch } from "~/lib/editor/field-check";
 import type { KeepClosedBy } from "~/lib/editor/jump-resize";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { feetHint } from "~/lib/editor/units";
-import { JUMP_PRESET_LABELS, type JumpPreset, type LayoutDocument, type LayoutSection } from "~/analysis";
 import { JUMP_FIELDS, JumpChoices } from "./jump-fields";
 import { JumpSideView } from "./jump-side-view";
 import { NumberField } from "./number-field";

@@ -1,5 +1,4 @@
-import type { ResolvedSection } from "~/analysis";
-import { JUMP_PRESET_LABELS, type LayoutSection } from "~/analysis";
+import { type ResolvedSection, JUMP_PRESET_LABELS, type LayoutSection } from "~/analysis";
 import { turnWord } from "./section-panel";
 
 /** One line describing a section: "Left hairpin 180° R 6.0 m". */

@@ -7,8 +7,7 @@
  * server, decision 0812.)
  */
 import { useEffect, useRef, useState } from "react";
-import type { AnalysisOverlay, SkillLevel } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
+import type { AnalysisOverlay, SkillLevel, LayoutDocument } from "~/analysis";
 
 export type AnalysisState = "idle" | "working" | "ready" | "unavailable" | "failed";
 

@@ -3,8 +3,13 @@
  * plan point gives. Plan frame as in engine.md: X right, Y up, headings anticlockwise from +X (rad).
  * Results are snapped (switchable) and kept inside the document's allowed ranges.
  */
-import { FIELD_LIMITS, type Pose, type ResolvedSection } from "~/analysis";
-import type { LayoutDocument, TurnSection } from "~/analysis";
+import {
+  FIELD_LIMITS,
+  type Pose,
+  type ResolvedSection,
+  type LayoutDocument,
+  type TurnSection,
+} from "~/analysis";
 import { clamp, snapAngle, snapLength, type SnapSettings } from "./snap";
 
 export type Point = { x: number; y: number };

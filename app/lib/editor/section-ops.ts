@@ -3,14 +3,17 @@
  * delete, reorder, duplicate and change. Each returns a new document and leaves the old one as it
  * was, so the undo history can keep both by reference.
  */
-import { DEFAULT_JUMP_PRESET, defaultJump, FIELD_LIMITS, jumpProfile } from "~/analysis";
-import type {
-  CustomJumpSection,
-  JumpPreset,
-  JumpSection,
-  LayoutDocument,
-  LayoutSection,
-  TurnSection,
+import {
+  DEFAULT_JUMP_PRESET,
+  defaultJump,
+  FIELD_LIMITS,
+  jumpProfile,
+  type CustomJumpSection,
+  type JumpPreset,
+  type JumpSection,
+  type LayoutDocument,
+  type LayoutSection,
+  type TurnSection,
 } from "~/analysis";
 
 export type NewSectionKind = "straight" | "turn-left" | "turn-right" | "jump";

@@ -2,8 +2,7 @@
  * The plan view's camera: plan metres (Y up) to screen pixels (y down), zoom about the cursor and
  * fitting the layout into the canvas.
  */
-import type { CentreLine } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
+import type { CentreLine, LayoutDocument } from "~/analysis";
 import { clamp } from "./snap";
 import type { Point } from "./drag-maths";
 import type { Bounds } from "./site-ops";

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { resolveSections } from "~/analysis";
-import type { LayoutDocument } from "~/analysis";
+import { resolveSections, type LayoutDocument, defaultJump } from "~/analysis";
 import {
   alongTrack,
   jumpMoveBlocker,
@@ -11,7 +10,6 @@ import {
   turnCentre,
   turnRadiusFromPoint,
 } from "~/lib/editor/drag-maths";
-import { defaultJump } from "~/analysis";
 
 const SNAP = { lengths: true, angles: true };
 const FREE = { lengths: false, angles: false };

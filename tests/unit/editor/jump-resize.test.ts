@@ -7,11 +7,11 @@ import {
   starterDocument,
   type JumpSection,
   type LayoutDocument,
+  JUMP_PRESETS,
 } from "~/analysis";
 import { jumpMoveBlocker } from "~/lib/editor/drag-maths";
 import { resizeJump } from "~/lib/editor/jump-resize";
 import { asFreeProfile, changeSectionKind } from "~/lib/editor/section-ops";
-import { JUMP_PRESETS } from "~/analysis";
 
 /** The starter oval with a double in its back straight: straight 12, double, straight 12.4 (run-out). */
 function withDouble(): LayoutDocument {

@@ -1,7 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { jumpProfile } from "~/analysis";
-import type { CustomJumpSection, JumpSection } from "~/analysis";
-import { defaultJump } from "~/analysis";
+import { jumpProfile, type CustomJumpSection, type JumpSection, defaultJump } from "~/analysis";
 import {
   addProfilePoint,
   dragProfileHandle,

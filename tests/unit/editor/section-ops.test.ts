@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { JUMP_PRESETS, parseLayoutDocument } from "~/analysis";
-import { starterDocument } from "~/analysis";
+import { JUMP_PRESETS, parseLayoutDocument, starterDocument } from "~/analysis";
 import {
   changeSectionKind,
   deleteSection,

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { layoutGeometry } from "~/analysis";
-import { starterDocument } from "~/analysis";
+import { layoutGeometry, starterDocument } from "~/analysis";
 import {
   addBoundaryPoint,
   addMarshalPoint,

@@ -1,8 +1,14 @@
 import { gunzipSync } from "node:zlib";
 import { describe, expect, it } from "vitest";
-import { canonicalJson, type LayoutDocument, type SkillLevel } from "~/analysis";
+import {
+  canonicalJson,
+  type LayoutDocument,
+  type SkillLevel,
+  analyseLayout,
+  createAnalysisCache,
+  fnv1a64,
+} from "~/analysis";
 import { SUMMER_LAYOUT, WET_WEATHER_LAYOUT } from "~/db/demo-layouts";
-import { analyseLayout, createAnalysisCache, fnv1a64 } from "~/analysis";
 import {
   cachedBody,
   createAnalysisMemo,

@@ -1,6 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { CAR_PRESETS, CAR_PRESET_IDS } from "~/analysis";
-import { carFromProfile, carProfileSchema, carRefSchema, profileFromCar, resolveCar } from "~/analysis";
+import {
+  CAR_PRESETS,
+  CAR_PRESET_IDS,
+  carFromProfile,
+  carProfileSchema,
+  carRefSchema,
+  profileFromCar,
+  resolveCar,
+} from "~/analysis";
 
 describe("car profile schema", () => {
   it("every preset round-trips through a profile", () => {

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { LAYOUT_STATUSES, ROLES } from "~/lib/roles";
-import { canSeeLayout, ROLE_LABELS, roleAllows } from "~/lib/roles";
+import { LAYOUT_STATUSES, ROLES, canSeeLayout, ROLE_LABELS, roleAllows } from "~/lib/roles";
 
 describe("roleAllows", () => {
   it("lets only directors manage, and every role read", () => {

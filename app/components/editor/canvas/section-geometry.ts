@@ -2,8 +2,7 @@
  * A section's drawing in its own frame (x along the start heading, y to the left, m), so that when
  * an earlier section changes, later ones only move as a whole and are not recomputed.
  */
-import { jumpProfile } from "~/analysis";
-import type { LayoutSection } from "~/analysis";
+import { jumpProfile, type LayoutSection } from "~/analysis";
 
 export interface LocalSectionDrawing {
   /** Closed outline of the track band, flat [x0, y0, x1, y1, ...]. */

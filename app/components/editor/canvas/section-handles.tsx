@@ -1,6 +1,6 @@
 import { useRef } from "react";
 import { Circle, Line, Rect, RegularPolygon } from "react-konva";
-import { advancePose, type ResolvedSection } from "~/analysis";
+import { advancePose, type ResolvedSection, type LayoutDocument } from "~/analysis";
 import {
   alongTrack,
   jumpMoveBlocker,
@@ -15,7 +15,6 @@ import {
 import { updateSection } from "~/lib/editor/section-ops";
 import type { SnapSettings } from "~/lib/editor/snap";
 import { screenToWorld, worldToScreen, type View } from "~/lib/editor/view";
-import type { LayoutDocument } from "~/analysis";
 import { PLAN } from "../colours";
 import { DragPoint } from "./drag-point";
 
