@@ -18,7 +18,7 @@ describe("calibration from measured laps", () => {
     await page.getByRole("heading", { name: "Calibrate from your laps" }).waitFor();
     await page.getByLabel("Car").selectOption("buggy-2wd-10");
     await page
-      .getByLabel("Lap file (.csv)")
+      .getByLabel("Lap file (.csv)", { exact: true })
       .setInputFiles(path.resolve("docs/examples/summer-layout-laps.csv"));
     await page.getByRole("button", { name: "Compare with the model" }).click();
     await page.getByRole("heading", { name: "Measured and modelled laps" }).waitFor();
