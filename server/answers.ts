@@ -59,9 +59,15 @@ export function sendWhole(req: IncomingMessage, res: ServerResponse, body: Uint8
   void drainRest(req).then(() => res.end());
 }
 
-/** How long, ms, and how much, bytes, of an unwanted body is read and dropped before hanging up. */
+/**
+ * How long, ms, and how much, bytes, of an unwanted body is read and dropped before hanging up.
+ * The time is what counts: hanging up with unread bytes makes the system reset the connection,
+ * and the client's system then throws away an answer it has not read yet. On loopback 16 MB went by
+ * in some 10 ms, too short for a busy client to read the 413 first; 2 s of dropping (at most 1 GB)
+ * gives every client time to read it. Dropped bytes are never kept.
+ */
 const LINGER_MS = 2000;
-const LINGER_BYTES = 16 * 1024 * 1024;
+const LINGER_BYTES = 1024 * 1024 * 1024;
 
 /**
  * Reads and drops what is left of a request's body. Resolves true once it has ended, or false
