@@ -43,7 +43,7 @@ const ROLES = [
     points: [
       "The plan with every jump, the driver stand and the numbered marshal points; each jump's side view shows the overshoot zone.",
       "Which stretches the driver stand cannot see, and where lanes pass close together.",
-      "Coming next: a printable corner-risk sheet that says where cars crash and where to stand.",
+      "A corner-risk sheet for each race-day version and class, on screen, printed or as PDF: the overshoot and run-off zones, the hotspots, and for each marshal point what to watch.",
     ],
   },
 ] as const;
