@@ -8,6 +8,7 @@ import {
   saveLayoutDocument,
   StaleVersionError,
 } from "~/layouts/documents.server";
+import { currentPublication, listPublications } from "~/layouts/publications.server";
 import { parseSaveRequest } from "~/lib/editor/save-request";
 import { describeFirstIssue, refuseDocument } from "~/layouts/document-checks.server";
 
@@ -18,12 +19,18 @@ export const meta: Route.MetaFunction = ({ data }) => [
 /** The club's directors edit; everyone else is refused (403) by requireLayoutAccess. */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { layout, club } = await requireLayoutAccess(request, params.layoutId, "director");
-  const { document } = await loadLayoutDocument(layout);
+  const [{ document }, publications] = await Promise.all([
+    loadLayoutDocument(layout),
+    listPublications(layout.id),
+  ]);
+  const current = currentPublication(publications);
   return {
     club,
     layout: { id: layout.id, name: layout.name, status: layout.status },
     document,
     version: layout.version,
+    // Saves go to the working draft: the editor says which version drivers and marshals read.
+    raceDay: current ? { number: current.versionNumber, raceDate: current.raceDate } : null,
   };
 }
 

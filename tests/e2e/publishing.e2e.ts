@@ -81,6 +81,10 @@ describe("publishing for race day", () => {
     // The director saves twice in the editor: the driver still reads version 1.
     await saveLongerStart(director, id, 34, 2);
     await saveLongerStart(director, id, 44, 3);
+    expect(await director.getByTestId("draft-note").textContent()).toMatch(
+      /Saves go to the working draft\. Drivers and marshals keep reading race-day version 1/,
+    );
+    await screenshot(director, "30-editor-draft-note");
     await driver.reload();
     await expect.poll(() => banner(driver).textContent()).toMatch(/Race-day version 1/);
     const after = await lap();

@@ -6,6 +6,7 @@ import { action as editorAction, loader as editorLoader } from "~/routes/layout-
 import { loader as viewLoader } from "~/routes/layout-drawing";
 import { action as photoAction } from "~/routes/layout-photo";
 import { loader as fileLoader } from "~/routes/file";
+import { publishDraft } from "~/layouts/publishing.server";
 import { useTestDatabase } from "./helpers/db";
 import { makeClubWithRoles, makeLayout } from "./helpers/factories";
 import { args, getRequest, jsonRequest, run } from "./helpers/requests";
@@ -62,6 +63,21 @@ describe("editor loader", () => {
     );
     expect(visitor.status).toBe(302);
     expect(visitor.location).toMatch(/^\/sign-in\?redirectTo=/);
+  });
+
+  it("says which race-day version readers keep while the director's saves go to the draft", async () => {
+    const { layout, director } = await setUp();
+    const open = () =>
+      run(() =>
+        editorLoader(
+          args(getRequest(`/layouts/${layout.id}/edit`, director.cookie), { layoutId: layout.id }),
+        ),
+      );
+    expect((await open()).data).toMatchObject({ raceDay: null });
+    const published = await publishDraft(layout.id, 1, { raceDate: "2030-06-01", note: "" }, director.id);
+    expect((await open()).data).toMatchObject({
+      raceDay: { number: published.versionNumber, raceDate: "2030-06-01" },
+    });
   });
 });
 

@@ -11,6 +11,7 @@ import { canRedo, canUndo } from "~/lib/editor/history";
 import { CloseLoopProposal } from "./close-loop-proposal";
 import { ClosureBar } from "./closure-bar";
 import { ConflictDialog, RestoreBanner } from "./editor-dialogs";
+import { Link } from "react-router";
 import { EditorHeader } from "./editor-header";
 import { EditorPanels } from "./editor-panels";
 import { EditorToolbar } from "./editor-toolbar";
@@ -28,9 +29,11 @@ export interface LayoutEditorProps {
   layout: { id: string; name: string; status: string };
   document: LayoutDocument;
   version: number;
+  /** The race-day version drivers and marshals read, if any: saves here go to the draft. */
+  raceDay?: { number: number; raceDate: string | null } | null;
 }
 
-export function LayoutEditor({ club, layout, document, version }: LayoutEditorProps) {
+export function LayoutEditor({ club, layout, document, version, raceDay = null }: LayoutEditorProps) {
   const ed = useEditorDocument(document, version);
   const { state, dispatch, doc, sections, selected } = ed;
   const tools = useEditorTools();
@@ -77,6 +80,7 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
           baseVersion={state.baseVersion}
           onLeaveForCopy={guard.allowNextNavigation}
         />
+        {raceDay ? <DraftNote layoutId={layout.id} raceDay={raceDay} /> : null}
         {backup.found ? (
           <RestoreBanner
             backup={backup.found}
@@ -174,5 +178,25 @@ export function LayoutEditor({ club, layout, document, version }: LayoutEditorPr
         ) : null}
       </div>
     </FieldProblemsScope>
+  );
+}
+
+/** While a version is published, saves change only the working draft: said once, above the tools. */
+function DraftNote({
+  layoutId,
+  raceDay,
+}: {
+  layoutId: string;
+  raceDay: { number: number; raceDate: string | null };
+}) {
+  return (
+    <p className="text-sm text-ink-700" data-testid="draft-note">
+      Saves go to the working draft. Drivers and marshals keep reading race-day version {raceDay.number}
+      {raceDay.raceDate ? ` (race day ${raceDay.raceDate})` : ""} until you{" "}
+      <Link className="font-medium text-pine-700 underline" to={`/layouts/${layoutId}/publishing`}>
+        publish the draft
+      </Link>
+      .
+    </p>
   );
 }
