@@ -44,6 +44,16 @@ export async function ownCarFor(userId: string, value: string): Promise<OwnCar |
   return stored ? { profileId: id, ...ownCar(stored) } : null;
 }
 
+/** The member's last chosen car ("<class id>" or "profile:<id>"), or null; read only. */
+export async function rememberedCar(userId: string): Promise<string | null> {
+  const db = await getDb();
+  const [stored] = await db
+    .select({ car: readerChoices.car })
+    .from(readerChoices)
+    .where(eq(readerChoices.userId, userId));
+  return stored?.car ?? null;
+}
+
 /**
  * Reads `car` (or `class`) and `skill` from the query, falls back to the member's last choice and
  * then to the layout's first class and "club", and remembers a choice that was asked and understood.

@@ -7,6 +7,7 @@ import { MAX_LAP_FILE_BYTES } from "~/calibration/lap-file.server";
 import { calibrationOptions } from "~/calibration/options.server";
 import { runCalibration } from "~/calibration/run.server";
 import { fittedFromForm, saveAsNewProfile, saveToProfile } from "~/calibration/save.server";
+import { rememberedCar } from "~/cars/reader-choice.server";
 import { refusal } from "~/clubs/rule-error.server";
 import { formValues } from "~/clubs/form-values.server";
 import { CalibrationForm, LapFileIssues } from "~/components/calibration/calibration-form";
@@ -20,8 +21,19 @@ export const meta: Route.MetaFunction = ({ data }) => [
 /** Members of the layout's club: the form, with the layout's published versions and their cars. */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { club, user, layout } = await requireLayoutAccess(request, params.layoutId);
-  const options = await calibrationOptions(layout.id, club.id, user.id);
-  return { layout: { id: layout.id, name: layout.name }, options, maxKb: MAX_LAP_FILE_BYTES / 1024 };
+  const [options, remembered] = await Promise.all([
+    calibrationOptions(layout.id, club.id, user.id),
+    rememberedCar(user.id),
+  ]);
+  // The car asked in the address, else the one the member last read layouts with, if offered here.
+  const offered = [...options.ownCars, ...options.cars].map((c) => c.value);
+  const asked = new URL(request.url).searchParams.get("car");
+  const car = [asked, remembered].find((c) => c && offered.includes(c)) ?? options.ownCars[0]?.value;
+  return {
+    layout: { id: layout.id, name: layout.name },
+    options: { ...options, car },
+    maxKb: MAX_LAP_FILE_BYTES / 1024,
+  };
 }
 
 /**

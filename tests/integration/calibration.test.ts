@@ -13,6 +13,7 @@ import { createLayoutFromDocument } from "~/layouts/documents.server";
 import { publishDraft } from "~/layouts/publishing.server";
 import type { CalibrationResult } from "~/calibration/run.server";
 import { action, loader } from "~/routes/layout-calibrate";
+import { loader as layoutLoader } from "~/routes/layout-page";
 import { useTestDatabase } from "./helpers/db";
 import { makeClubWithRoles } from "./helpers/factories";
 import { args, formRequest, getRequest, run } from "./helpers/requests";
@@ -93,6 +94,33 @@ describe("calibration from measured laps", () => {
       ),
     );
     expect(outsider.status).toBe(403);
+  });
+
+  it("opens with the car the member last read layouts with, or the one the address names", async () => {
+    const s = await setUp();
+    const carOf = async (query = "") => {
+      const page = await run(() =>
+        loader(
+          args(getRequest(`/layouts/${s.layout.id}/calibrate${query}`, s.driver.cookie), {
+            layoutId: s.layout.id,
+          }),
+        ),
+      );
+      return (page.data as { options: { car?: string } }).options.car;
+    };
+    expect(await carOf()).toBe(`profile:${s.own}`);
+    // Reading the layout page with a class remembers it (the reader's choice), and calibration opens with it.
+    await run(() =>
+      layoutLoader(
+        args(getRequest(`/layouts/${s.layout.id}?car=buggy-2wd-10`, s.driver.cookie), {
+          layoutId: s.layout.id,
+        }),
+      ),
+    );
+    expect(await carOf()).toBe("buggy-2wd-10");
+    expect(await carOf("?car=buggy-8")).toBe("buggy-8");
+    // Someone else's profile in the address is not offered: the remembered car stays.
+    expect(await carOf(`?car=profile:${s.theirs}`)).toBe("buggy-2wd-10");
   });
 
   it("uploads laps, shows the result, and saves the fitted values to the member's own profile", async () => {

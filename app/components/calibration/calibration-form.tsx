@@ -36,7 +36,10 @@ export function CalibrationForm({
   others,
   maxKb,
   refusal,
+  car,
 }: {
+  /** The car chosen at first: the address's or the member's last, else their first own car. */
+  car?: string;
   versions: Choice[];
   cars: Choice[];
   ownCars: Choice[];
@@ -61,7 +64,7 @@ export function CalibrationForm({
             </option>
           ))}
         </SelectField>
-        <SelectField label="Car" name="car" defaultValue={ownCars[0]?.value} errors={errorsFor("car")}>
+        <SelectField label="Car" name="car" defaultValue={car ?? ownCars[0]?.value} errors={errorsFor("car")}>
           {ownCars.length ? (
             <optgroup label="Your cars">
               {ownCars.map((c) => (
