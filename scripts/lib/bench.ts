@@ -1,5 +1,6 @@
 /**
- * Used by the reader pages' benchmark (scripts/bench-reader-pages.ts):
+ * Used by the analysis API's and the reader pages' benchmarks (scripts/bench-analysis-api.ts,
+ * scripts/bench-reader-pages.ts):
  * options, a built app on loopback with a fresh demo database, signing in as the demo driver, and
  * alternating autocannon rounds of several routes against a baseline route.
  */
