@@ -36,6 +36,8 @@ async function ask(
   return body;
 }
 
+export type MarshalPlanState = ReturnType<typeof useMarshalPlan>;
+
 export function useMarshalPlan(doc: LayoutDocument, layoutId: string) {
   const [plan, setPlan] = useState<{ plan: EditorMarshalPlan; doc: LayoutDocument } | null>(null);
   const [message, setMessage] = useState<string | null>(null);
@@ -77,6 +79,8 @@ export function useMarshalPlan(doc: LayoutDocument, layoutId: string) {
 
   return {
     plan: hasPoints ? (plan?.plan ?? null) : null,
+    /** The drawing the plan was made for (its zones stand on that drawing's track). */
+    planDoc: hasPoints ? (plan?.doc ?? null) : null,
     stale: plan?.doc !== doc,
     message,
     busy,

@@ -69,6 +69,8 @@ export interface CanvasLabelInput {
   editable: boolean;
   units: LengthUnit;
   calibrationPoints: Point[];
+  /** The key to the marshal zones is shown above the scale bar. */
+  zoneKey?: boolean;
   /** Width of a text in a font, px. */
   measure(text: string, font: LabelFont): number;
 }
@@ -230,13 +232,15 @@ function handleTips(input: CanvasLabelInput, add: Add, square: (p: Point, half: 
   if (s.kind === "jump") tip("move", h.move, "Move along the track");
 }
 
-/** The buttons, the scale bar and the speed legend drawn over the canvas: no label under them. */
-function overlayObstacles({ width, height, overlay }: CanvasLabelInput): Box[] {
+/** The buttons, the scale bar, the speed legend and the zone key drawn over the canvas: no label under them. */
+function overlayObstacles(input: CanvasLabelInput): Box[] {
+  const { width, height, overlay } = input;
   const out: Box[] = [
     { x: width - 140, y: 0, width: 140, height: 46 },
     { x: 0, y: height - 50, width: 150, height: 50 },
   ];
   if (overlay) out.push({ x: width - 180, y: height - 100, width: 180, height: 100 });
+  if (input.zoneKey) out.push({ x: 0, y: height - 110, width: 240, height: 60 });
   return out;
 }
 
