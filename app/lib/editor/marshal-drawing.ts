@@ -3,12 +3,15 @@
  * hatch lines inside it (the same 45° hatching as the corner-risk sheet, so it reads in black and
  * white), and whether an answer still fits the drawing. Pure: no konva.
  */
-import type { LayoutDocument, PlanXY } from "~/analysis";
+import type { Hotspot, LayoutDocument, PlanXY } from "~/analysis";
 import { hatchSegments } from "~/lib/hatch";
+import { groupHotspots } from "~/lib/risk-sheet-rows";
 import { worldToScreen, type View } from "./view";
 
 /** Hatch lines this many px apart, whatever the zoom. */
 export const ZONE_HATCH_PX = 9;
+/** Half a hotspot triangle, px; hotspots closer than 2.5 of these share one mark. */
+export const HOTSPOT_MARK_PX = 7;
 
 export interface ZoneOnScreen {
   /** The outline as konva points [x1, y1, x2, y2, ...], px. */
@@ -46,4 +49,15 @@ export function marshalPlanFits(
     planDoc.trackWidth === doc.trackWidth &&
     planDoc.carClasses === doc.carClasses
   );
+}
+
+/** The hotspot marks on screen: close hotspots share one ("H3,H4"), at the first one's spot, px. */
+export function hotspotMarks(
+  hotspots: readonly Pick<Hotspot, "id" | "x" | "y">[],
+  view: View,
+): { ids: string[]; x: number; y: number }[] {
+  return groupHotspots(hotspots, (HOTSPOT_MARK_PX * 2.5) / view.scale).map((g) => ({
+    ids: g.ids,
+    ...worldToScreen(view, g),
+  }));
 }

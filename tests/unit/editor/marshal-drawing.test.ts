@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { marshalPlanFits, zoneOnScreen } from "~/lib/editor/marshal-drawing";
+import { hotspotMarks, marshalPlanFits, zoneOnScreen } from "~/lib/editor/marshal-drawing";
 
 // A 10 m square zone, the view 4 px per m with the plan origin at (100, 200) px (Y up on the plan).
 const square: [number, number][] = [
@@ -51,5 +51,22 @@ describe("whether a marshal plan still fits the drawing", () => {
     expect(marshalPlanFits(doc, { ...doc, trackWidth: 5 })).toBe(false);
     expect(marshalPlanFits(doc, { ...doc, carClasses: ["a"] })).toBe(false);
     expect(marshalPlanFits(null, doc)).toBe(false);
+  });
+});
+
+describe("the hotspot marks on the plan canvas", () => {
+  const spots = [
+    { id: "H1", x: 0, y: 0 },
+    { id: "H2", x: 2, y: 0 },
+    { id: "H3", x: 20, y: 0 },
+  ];
+  it("puts each in screen space, and close ones share a mark at the zoom shown", () => {
+    // 4 px per m: H1 and H2 are 8 px apart, under the 17.5 px a mark needs
+    expect(hotspotMarks(spots, view)).toEqual([
+      { ids: ["H1", "H2"], x: 100, y: 200 },
+      { ids: ["H3"], x: 180, y: 200 },
+    ]);
+    // zoomed in to 20 px per m they stand apart
+    expect(hotspotMarks(spots, { ...view, scale: 20 }).map((g) => g.ids)).toEqual([["H1"], ["H2"], ["H3"]]);
   });
 });

@@ -38,10 +38,10 @@ export const LabelLayerContent = memo(function LabelLayerContent({
   editable,
   units,
   calibrationPoints,
-  zoneKey,
+  marshal,
 }: Omit<CanvasLabelInput, "measure">) {
   const placed = useMemo(() => {
-    const input = { doc, sections, view, width, height, overlay, selectedSection, editable, units, zoneKey };
+    const input = { doc, sections, view, width, height, overlay, selectedSection, editable, units, marshal };
     const { labels, obstacles } = canvasLabels({ ...input, calibrationPoints, measure });
     const out = placeLabels(labels, { bounds: { x: 0, y: 0, width, height }, obstacles, gap: 1 });
     const byId = new Map(labels.map((l) => [l.id, l]));
@@ -57,7 +57,7 @@ export const LabelLayerContent = memo(function LabelLayerContent({
     editable,
     units,
     calibrationPoints,
-    zoneKey,
+    marshal,
   ]);
   return (
     <>

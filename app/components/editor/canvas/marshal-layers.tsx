@@ -3,20 +3,18 @@
  * the track (never listening; redrawn only when the zones, their fading or the view change, never
  * while an unrelated layer is dragged), each a konva shape named "marshal-zone": a pale fill, 45°
  * hatching and a dashed outline, so it reads in black and white as on the corner-risk sheet; and
- * the hotspots as numbered triangles over the track (shapes named "marshal-hotspot").
+ * the hotspots as triangles over the track (shapes named "marshal-hotspot"; their numbers are
+ * labels of the label layer).
  */
 import { memo, useMemo } from "react";
 import { Layer, Shape } from "react-konva";
-import { groupHotspots } from "~/lib/risk-sheet-rows";
-import { zoneOnScreen } from "~/lib/editor/marshal-drawing";
-import { worldToScreen, type View } from "~/lib/editor/view";
+import { HOTSPOT_MARK_PX as MARK, hotspotMarks, zoneOnScreen } from "~/lib/editor/marshal-drawing";
+import type { View } from "~/lib/editor/view";
 import type { CanvasMarshal } from "../canvas-types";
 import { PLAN } from "../colours";
 
 /** Opacity of zones and hotspots while a newer drawing is being checked. */
 const FADED = 0.35;
-/** Half a hotspot triangle, px; hotspots closer than 2.5 of these share one mark. */
-const MARK = 7;
 
 export const MarshalZonesLayer = memo(function MarshalZonesLayer({
   marshal,
@@ -71,7 +69,7 @@ export const MarshalZonesLayer = memo(function MarshalZonesLayer({
   );
 });
 
-/** The hotspots as white triangles outlined in ink, numbered beside (one mark for close ones). */
+/** The hotspots as white triangles outlined in ink (one mark for close ones). */
 export const HotspotMarks = memo(function HotspotMarks({
   marshal,
   view,
@@ -80,14 +78,7 @@ export const HotspotMarks = memo(function HotspotMarks({
   view: View;
 }) {
   const hotspots = marshal?.hotspots;
-  const groups = useMemo(
-    () =>
-      groupHotspots(hotspots ?? [], (MARK * 2.5) / view.scale).map((g) => ({
-        ...g,
-        at: worldToScreen(view, g),
-      })),
-    [hotspots, view],
-  );
+  const groups = useMemo(() => hotspotMarks(hotspots ?? [], view), [hotspots, view]);
   return (
     <>
       {groups.map((g) => (
@@ -99,7 +90,7 @@ export const HotspotMarks = memo(function HotspotMarks({
           opacity={marshal?.stale ? FADED : 1}
           sceneFunc={(context) => {
             const ctx = context._context;
-            const { x, y } = g.at;
+            const { x, y } = g;
             ctx.beginPath();
             ctx.moveTo(x, y - MARK);
             ctx.lineTo(x + MARK, y + MARK * 0.75);
@@ -110,14 +101,6 @@ export const HotspotMarks = memo(function HotspotMarks({
             ctx.strokeStyle = PLAN.text;
             ctx.lineWidth = 1.5;
             ctx.stroke();
-            ctx.font = "600 10px Inter, sans-serif";
-            ctx.textBaseline = "middle";
-            ctx.lineWidth = 3;
-            ctx.strokeStyle = PLAN.paper;
-            const text = g.ids.join(",");
-            ctx.strokeText(text, x + MARK + 2, y);
-            ctx.fillStyle = PLAN.text;
-            ctx.fillText(text, x + MARK + 2, y);
           }}
         />
       ))}

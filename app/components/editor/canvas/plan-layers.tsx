@@ -153,7 +153,7 @@ export function MarkerLayer({
         editable={editable}
         units={props.units}
         calibrationPoints={props.calibrationPoints}
-        zoneKey={Boolean(props.marshal)}
+        marshal={props.marshal ?? null}
       />
     </Layer>
   );
