@@ -11,7 +11,7 @@ import { SectionPanel } from "./section-panel";
 import { SectionsList } from "./sections-list";
 import { SitePanel } from "./site-panel";
 import type { useAnalysis, Skill } from "./use-analysis";
-import type { MarshalPlanState } from "./use-marshal-plan";
+import type { useMarshalOnPlan } from "./use-marshal-plan";
 import type { EditorCommands, EditorTools } from "./use-editor-commands";
 import type { EditorDocument } from "./use-editor-document";
 
@@ -29,7 +29,7 @@ interface Props {
   commands: EditorCommands;
   analysis: ReturnType<typeof useAnalysis>;
   /** The marshal plan (asked by the editor, drawn on the plan too) and the zones' tick box. */
-  marshal: { state: MarshalPlanState; showZones: boolean; setShowZones(show: boolean): void };
+  marshal: ReturnType<typeof useMarshalOnPlan>;
   choice: AnalysisChoice;
 }
 

@@ -7,7 +7,6 @@ import { useMemo, useState } from "react";
 import { resolveSections, sampleCentreLine, type LayoutDocument } from "~/analysis";
 import { photoUrl } from "~/components/drawing/drawing-title";
 import { isDirty } from "~/lib/editor/editor-state";
-import { marshalPlanFits } from "~/lib/editor/marshal-drawing";
 import { canRedo, canUndo } from "~/lib/editor/history";
 import { CloseLoopProposal } from "./close-loop-proposal";
 import { ClosureBar } from "./closure-bar";
@@ -20,7 +19,7 @@ import { FieldProblemsScope, useFieldProblemList } from "./field-problems";
 import { LazyDrawingCanvas } from "./lazy-drawing-canvas";
 import { useAnalysis, type Skill } from "./use-analysis";
 import { useDraftBackup } from "./use-draft-backup";
-import { useMarshalPlan } from "./use-marshal-plan";
+import { useMarshalOnPlan } from "./use-marshal-plan";
 import { useEditorCommands, useEditorShortcuts, useEditorTools } from "./use-editor-commands";
 import { useEditorDocument } from "./use-editor-document";
 import { LeaveDialog, useLeaveGuard } from "./use-leave-guard";
@@ -42,8 +41,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
   const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
   const [skill, setSkill] = useState<Skill>("club");
   const analysis = useAnalysis(doc, classId, skill, layout.id);
-  const marshal = useMarshalPlan(doc, layout.id);
-  const [showZones, setShowZones] = useState(true);
+  const marshal = useMarshalOnPlan(doc, layout.id);
   const dirty = isDirty(state);
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);
@@ -71,17 +69,6 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
     analysis.overlayDoc.sections === doc.sections &&
     analysis.overlayDoc.start === doc.start &&
     analysis.overlayDoc.trackWidth === doc.trackWidth;
-  // The same for the marshal zones: hidden after a change of the track, faded after any other change.
-  const zonesFit = marshalPlanFits(marshal.planDoc, doc);
-  const marshalPlan = marshal.plan;
-  const marshalStale = marshal.stale;
-  const canvasMarshal = useMemo(
-    () =>
-      showZones && zonesFit && marshalPlan
-        ? { zones: marshalPlan.zones, hotspots: marshalPlan.hotspots, stale: marshalStale }
-        : null,
-    [showZones, zonesFit, marshalPlan, marshalStale],
-  );
 
   return (
     <FieldProblemsScope registry={fields.registry}>
@@ -163,7 +150,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
               overlay={overlayFits ? analysis.overlay : null}
               overlayStale={analysis.overlayDoc !== doc}
               ghost={ghost}
-              marshal={canvasMarshal}
+              marshal={marshal.canvas}
               photoUrl={photoUrl(doc.background)}
               fitRequest={tools.fitRequest}
               calibrationPoints={tools.calibrationPoints}
@@ -179,7 +166,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
             tools={tools}
             commands={commands}
             analysis={analysis}
-            marshal={{ state: marshal, showZones, setShowZones }}
+            marshal={marshal}
             choice={{ classId, skill, setClassId, setSkill }}
           />
         </div>
