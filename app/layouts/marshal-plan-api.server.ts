@@ -1,7 +1,7 @@
 /**
  * The editor's marshal plan (decision 0714): a director's draft document analysed with the club's
  * guidance (through the pool and its memo), then the engine's marshal plan for every class of the
- * document with the club's reach and heat size: each point's warnings with what to do, the zones,
+ * document with the club's reach and heat size: each point's warnings with what to do, the zones, the hotspots,
  * and on request a suggested set of points. Nothing is saved.
  */
 import { marshalPlan, parseLayoutDocument } from "~/analysis";
@@ -48,6 +48,14 @@ export async function editorMarshalPlan(request: Request, layoutId: string | und
       settings: { reach: plan.settings.reach, heatSize: plan.settings.heatSize },
       points: plan.points.map((p) => ({ id: p.id, x: p.x, y: p.y, warnings: p.warnings })),
       zones: plan.zones.map((z) => ({ id: z.id, kind: z.kind, title: z.title, polygon: z.polygon })),
+      hotspots: plan.hotspots.map((h) => ({
+        id: h.id,
+        kind: h.kind,
+        score: h.score,
+        reason: h.reason,
+        x: h.x,
+        y: h.y,
+      })),
       suggested: plan.suggested
         ? {
             asked: plan.suggested.asked,

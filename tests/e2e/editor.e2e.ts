@@ -130,7 +130,7 @@ describe("layout editor", () => {
           Konva: { stages: { getLayers(): { getChildren(): { scaleX(): number }[] }[] }[] };
         }
       ).Konva.stages[0];
-      return stage.getLayers()[1].getChildren()[0].scaleX();
+      return stage.getLayers()[2].getChildren()[0].scaleX(); // 0 backdrop, 1 marshal zones, 2 track
     });
     // the back straight runs towards -X on screen (heading 180 deg)
     await drag(page, end, { x: end.x + 4 * scale, y: end.y + 10 });
@@ -461,19 +461,29 @@ describe("layout editor", () => {
   });
 
   it("drags smoothly on a 60-section layout (frame times printed)", async () => {
-    const doc = serpentine(60);
+    // one marshal point, so the marshal zones are drawn under the track while it is dragged
+    const doc = { ...serpentine(60), marshalPoints: [{ x: -6, y: -6 }] };
     const id = await createLayout(`Sixty sections ${Date.now()}`, doc);
     const page = await browser.newPage();
     await login(page, demoAccount("director"));
     await openEditor(page, id);
     expect(await sectionList(page).count()).toBe(60);
+    await page.waitForFunction(
+      () =>
+        (window as unknown as { Konva: { stages: { find(s: string): unknown[] }[] } }).Konva.stages[0].find(
+          ".marshal-zone",
+        ).length > 0,
+      undefined,
+      { timeout: 30_000 },
+    );
     await sectionList(page).first().click(); // the first straight: every later section moves with it
     const end = await nodePosition(page, "handle-end");
-    // Time each layer's redraw (0 grid and photo, 1 track, 2 analysis, 3 handles and markers).
+    // Time each layer's redraw (0 grid and photo, 1 marshal zones, 2 track, 3 analysis and
+    // hotspots, 4 handles and markers).
     await page.evaluate(() => {
       type Layer = { drawScene(...a: unknown[]): unknown; getStage(): { getLayers(): unknown[] } };
       const w = window as unknown as { Konva: { Layer: { prototype: Layer } }; draws_: number[][] };
-      w.draws_ = [[], [], [], []];
+      w.draws_ = [[], [], [], [], []];
       const proto = w.Konva.Layer.prototype;
       const original = proto.drawScene;
       proto.drawScene = function (this: Layer, ...a: unknown[]) {
@@ -513,14 +523,16 @@ describe("layout editor", () => {
       `[editor e2e] 60-section drag over ${wall} ms: ${frames.length} frames, frame time ${stats(frames)}`,
     );
     console.log(
-      `[editor e2e] track layer redrawn ${draws[1].length} times: ${stats(draws[1])}; handle layer ${draws[3].length} times: ${stats(draws[3])}; grid and photo layer ${draws[0].length} times, analysis layer ${draws[2].length} times`,
+      `[editor e2e] track layer redrawn ${draws[2].length} times: ${stats(draws[2])}; handle layer ${draws[4].length} times: ${stats(draws[4])}; grid and photo layer ${draws[0].length} times, marshal zones layer ${draws[1].length} times, analysis layer ${draws[3].length} times`,
     );
     expect(frames.length).toBeGreaterThan(10);
     // only what changed is redrawn: the track and the handles every move; the grid and photo
-    // never; the analysis once or twice (its line fades when the drawing moves on)
-    expect(draws[1].length).toBeGreaterThan(5);
+    // never; the marshal zones at most twice (faded, then hidden or shown); the analysis once or
+    // twice (its line fades when the drawing moves on)
+    expect(draws[2].length).toBeGreaterThan(5);
     expect(draws[0].length).toBe(0);
-    expect(draws[2].length).toBeLessThanOrEqual(2);
+    expect(draws[1].length).toBeLessThanOrEqual(2);
+    expect(draws[3].length).toBeLessThanOrEqual(2);
     const text = (await sectionList(page).first().textContent()) ?? "";
     expect(Number(/Straight ([\d.]+) m/.exec(text)![1])).toBeGreaterThan(10);
     await screenshot(page, "27-editor-sixty-sections");

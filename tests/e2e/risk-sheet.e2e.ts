@@ -86,6 +86,56 @@ describe("corner-risk sheet in the browser", () => {
     const warnings = page.getByRole("list", { name: "Marshal point warnings" });
     await warnings.getByText(/M2 · Inside a zone/).waitFor();
     expect(await warnings.getByRole("button", { name: "Move M2 to the nearby safe spot" }).count()).toBe(1);
+    // the zones are drawn hatched under the track, the hotspots over it, with their key
+    const count = (name: string) =>
+      page.evaluate(
+        (n) =>
+          (window as unknown as { Konva: { stages: { find(s: string): unknown[] }[] } }).Konva.stages[0].find(
+            n,
+          ).length,
+        name,
+      );
+    const zonesTick = page.getByRole("checkbox", { name: /Show marshal zones/ });
+    expect(await zonesTick.isChecked()).toBe(true);
+    await page.waitForFunction(
+      () =>
+        (window as unknown as { Konva: { stages: { find(s: string): unknown[] }[] } }).Konva.stages[0].find(
+          ".marshal-zone",
+        ).length > 0,
+    );
+    const zones = await count(".marshal-zone");
+    expect(zones).toBeGreaterThan(0);
+    expect(await count(".marshal-hotspot")).toBeGreaterThan(0);
+    await page.getByTestId("zone-key").getByText("Overshoot and run-off zones").waitFor();
+    const zonesLayerDrawn = await page.evaluate(() => {
+      type L = { name(): string; getParent(): unknown; isVisible(): boolean; getChildren(): unknown[] };
+      const stage = (window as unknown as { Konva: { stages: { getLayers(): L[] }[] } }).Konva.stages[0];
+      const layers = stage.getLayers();
+      const zonesAt = layers.findIndex((l) => l.name() === "marshal-zones-layer");
+      return { zonesAt, children: layers[zonesAt]?.getChildren().length ?? 0 };
+    });
+    // under the track: the layer right after the grid and photo
+    expect(zonesLayerDrawn).toEqual({ zonesAt: 1, children: zones });
+    await page.getByTestId("plan-canvas").screenshot({
+      path: `${SCREENSHOT_DIR}/risk-sheet-05-editor-zones.png`,
+    });
+    await zonesTick.uncheck();
+    await page.waitForFunction(
+      () =>
+        (window as unknown as { Konva: { stages: { find(s: string): unknown[] }[] } }).Konva.stages[0].find(
+          ".marshal-zone",
+        ).length === 0,
+    );
+    expect(await count(".marshal-hotspot")).toBe(0);
+    expect(await page.getByTestId("zone-key").count()).toBe(0);
+    await zonesTick.check();
+    await page.waitForFunction(
+      (n) =>
+        (window as unknown as { Konva: { stages: { find(s: string): unknown[] }[] } }).Konva.stages[0].find(
+          ".marshal-zone",
+        ).length === n,
+      zones,
+    );
     await page.getByRole("button", { name: "Suggest marshal points" }).click();
     await page.getByText(/^10 suggested points placed/).waitFor();
     await page

@@ -38,6 +38,8 @@ describe("the editor's marshal plan", () => {
     expect(plan.points[1].warnings.map((w) => w.kind)).toContain("too-far");
     for (const w of plan.points.flatMap((p) => p.warnings)) expect(w.action.length).toBeGreaterThan(10);
     expect(plan.zones.length).toBeGreaterThan(0);
+    expect(plan.hotspots.length).toBeGreaterThan(0);
+    for (const h of plan.hotspots) expect(Number.isFinite(h.x) && Number.isFinite(h.y)).toBe(true);
     expect(plan.suggested).toBeNull();
   });
 

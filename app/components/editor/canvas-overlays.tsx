@@ -1,9 +1,11 @@
 /**
- * The plan's DOM overlays (no konva): the scale bar, the speed legend and the zoom buttons.
+ * The plan's DOM overlays (no konva): the scale bar, the speed legend, the key to the marshal
+ * zones and hotspots, and the zoom buttons.
  */
 import { CAR_PRESETS, type AnalysisOverlay } from "~/analysis";
 import { binStyle, legendTicks, SPEED_BINS } from "~/lib/editor/speed-scale";
 import { niceStep, type LengthUnit } from "~/lib/editor/units";
+import { PLAN } from "./colours";
 
 /** A bar of a round length (at least 60 px) with its length written on it. */
 export function ScaleBar({ scale, units }: { scale: number; units: LengthUnit }) {
@@ -60,6 +62,50 @@ export function SpeedLegend({ overlay, stale }: { overlay: AnalysisOverlay; stal
       <p className="tabular-nums text-ink-500">
         m/s · {(min * 3.6).toFixed(0)} to {(max * 3.6).toFixed(0)} km/h · wider is faster
       </p>
+    </figure>
+  );
+}
+
+/** The key to the marshal zones and hotspots, above the scale bar (its hatching is the canvas's). */
+export function ZoneKey({ stale, hotspots }: { stale: boolean; hotspots: boolean }) {
+  return (
+    <figure
+      className={`pointer-events-none absolute bottom-14 left-2 rounded bg-white/90 px-2 py-1 text-xs text-ink-700 shadow-sm ${stale ? "opacity-60" : ""}`}
+      data-testid="zone-key"
+    >
+      <figcaption className="flex items-center gap-1.5">
+        <svg width="18" height="12" aria-hidden="true">
+          <defs>
+            <pattern
+              id="zone-key-hatch"
+              patternUnits="userSpaceOnUse"
+              width="5"
+              height="5"
+              patternTransform="rotate(45)"
+            >
+              <line x1="0" y1="0" x2="0" y2="5" stroke={PLAN.zone} strokeWidth="1.2" />
+            </pattern>
+          </defs>
+          <rect
+            x="1"
+            y="1"
+            width="16"
+            height="10"
+            fill="url(#zone-key-hatch)"
+            stroke={PLAN.zone}
+            strokeDasharray="3 2"
+          />
+        </svg>
+        Overshoot and run-off zones
+      </figcaption>
+      {hotspots ? (
+        <p className="flex items-center gap-1.5">
+          <svg width="18" height="12" aria-hidden="true">
+            <path d="M9 1 L15 11 L3 11 Z" fill="#ffffff" stroke={PLAN.text} strokeWidth="1.3" />
+          </svg>
+          Hotspots (H1, H2…): spots to watch
+        </p>
+      ) : null}
     </figure>
   );
 }

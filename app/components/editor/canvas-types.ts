@@ -3,6 +3,7 @@
  * panels can use the types without loading konva (which only the canvas chunk imports).
  */
 import type { CentreLine, ResolvedSection, AnalysisOverlay, LayoutDocument } from "~/analysis";
+import type { EditorMarshalPlan } from "~/lib/editor/marshal-plan-types";
 import type { Point } from "~/lib/editor/drag-maths";
 import type { Selection } from "~/lib/editor/editor-state";
 import type { SnapSettings } from "~/lib/editor/snap";
@@ -13,6 +14,13 @@ import type { LengthUnit } from "~/lib/editor/units";
  * add a boundary corner, place the driver stand, pick a calibration point or move the photo.
  */
 export type CanvasMode = "select" | "marshal" | "boundary" | "stand" | "calibrate" | "move-photo";
+
+/** The marshal plan's zones and hotspots to draw (plan m); `stale` while a newer drawing is checked. */
+export interface CanvasMarshal {
+  zones: EditorMarshalPlan["zones"];
+  hotspots: EditorMarshalPlan["hotspots"];
+  stale: boolean;
+}
 
 export interface DrawingCanvasProps {
   doc: LayoutDocument;
@@ -29,6 +37,8 @@ export interface DrawingCanvasProps {
   overlayStale: boolean;
   /** The centre line "Close the loop" proposes, drawn dashed over the track until applied or dismissed. */
   ghost?: CentreLine | null;
+  /** Zones under the track and hotspots over it; null or absent draws none. */
+  marshal?: CanvasMarshal | null;
   photoUrl: string | null;
   /** Increase to ask the canvas to fit the layout into view. */
   fitRequest: number;

@@ -17,6 +17,9 @@ export const PLAN = {
   boundary: "#2d3846",
   hidden: "#2d3846",
   conflict: "#a3261b",
+  /** Overshoot and run-off zones: hatch and dashed outline (the corner-risk sheet's), pale fill. */
+  zone: "#a3261b",
+  zoneFill: "rgba(163, 38, 27, 0.08)",
   verdict: { "set-up": "#1f5c4c", straight: "#2d3846", "cannot-clear": "#a3261b" },
   text: "#141b24",
 } as const;

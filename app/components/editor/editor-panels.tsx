@@ -11,6 +11,7 @@ import { SectionPanel } from "./section-panel";
 import { SectionsList } from "./sections-list";
 import { SitePanel } from "./site-panel";
 import type { useAnalysis, Skill } from "./use-analysis";
+import type { useMarshalOnPlan } from "./use-marshal-plan";
 import type { EditorCommands, EditorTools } from "./use-editor-commands";
 import type { EditorDocument } from "./use-editor-document";
 
@@ -27,11 +28,13 @@ interface Props {
   tools: EditorTools;
   commands: EditorCommands;
   analysis: ReturnType<typeof useAnalysis>;
+  /** The marshal plan (asked by the editor, drawn on the plan too) and the zones' tick box. */
+  marshal: ReturnType<typeof useMarshalOnPlan>;
   choice: AnalysisChoice;
 }
 
 /** The editor's side panels: the selected section, the live analysis, the site, the photo, help. */
-export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }: Props) {
+export function EditorPanels({ layoutId, ed, tools, commands, analysis, marshal, choice }: Props) {
   const { doc, sections, selected, state, change, select, endGesture } = ed;
   const selectSection = (index: number) => select({ kind: "section", index });
   /** A changed section; a jump's new size is given or taken by the straight chosen to keep the loop closed. */
@@ -111,7 +114,13 @@ export function EditorPanels({ layoutId, ed, tools, commands, analysis, choice }
         />
       </Panel>
       <Panel title="Marshal points: warnings and suggestions" open={state.selection?.kind === "marshal"}>
-        <MarshalPlanPanel layoutId={layoutId} doc={doc} onChange={change} />
+        <MarshalPlanPanel
+          doc={doc}
+          marshal={marshal.state}
+          showZones={marshal.showZones}
+          onShowZones={marshal.setShowZones}
+          onChange={change}
+        />
       </Panel>
       <Panel title="Site photo" open={tools.mode === "calibrate" || state.selection?.kind === "photo"}>
         <PhotoPanel

@@ -19,6 +19,7 @@ import { FieldProblemsScope, useFieldProblemList } from "./field-problems";
 import { LazyDrawingCanvas } from "./lazy-drawing-canvas";
 import { useAnalysis, type Skill } from "./use-analysis";
 import { useDraftBackup } from "./use-draft-backup";
+import { useMarshalOnPlan } from "./use-marshal-plan";
 import { useEditorCommands, useEditorShortcuts, useEditorTools } from "./use-editor-commands";
 import { useEditorDocument } from "./use-editor-document";
 import { LeaveDialog, useLeaveGuard } from "./use-leave-guard";
@@ -40,6 +41,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
   const [classId, setClassId] = useState<string | undefined>(doc.carClasses[0]);
   const [skill, setSkill] = useState<Skill>("club");
   const analysis = useAnalysis(doc, classId, skill, layout.id);
+  const marshal = useMarshalOnPlan(doc, layout.id);
   const dirty = isDirty(state);
   const guard = useLeaveGuard(dirty);
   const backup = useDraftBackup(layout.id, doc, dirty, state.baseVersion, document);
@@ -148,6 +150,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
               overlay={overlayFits ? analysis.overlay : null}
               overlayStale={analysis.overlayDoc !== doc}
               ghost={ghost}
+              marshal={marshal.canvas}
               photoUrl={photoUrl(doc.background)}
               fitRequest={tools.fitRequest}
               calibrationPoints={tools.calibrationPoints}
@@ -163,6 +166,7 @@ export function LayoutEditor({ club, layout, document, version, raceDay = null }
             tools={tools}
             commands={commands}
             analysis={analysis}
+            marshal={marshal}
             choice={{ classId, skill, setClassId, setSkill }}
           />
         </div>

@@ -2,7 +2,8 @@
  * The editor's marshal plan panel (directors only, as the editor is): each marshal point's
  * warnings with what to do and a button that moves it to the engine's nearby safe spot, and
  * "Suggest marshal points", which replaces the points with the engine's suggested set as one
- * undoable edit (Ctrl+Z brings the old points back); the points are then dragged as usual.
+ * undoable edit (Ctrl+Z brings the old points back); the points are then dragged as usual. The
+ * "Show marshal zones" tick box shows or hides the zones and hotspots on the plan.
  */
 import { useState } from "react";
 import { WARNING_KIND_WORDS, type LayoutDocument } from "~/analysis";
@@ -10,16 +11,18 @@ import { applySuggested } from "~/lib/editor/marshal-plan-types";
 import { moveMarshalPoint } from "~/lib/editor/site-ops";
 import type { Selection } from "~/lib/editor/editor-state";
 import { toolClass } from "./editor-toolbar";
-import { useMarshalPlan } from "./use-marshal-plan";
+import type { MarshalPlanState } from "./use-marshal-plan";
 
 type Props = {
-  layoutId: string;
   doc: LayoutDocument;
+  /** The editor's marshal plan (use-marshal-plan.ts). */
+  marshal: MarshalPlanState;
+  showZones: boolean;
+  onShowZones(show: boolean): void;
   onChange(doc: LayoutDocument, gesture?: string, selection?: Selection): void;
 };
 
-export function MarshalPlanPanel({ layoutId, doc, onChange }: Props) {
-  const marshal = useMarshalPlan(doc, layoutId);
+export function MarshalPlanPanel({ doc, marshal, showZones, onShowZones, onChange }: Props) {
   const [note, setNote] = useState<string | null>(null);
   const plan = marshal.plan;
   const warned = plan ? plan.points.filter((p) => p.warnings.length > 0) : [];
@@ -49,6 +52,20 @@ export function MarshalPlanPanel({ layoutId, doc, onChange }: Props) {
         Points inside an overshoot or run-off zone, on the track, or farther than the club's reach
         {plan ? ` (${plan.settings.reach} m)` : ""} from the track edge are named here with what to do.
       </p>
+      <label className="flex items-center gap-2">
+        <input
+          type="checkbox"
+          checked={showZones}
+          onChange={(e) => onShowZones(e.currentTarget.checked)}
+          data-testid="show-marshal-zones"
+        />
+        Show marshal zones
+        <span className="text-ink-500">
+          {doc.marshalPoints.length === 0
+            ? "(drawn once the layout has a marshal point)"
+            : "(hatched; hotspots as triangles)"}
+        </span>
+      </label>
       <button type="button" className={toolClass} onClick={onSuggest} disabled={marshal.busy}>
         {marshal.busy ? "Working out the points…" : "Suggest marshal points"}
       </button>

@@ -2,11 +2,14 @@
  * The marshal plan while editing (decision 0714): a moment after the drawing stops changing, the
  * draft goes to POST /api/layouts/:layoutId/marshal-plan for its points' warnings (only when it has
  * points); `suggest()` asks for a suggested set. A plain abortable fetch like use-analysis.ts:
- * a failed request leaves a message, never an error page.
+ * a failed request leaves a message, never an error page. `useMarshalOnPlan` adds what the plan
+ * canvas draws of it (the zones and hotspots) and the "Show marshal zones" tick box.
  */
-import { useCallback, useEffect, useState } from "react";
+import { useCallback, useEffect, useMemo, useState } from "react";
 import type { LayoutDocument } from "~/analysis";
+import { marshalPlanFits } from "~/lib/editor/marshal-drawing";
 import type { EditorMarshalPlan } from "~/lib/editor/marshal-plan-types";
+import type { CanvasMarshal } from "./canvas-types";
 
 const DELAY_MS = 700;
 
@@ -35,6 +38,8 @@ async function ask(
   }
   return body;
 }
+
+export type MarshalPlanState = ReturnType<typeof useMarshalPlan>;
 
 export function useMarshalPlan(doc: LayoutDocument, layoutId: string) {
   const [plan, setPlan] = useState<{ plan: EditorMarshalPlan; doc: LayoutDocument } | null>(null);
@@ -77,9 +82,28 @@ export function useMarshalPlan(doc: LayoutDocument, layoutId: string) {
 
   return {
     plan: hasPoints ? (plan?.plan ?? null) : null,
+    /** The drawing the plan was made for (its zones stand on that drawing's track). */
+    planDoc: hasPoints ? (plan?.doc ?? null) : null,
     stale: plan?.doc !== doc,
     message,
     busy,
     suggest,
   };
+}
+
+/**
+ * The marshal plan, the "Show marshal zones" tick box (on by default) and what the plan canvas
+ * draws: the zones and hotspots, faded while a newer change is checked, hidden after a change of
+ * the track (they would stand in the wrong place) or when the tick box is off.
+ */
+export function useMarshalOnPlan(doc: LayoutDocument, layoutId: string) {
+  const state = useMarshalPlan(doc, layoutId);
+  const [showZones, setShowZones] = useState(true);
+  const fits = marshalPlanFits(state.planDoc, doc);
+  const { plan, stale } = state;
+  const canvas = useMemo<CanvasMarshal | null>(
+    () => (showZones && fits && plan ? { zones: plan.zones, hotspots: plan.hotspots, stale } : null),
+    [showZones, fits, plan, stale],
+  );
+  return { state, showZones, setShowZones, canvas };
 }

@@ -1,4 +1,4 @@
-import type { MarshalWarning, MarshalZone, PlanXY } from "~/analysis";
+import type { Hotspot, MarshalWarning, MarshalZone, PlanXY } from "~/analysis";
 
 /** What POST /api/layouts/:layoutId/marshal-plan answers the editor (plan metres). */
 export interface EditorMarshalPlan {
@@ -6,6 +6,8 @@ export interface EditorMarshalPlan {
   /** The draft's marshal points in order ("M1", ...) with their warnings. */
   points: { id: string; x: number; y: number; warnings: MarshalWarning[] }[];
   zones: Pick<MarshalZone, "id" | "kind" | "title" | "polygon">[];
+  /** The spots to watch (H1.., score 1 to 5), m. */
+  hotspots: Pick<Hotspot, "id" | "kind" | "score" | "reason" | "x" | "y">[];
   /** The suggested set when asked for: as many points as the heat size, fewer when the ground has no room. */
   suggested: { asked: number; points: { x: number; y: number }[]; uncovered: string[] } | null;
 }

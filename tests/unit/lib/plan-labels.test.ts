@@ -120,6 +120,46 @@ describe("the plan labels of the demo layouts", () => {
     });
   }
 
+  it("the editor's hotspot numbers join the canvas's placer: apart from every label and mark, J and M numbers kept", () => {
+    const doc = DEMO_LAYOUTS[0];
+    const overlay = overlayOf(doc);
+    const sections = resolveSections(doc);
+    const width = 900;
+    const height = 560;
+    const view = fitView(layoutBounds(doc, sampleCentreLine(sections, 1)), width, height);
+    // A hotspot at every jump's lip: the worst crowding the editor can have.
+    const hotspots = overlay.jumps.map((j, k) => ({
+      id: `H${k + 1}`,
+      kind: "overshoot" as const,
+      score: 3,
+      reason: "",
+      x: j.lip[0],
+      y: j.lip[1],
+    }));
+    const { labels, obstacles } = canvasLabels({
+      doc,
+      sections,
+      view,
+      width,
+      height,
+      overlay,
+      selectedSection: null,
+      editable: true,
+      units: "m" as const,
+      calibrationPoints: [],
+      marshal: { zones: [], hotspots, stale: false },
+      measure: (text: string, font: { size: number }) => text.length * font.size * 0.6,
+    });
+    expect(labels.filter((l) => l.kind === "hotspot").length).toBeGreaterThan(0);
+    const { placed } = placeLabels(labels, { bounds: { x: 0, y: 0, width, height }, obstacles, gap: 1 });
+    expectApart(placed, { x: 0, y: 0, width, height });
+    for (const p of placed) for (const o of obstacles) expect(boxesOverlap(p, o)).toBe(false);
+    const ids = new Set(placed.map((p) => p.id));
+    for (const j of overlay.jumps) expect(ids.has(`jump-${j.sectionId}`)).toBe(true);
+    doc.marshalPoints.forEach((_, i) => expect(ids.has(`marshal-${i}`)).toBe(true));
+    expect([...ids].some((id) => id.startsWith("hotspot-"))).toBe(true);
+  });
+
   it("the corner-risk sheet's hotspot numbers join the same placer: none lands on a J or M number", () => {
     const doc = DEMO_LAYOUTS[0];
     const overlay = overlayOf(doc);

@@ -1,14 +1,16 @@
 /**
  * Every text label of the plan canvas, as requests to the one label placer (app/lib/label-placer.ts):
  * section numbers, the start, the driver stand, M and J numbers, the verdicts' words, the
- * analysis's notes (hidden stretches, lanes too close), the handles' readouts and the calibration
- * points; with the symbols and the buttons over the canvas as obstacles. Screen pixels, y down.
+ * analysis's notes (hidden stretches, lanes too close), the hotspot numbers, the handles' readouts
+ * and the calibration points; with the symbols and the buttons over the canvas as obstacles. Screen pixels, y down.
  */
 import { advancePose, type AnalysisOverlay, type LayoutDocument, type ResolvedSection } from "~/analysis";
 import { jumpMoveBlocker, sectionHandles, type Point } from "~/lib/editor/drag-maths";
+import { HOTSPOT_MARK_PX, hotspotMarks } from "~/lib/editor/marshal-drawing";
 import { formatLength, type LengthUnit } from "~/lib/editor/units";
 import { worldToScreen, type View } from "~/lib/editor/view";
 import type { Box, LabelPosition, LabelRequest } from "~/lib/label-placer";
+import type { CanvasMarshal } from "../canvas-types";
 import { PLAN } from "../colours";
 
 export type LabelKind =
@@ -20,6 +22,7 @@ export type LabelKind =
   | "verdict"
   | "hidden"
   | "conflict"
+  | "hotspot"
   | "tip"
   | "calibration";
 
@@ -50,6 +53,7 @@ const PRIORITY: Record<LabelKind, number> = {
   start: 80,
   stand: 70,
   conflict: 60,
+  hotspot: 58,
   hidden: 55,
   verdict: 50,
   section: 40,
@@ -69,6 +73,8 @@ export interface CanvasLabelInput {
   editable: boolean;
   units: LengthUnit;
   calibrationPoints: Point[];
+  /** The marshal zones and hotspots drawn (their key is shown above the scale bar), or null. */
+  marshal?: CanvasMarshal | null;
   /** Width of a text in a font, px. */
   measure(text: string, font: LabelFont): number;
 }
@@ -161,6 +167,13 @@ export function canvasLabels(input: CanvasLabelInput): { labels: CanvasLabel[]; 
       outline: PLAN.conflict,
     });
   });
+  if (input.marshal)
+    for (const g of hotspotMarks(input.marshal.hotspots, view)) {
+      square(g, HOTSPOT_MARK_PX);
+      add("hotspot", g.ids[0], g.ids.join(","), g, HOTSPOT_MARK_PX + 2, {
+        font: { size: 10, weight: "600" },
+      });
+    }
   sectionNumbers(input, add, halfWidth);
   if (input.editable) handleTips(input, add, square);
   input.calibrationPoints.forEach((p, k) =>
@@ -230,13 +243,15 @@ function handleTips(input: CanvasLabelInput, add: Add, square: (p: Point, half: 
   if (s.kind === "jump") tip("move", h.move, "Move along the track");
 }
 
-/** The buttons, the scale bar and the speed legend drawn over the canvas: no label under them. */
-function overlayObstacles({ width, height, overlay }: CanvasLabelInput): Box[] {
+/** The buttons, the scale bar, the speed legend and the zone key drawn over the canvas: no label under them. */
+function overlayObstacles(input: CanvasLabelInput): Box[] {
+  const { width, height, overlay } = input;
   const out: Box[] = [
     { x: width - 140, y: 0, width: 140, height: 46 },
     { x: 0, y: height - 50, width: 150, height: 50 },
   ];
   if (overlay) out.push({ x: width - 180, y: height - 100, width: 180, height: 100 });
+  if (input.marshal) out.push({ x: 0, y: height - 110, width: 240, height: 60 });
   return out;
 }
 

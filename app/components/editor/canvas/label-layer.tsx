@@ -38,14 +38,27 @@ export const LabelLayerContent = memo(function LabelLayerContent({
   editable,
   units,
   calibrationPoints,
+  marshal,
 }: Omit<CanvasLabelInput, "measure">) {
   const placed = useMemo(() => {
-    const input = { doc, sections, view, width, height, overlay, selectedSection, editable, units };
+    const input = { doc, sections, view, width, height, overlay, selectedSection, editable, units, marshal };
     const { labels, obstacles } = canvasLabels({ ...input, calibrationPoints, measure });
     const out = placeLabels(labels, { bounds: { x: 0, y: 0, width, height }, obstacles, gap: 1 });
     const byId = new Map(labels.map((l) => [l.id, l]));
     return out.placed.map((p) => ({ box: p, label: byId.get(p.id)! }));
-  }, [doc, sections, view, width, height, overlay, selectedSection, editable, units, calibrationPoints]);
+  }, [
+    doc,
+    sections,
+    view,
+    width,
+    height,
+    overlay,
+    selectedSection,
+    editable,
+    units,
+    calibrationPoints,
+    marshal,
+  ]);
   return (
     <>
       {placed.map(({ box, label }) => (

@@ -153,6 +153,7 @@ export function MarkerLayer({
         editable={editable}
         units={props.units}
         calibrationPoints={props.calibrationPoints}
+        marshal={props.marshal ?? null}
       />
     </Layer>
   );
