@@ -1,3 +1,4 @@
+import { AnalysisAlert } from "~/components/analysis/analysis-alert";
 import { Link } from "react-router";
 import { AnalysisPickers, type CarChoiceOption } from "~/components/analysis/analysis-pickers";
 import { jumpName } from "~/components/analysis/format";
@@ -87,11 +88,7 @@ export function JumpView({
             keep={d.version}
           />
         </div>
-        {d.problems.length ? (
-          <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-            {d.problems.join(" ")}
-          </p>
-        ) : null}
+        <AnalysisAlert text={d.problems.join(" ")} />
       </header>
       <section aria-labelledby="verdict-heading" className="rounded-lg border border-sand-200 bg-white p-4">
         <h2 id="verdict-heading" className="flex items-center gap-2 text-lg font-semibold">

@@ -1,3 +1,4 @@
+import { AnalysisAlert } from "~/components/analysis/analysis-alert";
 import { Link } from "react-router";
 import {
   skillPhrase,
@@ -77,11 +78,7 @@ export function LayoutAnalysisSection({
         </div>
         <AnalysisPickers key={`${d.car}-${d.skill}`} cars={d.cars} car={d.car} skill={d.skill} keep={keep} />
       </div>
-      {d.problems.length ? (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.problems.join(" ")}
-        </p>
-      ) : null}
+      <AnalysisAlert text={d.problems.join(" ")} />
       <Cautions compact />
       {d.result.ok ? (
         <section aria-labelledby="cards-heading" className="space-y-2 print:hidden">
@@ -100,9 +97,7 @@ export function LayoutAnalysisSection({
           )}
         </section>
       ) : (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.result.message}
-        </p>
+        <AnalysisAlert text={d.result.message} />
       )}
       {shared ? null : <ToolLinks data={d} query={query({})} />}
       {d.result.ok ? (
@@ -127,7 +122,7 @@ function Results({
 }) {
   const jumps = result.chosen.jumps;
   const numbers = jumpNumbers(jumps);
-  const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
+  const names = jumpNames(jumps);
   return (
     <>
       <AnalysisSummary analysis={result.summary} />
@@ -183,6 +178,11 @@ function Results({
 /** Jump numbers in lap order (J1, J2, ...) by section id, as on the plan. */
 export function jumpNumbers(jumps: readonly { sectionId: string }[]): Record<string, number> {
   return Object.fromEntries(jumps.map((j, i) => [j.sectionId, i + 1]));
+}
+
+/** Each jump's name for the plan's labels, by section id. */
+export function jumpNames(jumps: readonly Parameters<typeof jumpName>[0][]): Record<string, string> {
+  return Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
 }
 
 /** Links to the plan, the driver's sheet, the editor (directors), the layout file and the JSON. */

@@ -5,13 +5,17 @@
  * canvas, handles or status lines; the car and skill pickers are a GET form, so the page works
  * without JavaScript and prints as it reads (docs/decisions/0812-reader-plan-drawn-on-the-server.md).
  */
+import { AnalysisAlert } from "~/components/analysis/analysis-alert";
 import { Link } from "react-router";
 import { skillPhrase } from "~/analysis";
 import { AnalysisPickers } from "~/components/analysis/analysis-pickers";
-import { jumpName } from "~/components/analysis/format";
 import { JumpCards } from "~/components/analysis/jump-card";
 import { JumpsTable } from "~/components/analysis/jumps-table";
-import { jumpNumbers, type LayoutAnalysisData } from "~/components/analysis/layout-analysis-section";
+import {
+  jumpNames,
+  jumpNumbers,
+  type LayoutAnalysisData,
+} from "~/components/analysis/layout-analysis-section";
 import { Cautions } from "~/components/cautions";
 import { DrawingTitle } from "~/components/drawing/drawing-title";
 import { TrackDrawing } from "~/components/drawing/track-drawing";
@@ -60,18 +64,12 @@ export function DrawingViewer({ club, layout, isDirector, reading, analysis: d }
         </div>
       </header>
       <VersionBanner layoutId={layout.id} reading={reading} isDirector={isDirector} />
-      {d.problems.length ? (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.problems.join(" ")}
-        </p>
-      ) : null}
+      <AnalysisAlert text={d.problems.join(" ")} />
       <Cautions compact />
       {d.result.ok ? (
         <Plan data={d} result={d.result} name={layout.name} jumpHref={jumpHref} />
       ) : (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.result.message}
-        </p>
+        <AnalysisAlert text={d.result.message} />
       )}
     </article>
   );
@@ -90,7 +88,7 @@ function Plan({
 }) {
   const jumps = result.chosen.jumps;
   const numbers = jumpNumbers(jumps);
-  const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
+  const names = jumpNames(jumps);
   const marshals = d.document.marshalPoints;
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem] print:block">

@@ -4,12 +4,16 @@
  * with every column of the layout page's jumps table, and the cautions. On screen it carries the
  * car and skill pickers and a print button; on paper only the sheet (app/styles/print.css).
  */
+import { AnalysisAlert } from "~/components/analysis/analysis-alert";
 import { Link } from "react-router";
 import { skillPhrase } from "~/analysis";
 import { AnalysisPickers } from "~/components/analysis/analysis-pickers";
-import { jumpName } from "~/components/analysis/format";
 import { JumpsTable } from "~/components/analysis/jumps-table";
-import { jumpNumbers, type LayoutAnalysisData } from "~/components/analysis/layout-analysis-section";
+import {
+  jumpNames,
+  jumpNumbers,
+  type LayoutAnalysisData,
+} from "~/components/analysis/layout-analysis-section";
 import { Cautions } from "~/components/cautions";
 import { TrackDrawing } from "~/components/drawing/track-drawing";
 import type { VersionBannerReading } from "~/components/publishing/version-banner";
@@ -58,17 +62,11 @@ export function DriverSheet({ club, layout, reading, analysis: d }: DriverSheetP
         <p className="text-sm text-ink-500">Print this page from your browser (A4 portrait, one page).</p>
       </div>
       <Cautions compact />
-      {d.problems.length ? (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.problems.join(" ")}
-        </p>
-      ) : null}
+      <AnalysisAlert text={d.problems.join(" ")} />
       {d.result.ok ? (
         <Sheet data={d} result={d.result} name={layout.name} jumpHref={jumpHref} />
       ) : (
-        <p role="alert" className="rounded-md bg-danger-100 px-3 py-2 text-sm text-danger-700">
-          {d.result.message}
-        </p>
+        <AnalysisAlert text={d.result.message} />
       )}
     </article>
   );
@@ -87,7 +85,7 @@ function Sheet({
 }) {
   const jumps = result.chosen.jumps;
   const numbers = jumpNumbers(jumps);
-  const names = Object.fromEntries(jumps.map((j) => [j.sectionId, jumpName(j)]));
+  const names = jumpNames(jumps);
   return (
     <>
       <section aria-labelledby="sheet-jumps-heading" className="space-y-1">
